@@ -1,0 +1,54 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import { authRouter } from './auth/auth.routes';
+import type { AppContext } from './context';
+import { apiNotFound, errorMiddleware } from './lib/errors';
+import { apiRoutes } from './routes';
+
+/** Builds the Express app (no listen): the API under /api, then the web app with a deep-link fallback. */
+export function createApp(ctx: AppContext): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // react-native-web injects style tags; Metro's single bundle needs nothing else inline.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'", 'data:'],
+        },
+      },
+    }),
+  );
+  app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use('/api', express.json({ limit: '1mb' }));
+
+  app.get('/api/health', (_req, res) => {
+    res.json({ status: 'ok' });
+  });
+  app.use('/api/auth', authRouter(ctx));
+  for (const [prefix, build] of apiRoutes) app.use(`/api/${prefix}`, build(ctx));
+  app.use('/api', apiNotFound);
+
+  serveWebApp(app, ctx.config.webDir);
+  app.use(errorMiddleware(ctx.logger));
+  return app;
+}
+
+function serveWebApp(app: Express, webDir: string) {
+  const indexHtml = path.join(webDir, 'index.html');
+  app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+  // Deep links (/jobs/123) load the app, which routes on the client.
+  app.get('/{*splat}', (_req, res, next) => {
+    if (!existsSync(indexHtml)) {
+      res.status(503).type('text/plain').send('The web app has not been built yet: run npm start (or npm run build:web).');
+      return;
+    }
+    res.sendFile(indexHtml, (err) => err && next(err));
+  });
+}

@@ -1,0 +1,52 @@
+import type { RequestHandler } from 'express';
+import type { Role } from '../../shared/schemas/auth';
+import type { AppContext } from '../context';
+import { forbidden, unauthorized } from '../lib/errors';
+import { User } from '../users/user.entity';
+import { verifyToken } from './tokens';
+
+export interface AuthUser {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+}
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    user?: AuthUser;
+  }
+}
+
+/**
+ * Checks the bearer token and loads the user: a deactivated or deleted user is refused even with a
+ * valid token, and a role change takes effect at once (the role comes from the database).
+ */
+export function requireAuth(ctx: AppContext): RequestHandler {
+  const users = ctx.dataSource.getRepository(User);
+  return async (req, _res, next) => {
+    const header = req.headers.authorization ?? '';
+    const match = /^Bearer\s+(\S+)$/i.exec(header);
+    if (!match) throw unauthorized();
+    const claims = verifyToken(ctx.config.jwtSecret, match[1]);
+    const user = await users.findOneBy({ id: claims.userId });
+    if (!user || !user.active) throw unauthorized('This account is not active. Ask your office.');
+    req.user = { id: user.id, email: user.email, name: user.name, role: user.role };
+    next();
+  };
+}
+
+/** Allows only the listed roles (use after requireAuth). */
+export function requireRole(...roles: Role[]): RequestHandler {
+  return (req, _res, next) => {
+    if (!req.user) throw unauthorized();
+    if (!roles.includes(req.user.role)) throw forbidden(`This needs the ${roles.join(' or ')} role.`);
+    next();
+  };
+}
+
+/** The signed-in user; routes behind requireAuth call this instead of asserting. */
+export function currentUser(req: { user?: AuthUser }): AuthUser {
+  if (!req.user) throw unauthorized();
+  return req.user;
+}

@@ -1,0 +1,4 @@
+import { User } from '../users/user.entity';
+
+/** Every TypeORM entity the data source knows. Each module adds its own here. */
+export const entities = [User];

@@ -1,0 +1,59 @@
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { z } from 'zod';
+
+/** The one place that reads process.env: validated configuration for the server. */
+
+const EnvSchema = z.object({
+  PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+  DATABASE_PATH: z.string().min(1).default('data/tandem.sqlite'),
+  TANDEM_DATA_DIR: z.string().min(1).default('data'),
+  TANDEM_DEMO: z.enum(['0', '1']).default('0'),
+  TANDEM_JWT_SECRET: z.string().min(16).optional(),
+  TANDEM_WEB_DIR: z.string().min(1).default('dist'),
+  TANDEM_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  /** Sign-in attempts allowed per IP and per e-mail in the rate window. */
+  TANDEM_SIGNIN_LIMIT: z.coerce.number().int().min(1).default(10),
+});
+
+export interface AppConfig {
+  port: number;
+  databasePath: string;
+  dataDir: string;
+  demo: boolean;
+  jwtSecret: string;
+  webDir: string;
+  logLevel: z.infer<typeof EnvSchema>['TANDEM_LOG_LEVEL'];
+  signInLimit: number;
+}
+
+/** Reads the JWT secret from the data dir, creating it once; it is never committed. */
+function loadOrCreateSecret(dataDir: string): string {
+  const file = path.join(dataDir, 'jwt-secret');
+  if (existsSync(file)) return readFileSync(file, 'utf8').trim();
+  mkdirSync(dataDir, { recursive: true });
+  const secret = randomBytes(48).toString('hex');
+  writeFileSync(file, secret, { mode: 0o600 });
+  return secret;
+}
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const parsed = EnvSchema.safeParse(env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
+    throw new Error(`Invalid configuration: ${problems}`);
+  }
+  const e = parsed.data;
+  const dataDir = path.resolve(e.TANDEM_DATA_DIR);
+  return {
+    port: e.PORT,
+    databasePath: e.DATABASE_PATH === ':memory:' ? e.DATABASE_PATH : path.resolve(e.DATABASE_PATH),
+    dataDir,
+    demo: e.TANDEM_DEMO === '1',
+    jwtSecret: e.TANDEM_JWT_SECRET ?? loadOrCreateSecret(dataDir),
+    webDir: path.resolve(e.TANDEM_WEB_DIR),
+    logLevel: e.TANDEM_LOG_LEVEL,
+    signInLimit: e.TANDEM_SIGNIN_LIMIT,
+  };
+}

@@ -1,0 +1,22 @@
+import type { RuleSettings } from './types';
+
+/**
+ * Shop-tunable defaults. An admin's overrides (stored by the server) are merged over these.
+ * 350–450 CFM/ton: common practice (no source) around the 400 CFM/ton design figure.
+ * 10 °F subcooling when the unit gives none: common practice (no source).
+ * 50 ft / 20 ft line-length and lift limits when a unit gives none: common practice (no source),
+ * conservative figures typical of residential installation instructions.
+ */
+export const DEFAULT_RULE_SETTINGS: RuleSettings = {
+  cfmPerTonMin: 350,
+  cfmPerTonMax: 450,
+  defaultTargetSubcoolingF: 10,
+  defaultMaxLineLengthFt: 50,
+  defaultMaxLiftFt: 20,
+  rebateTier: undefined,
+};
+
+/** Merges stored overrides over the defaults, ignoring unknown keys. */
+export function resolveSettings(overrides: Partial<RuleSettings> | undefined): RuleSettings {
+  return { ...DEFAULT_RULE_SETTINGS, ...(overrides ?? {}) };
+}

@@ -1,0 +1,102 @@
+import { z } from 'zod';
+
+/**
+ * Field helpers shared by catalog CSV rows, nameplate specs and API bodies.
+ * Each accepts the typed value (JSON) or its text form (a CSV cell), so one schema serves both.
+ */
+
+export const REFRIGERANT_IDS = ['R-22', 'R-410A', 'R-32', 'R-454B', 'R-407C'] as const;
+export type RefrigerantId = (typeof REFRIGERANT_IDS)[number];
+
+/** Normalises "r410a", "410A", "R-410A" to the trade spelling "R-410A"; other input is returned unchanged. */
+export function normalizeRefrigerantName(value: unknown): unknown {
+  if (typeof value !== 'string') return value;
+  const compact = value.trim().toUpperCase().replace(/[\s-]/g, '').replace(/^R/, '');
+  const match = REFRIGERANT_IDS.find((id) => id.slice(2) === compact);
+  return match ?? value.trim();
+}
+
+/** Normalised model key for matching: upper case with spaces, dashes, dots and slashes removed. */
+export function normalizeModel(model: string): string {
+  return model.toUpperCase().replace(/[\s\-./]/g, '');
+}
+
+const TRUE_WORDS = new Set(['yes', 'y', 'true', '1']);
+const FALSE_WORDS = new Set(['no', 'n', 'false', '0']);
+
+/** Empty strings (blank CSV cells) become undefined so optional fields stay optional. */
+export function blankToUndefined(value: unknown): unknown {
+  if (value === null) return undefined;
+  if (typeof value === 'string' && value.trim() === '') return undefined;
+  return value;
+}
+
+function toBoolean(value: unknown): unknown {
+  const v = blankToUndefined(value);
+  if (typeof v !== 'string') return v;
+  const word = v.trim().toLowerCase();
+  if (TRUE_WORDS.has(word)) return true;
+  if (FALSE_WORDS.has(word)) return false;
+  return v;
+}
+
+function toNumber(value: unknown): unknown {
+  const v = blankToUndefined(value);
+  if (typeof v !== 'string') return v;
+  const n = Number(v.trim().replace(/,/g, ''));
+  return Number.isFinite(n) ? n : v;
+}
+
+function toList(value: unknown): unknown {
+  const v = blankToUndefined(value);
+  if (typeof v !== 'string') return v;
+  return v
+    .split(';')
+    .map((s) => s.trim())
+    .filter((s) => s !== '');
+}
+
+export const refrigerant = z.preprocess(
+  (v) => normalizeRefrigerantName(blankToUndefined(v)),
+  z.enum(REFRIGERANT_IDS, { error: `refrigerant must be one of ${REFRIGERANT_IDS.join(', ')}` }),
+);
+
+export const refrigerantList = z.preprocess(toList, z.array(refrigerant).min(1));
+
+export const yesNo = z.preprocess(toBoolean, z.boolean({ error: 'expected yes or no' }));
+
+/** A number within [min, max]; accepts "1,234.5" text. */
+export function numberIn(min: number, max: number) {
+  return z.preprocess(
+    toNumber,
+    z.number({ error: 'expected a number' }).min(min, { error: `must be at least ${min}` }).max(max, { error: `must be at most ${max}` }),
+  );
+}
+
+export function numberListIn(min: number, max: number) {
+  return z.preprocess(toList, z.array(numberIn(min, max)).min(1));
+}
+
+export function enumOf<const T extends readonly [string, ...string[]]>(values: T) {
+  return z.preprocess(
+    (v) => {
+      const b = blankToUndefined(v);
+      return typeof b === 'string' ? b.trim().toLowerCase() : b;
+    },
+    z.enum(values, { error: `must be one of ${values.join(', ')}` }),
+  );
+}
+
+export const text = (max = 200) => z.preprocess((v) => {
+  const b = blankToUndefined(v);
+  return typeof b === 'string' ? b.trim() : b;
+}, z.string().min(1).max(max));
+
+export const isoDate = z.preprocess(
+  blankToUndefined,
+  z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { error: 'expected a date as YYYY-MM-DD' }),
+);
+
+/** Tube outside diameter in inches (residential line sets run 1/4 to 1-5/8). */
+export const tubeOdIn = numberIn(0.125, 2.125);
+export const tons = numberIn(0.5, 25);
