@@ -21,11 +21,24 @@ export function createApp(ctx: AppContext): Express {
           'style-src': ["'self'", "'unsafe-inline'"],
           'img-src': ["'self'", 'data:', 'blob:'],
           'font-src': ["'self'", 'data:'],
+          // A shop may serve Tandem on its LAN over plain HTTP: do not force HTTPS on subresources.
+          'upgrade-insecure-requests': null,
         },
+      },
+      strictTransportSecurity: false,
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger: ctx.logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },
     }),
   );
-  app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  if (ctx.config.corsOrigin) app.use('/api', devCors(ctx.config.corsOrigin));
   app.use('/api', express.json({ limit: '1mb' }));
 
   app.get('/api/health', (_req, res) => {
@@ -38,6 +51,17 @@ export function createApp(ctx: AppContext): Express {
   serveWebApp(app, ctx.config.webDir);
   app.use(errorMiddleware(ctx.logger));
   return app;
+}
+
+/** Development only: lets the Expo dev server on another port call the API. */
+function devCors(origin: string): express.RequestHandler {
+  return (req, res, next) => {
+    res.setHeader('Access-Control-Allow-Origin', origin);
+    res.setHeader('Access-Control-Allow-Headers', 'Authorization, Content-Type');
+    res.setHeader('Access-Control-Allow-Methods', 'GET, POST, PATCH, PUT, DELETE');
+    if (req.method === 'OPTIONS') res.sendStatus(204);
+    else next();
+  };
 }
 
 function serveWebApp(app: Express, webDir: string) {

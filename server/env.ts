@@ -15,6 +15,8 @@ const EnvSchema = z.object({
   TANDEM_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   /** Sign-in attempts allowed per IP and per e-mail in the rate window. */
   TANDEM_SIGNIN_LIMIT: z.coerce.number().int().min(1).default(10),
+  /** Only `npm run dev` sets this: the Expo dev server's origin. */
+  TANDEM_CORS_ORIGIN: z.string().url().optional(),
 });
 
 export interface AppConfig {
@@ -26,6 +28,7 @@ export interface AppConfig {
   webDir: string;
   logLevel: z.infer<typeof EnvSchema>['TANDEM_LOG_LEVEL'];
   signInLimit: number;
+  corsOrigin?: string;
 }
 
 /** Reads the JWT secret from the data dir, creating it once; it is never committed. */
@@ -55,5 +58,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     webDir: path.resolve(e.TANDEM_WEB_DIR),
     logLevel: e.TANDEM_LOG_LEVEL,
     signInLimit: e.TANDEM_SIGNIN_LIMIT,
+    corsOrigin: e.TANDEM_CORS_ORIGIN,
   };
 }

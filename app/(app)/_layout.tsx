@@ -1,0 +1,26 @@
+import { Redirect, Slot } from 'expo-router';
+import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { BottomTabs, SideRail } from '@/components/navigation/app-navigation';
+import { useIsWide } from '@/hooks/use-layout';
+import { useSession } from '@/hooks/use-session';
+import { useTandemTheme } from '@/hooks/use-tandem-theme';
+
+/** Signed-in group: guard, then tabs at the bottom on a phone or a rail at the side on a wide screen. */
+export default function SignedInLayout() {
+  const { session, ready } = useSession();
+  const wide = useIsWide();
+  const theme = useTandemTheme();
+  if (!ready) return <ActivityIndicator style={styles.fill} />;
+  if (!session) return <Redirect href="/sign-in" />;
+  return (
+    <View style={[styles.fill, wide && styles.row, { backgroundColor: theme.colors.background }]}>
+      {wide ? <SideRail /> : null}
+      <View style={styles.fill}>
+        <Slot />
+      </View>
+      {wide ? null : <BottomTabs />}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({ fill: { flex: 1 }, row: { flexDirection: 'row' } });

@@ -1,0 +1,5 @@
+import { UsersPanel } from '@/components/admin/users-panel';
+
+export default function UsersScreen() {
+  return <UsersPanel />;
+}

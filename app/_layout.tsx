@@ -1,0 +1,40 @@
+import MaterialCommunityIcons from '@expo/vector-icons/MaterialCommunityIcons';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { useFonts } from 'expo-font';
+import { Stack } from 'expo-router';
+import { StatusBar } from 'expo-status-bar';
+import { useState } from 'react';
+import { ActivityIndicator, useColorScheme, View } from 'react-native';
+import { PaperProvider } from 'react-native-paper';
+import { SafeAreaProvider } from 'react-native-safe-area-context';
+import { darkTheme, FONT_FILES, lightTheme } from '@/constants/theme';
+import { createQueryClient } from '@/hooks/query-client';
+import { SessionProvider } from '@/hooks/use-session';
+
+/** Root: fonts first (no flash of fallback text or empty icon boxes), then theme, data and session. */
+export default function RootLayout() {
+  const [fontsLoaded] = useFonts({ ...FONT_FILES, ...MaterialCommunityIcons.font });
+  const [queryClient] = useState(createQueryClient);
+  const scheme = useColorScheme();
+  const theme = scheme === 'dark' ? darkTheme : lightTheme;
+
+  if (!fontsLoaded) {
+    return (
+      <View style={{ flex: 1, alignItems: 'center', justifyContent: 'center', backgroundColor: theme.colors.background }}>
+        <ActivityIndicator color={theme.colors.primary} />
+      </View>
+    );
+  }
+  return (
+    <SafeAreaProvider>
+      <QueryClientProvider client={queryClient}>
+        <PaperProvider theme={theme}>
+          <SessionProvider>
+            <StatusBar style={scheme === 'dark' ? 'light' : 'dark'} />
+            <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: theme.colors.background } }} />
+          </SessionProvider>
+        </PaperProvider>
+      </QueryClientProvider>
+    </SafeAreaProvider>
+  );
+}

@@ -1,0 +1,103 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { Button, DataTable, Menu, Text } from 'react-native-paper';
+import { ROLES, type PublicUser, type UserPatch } from '@/shared/schemas/auth';
+import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { ROLE_LABELS } from '@/components/account/role-labels';
+
+interface Props {
+  user: PublicUser;
+  isMe: boolean;
+  wide: boolean;
+  onChange(patch: UserPatch): void;
+}
+
+function RoleMenu({ user, onChange }: Pick<Props, 'user' | 'onChange'>) {
+  const [open, setOpen] = useState(false);
+  return (
+    <Menu
+      visible={open}
+      onDismiss={() => setOpen(false)}
+      anchor={
+        <Button mode="outlined" compact icon="menu-down" contentStyle={styles.touch} onPress={() => setOpen(true)} testID={`role-${user.email}`}>
+          {ROLE_LABELS[user.role]}
+        </Button>
+      }
+    >
+      {ROLES.map((role) => (
+        <Menu.Item
+          key={role}
+          title={ROLE_LABELS[role]}
+          leadingIcon={role === user.role ? 'check' : undefined}
+          onPress={() => {
+            setOpen(false);
+            if (role !== user.role) onChange({ role });
+          }}
+        />
+      ))}
+    </Menu>
+  );
+}
+
+function ActiveToggle({ user, onChange }: Pick<Props, 'user' | 'onChange'>) {
+  return (
+    <Button compact mode="text" contentStyle={styles.touch} onPress={() => onChange({ active: !user.active })} testID={`toggle-active-${user.email}`}>
+      {user.active ? 'Deactivate' : 'Reactivate'}
+    </Button>
+  );
+}
+
+/** One user: a table row on a wide screen, a stacked entry on a phone. */
+export function UserRow({ user, isMe, wide, onChange }: Props) {
+  const theme = useTandemTheme();
+  const status = user.active ? 'Active' : 'Deactivated';
+  const identity = (
+    <View style={styles.identity}>
+      <Text variant="bodyLarge">
+        {user.name}
+        {isMe ? ' (you)' : ''}
+      </Text>
+      <Text variant="bodySmall" style={{ color: theme.colors.onSurfaceVariant }}>
+        {user.email}
+      </Text>
+    </View>
+  );
+  if (!wide) {
+    return (
+      <View testID={`user-row-${user.email}`} style={[styles.stacked, { borderBottomColor: theme.colors.outlineVariant }, !user.active && styles.inactive]}>
+        {identity}
+        <View style={styles.controls}>
+          <RoleMenu user={user} onChange={onChange} />
+          <Text variant="labelMedium" style={styles.status}>
+            {status}
+          </Text>
+          <ActiveToggle user={user} onChange={onChange} />
+        </View>
+      </View>
+    );
+  }
+  return (
+    <DataTable.Row testID={`user-row-${user.email}`} style={!user.active && styles.inactive}>
+      <DataTable.Cell style={styles.nameCol}>{identity}</DataTable.Cell>
+      <DataTable.Cell>
+        <RoleMenu user={user} onChange={onChange} />
+      </DataTable.Cell>
+      <DataTable.Cell>{status}</DataTable.Cell>
+      <DataTable.Cell style={styles.actionCol}>
+        <ActiveToggle user={user} onChange={onChange} />
+      </DataTable.Cell>
+    </DataTable.Row>
+  );
+}
+
+const styles = StyleSheet.create({
+  identity: { paddingVertical: spacing.xs },
+  nameCol: { flex: 2 },
+  actionCol: { justifyContent: 'flex-end' },
+  touch: { minHeight: TOUCH_TARGET },
+  stacked: { paddingVertical: spacing.sm, borderBottomWidth: StyleSheet.hairlineWidth, gap: spacing.xs },
+  controls: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, flexWrap: 'wrap' },
+  status: { flex: 1 },
+  inactive: { opacity: 0.65 },
+});

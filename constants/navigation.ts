@@ -1,0 +1,27 @@
+import type { Role } from '@/shared/schemas/auth';
+
+/** The signed-in app's sections, in order. A section appears only for the roles listed. */
+export interface NavItem {
+  href: string;
+  /** First path segment the item owns, for the active state. */
+  segment: string;
+  label: string;
+  icon: string;
+  roles: readonly Role[];
+}
+
+const everyone: readonly Role[] = ['tech', 'estimator', 'admin'];
+
+export const NAV_ITEMS: NavItem[] = [
+  { href: '/admin', segment: 'admin', label: 'Admin', icon: 'cog-outline', roles: ['admin'] },
+  { href: '/account', segment: 'account', label: 'Account', icon: 'account-circle-outline', roles: everyone },
+];
+
+export function navItemsFor(role: Role): NavItem[] {
+  return NAV_ITEMS.filter((item) => item.roles.includes(role));
+}
+
+/** Admin sub-sections, shown as a row of choices at the top of Admin. */
+export const ADMIN_SECTIONS: { href: string; segment: string; label: string; icon: string }[] = [
+  { href: '/admin/users', segment: 'users', label: 'Users', icon: 'account-multiple-outline' },
+];

@@ -1,0 +1,60 @@
+// Builds the web export into dist/ only when the app's sources changed since the last build
+// (the export is deterministic for the same lock and flags, so a hash of the inputs is a safe key).
+import { createHash } from 'node:crypto';
+import { spawnSync } from 'node:child_process';
+import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const outDir = path.join(root, 'dist');
+const stampFile = path.join(outDir, '.build-stamp');
+const INPUTS = ['app', 'components', 'hooks', 'constants', 'shared', 'assets', 'app.json', 'package-lock.json', 'tsconfig.json'];
+
+function* files(entry) {
+  const full = path.join(root, entry);
+  if (!existsSync(full)) return;
+  if (statSync(full).isFile()) {
+    yield entry;
+    return;
+  }
+  for (const name of readdirSync(full).sort()) yield* files(path.join(entry, name));
+}
+
+export function sourceHash() {
+  const hash = createHash('sha256');
+  for (const input of INPUTS) {
+    for (const file of files(input)) {
+      hash.update(file);
+      hash.update(readFileSync(path.join(root, file)));
+    }
+  }
+  return hash.digest('hex');
+}
+
+export function buildWeb({ force = false } = {}) {
+  const hash = sourceHash();
+  if (!force && existsSync(stampFile) && readFileSync(stampFile, 'utf8') === hash && existsSync(path.join(outDir, 'index.html'))) {
+    console.log('web app is up to date (dist/)');
+    return;
+  }
+  console.log('building the web app (expo export --platform web)…');
+  const started = Date.now();
+  const result = spawnSync(process.execPath, [path.join(root, 'node_modules/expo/bin/cli'), 'export', '--platform', 'web', '--output-dir', 'dist'], {
+    cwd: root,
+    stdio: 'inherit',
+    env: { ...process.env, EXPO_OFFLINE: '1', EXPO_NO_TELEMETRY: '1', CI: '1' },
+  });
+  if (result.status !== 0) throw new Error(`expo export failed with exit code ${result.status}`);
+  writeFileSync(stampFile, hash);
+  console.log(`web app built in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+}
+
+if (process.argv[1] && fileURLToPath(import.meta.url) === path.resolve(process.argv[1])) {
+  try {
+    buildWeb({ force: process.argv.includes('--force') });
+  } catch (err) {
+    console.error(err.message);
+    process.exit(1);
+  }
+}
