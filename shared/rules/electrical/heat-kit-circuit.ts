@@ -1,0 +1,82 @@
+import { conductorAmpacity, heaterOutputKw, nameplateVoltageRange, terminalColumnC } from '../../electrical';
+import { defineRule } from '../define-rule';
+import type { Finding } from '../types';
+import { ELECTRICAL_SAFETY } from '../../electrical/safety-text';
+
+/** The air handler's own circuit (indoorElectrical) against its MCA/MOCP, and the heat kit's output at the supply voltage. */
+export const heatKitCircuit = defineRule({
+  id: 'electrical.heat-kit-circuit',
+  title: 'Air handler and heat kit circuit',
+  basis: { kind: 'standard', citation: 'NEC 110.3(B) (nameplate MCA/MOCP), Table 310.16 at 110.14(C); resistive output ∝ V²' },
+  evaluate(pairing, _context, tools) {
+    const ah = pairing.airHandler?.spec;
+    if (!ah || ah.kind !== 'air-handler') return [];
+    const e = pairing.indoorElectrical;
+    if (!e) {
+      return ah.heatKitKw || ah.mcaAmps !== undefined ? [tools.missing('air handler circuit (breaker and wire)', 'heat-kit circuit not checked')] : [];
+    }
+    const findings: Finding[] = [];
+    const label = `the air handler${ah.model ? ` ${ah.model}` : ''}`;
+    if (ah.mocpAmps !== undefined && e.breakerAmps > ah.mocpAmps) {
+      findings.push(
+        tools.finding({
+          severity: 'blocker',
+          detail: `The ${e.breakerAmps} A breaker on ${label} is above its ${ah.mocpAmps} A maximum overcurrent protection.`,
+          fix: `Fit a breaker of ${ah.mocpAmps} A or less and at least the MCA. ${ELECTRICAL_SAFETY}`,
+          values: { breakerAmps: e.breakerAmps, mocpAmps: ah.mocpAmps },
+        }),
+      );
+    }
+    if (ah.mcaAmps !== undefined) {
+      if (e.breakerAmps < ah.mcaAmps) {
+        findings.push(
+          tools.finding({
+            severity: 'blocker',
+            detail: `The ${e.breakerAmps} A breaker on ${label} is below its ${ah.mcaAmps} A MCA; it will trip with the heat kit on.`,
+            fix: `Fit a breaker between the MCA and MOCP on the air handler's nameplate. ${ELECTRICAL_SAFETY}`,
+            values: { breakerAmps: e.breakerAmps, mcaAmps: ah.mcaAmps },
+          }),
+        );
+      }
+      const column = terminalColumnC(e.terminalRatingC);
+      const ampacity = conductorAmpacity(e.wireAwg, e.wireMaterial, column);
+      if (ampacity === undefined || ampacity < ah.mcaAmps) {
+        findings.push(
+          tools.finding({
+            severity: 'blocker',
+            detail: `${e.wireAwg} AWG ${e.wireMaterial} carries ${ampacity ?? 'no listed'} A at the ${column} °C column, below ${label}'s ${ah.mcaAmps} A MCA.`,
+            fix: `Run a conductor with ampacity of at least ${ah.mcaAmps} A at the ${column} °C column. ${ELECTRICAL_SAFETY}`,
+            values: { wireAwg: String(e.wireAwg), wireMaterial: e.wireMaterial, columnC: column, ampacityAmps: ampacity ?? null, mcaAmps: ah.mcaAmps },
+          }),
+        );
+      }
+    } else {
+      findings.push(tools.missing("air handler's MCA", 'air handler breaker and wire not checked'));
+    }
+    const range = nameplateVoltageRange(ah.voltage);
+    // The air handler is usually fed from the same service: fall back to the outdoor circuit's reading.
+    const supplyV = e.supplyVoltage ?? pairing.electrical?.supplyVoltage;
+    if (range && supplyV !== undefined && (supplyV < range.minV || supplyV > range.maxV)) {
+      findings.push(
+        tools.finding({
+          severity: 'blocker',
+          detail: `The ${supplyV} V supply is outside the ${range.minV}–${range.maxV} V range of ${label}'s ${ah.voltage} V nameplate.`,
+          fix: `Confirm the supply voltage; use an air handler rated for it. ${ELECTRICAL_SAFETY}`,
+          values: { supplyVoltage: supplyV, nameplateVoltage: String(ah.voltage), minV: range.minV, maxV: range.maxV },
+        }),
+      );
+    }
+    if (ah.heatKitKw && range && supplyV !== undefined) {
+      const kw = heaterOutputKw(ah.heatKitKw, supplyV, range.ratedHighV);
+      findings.push(
+        tools.finding({
+          severity: 'info',
+          detail: `The ${ah.heatKitKw} kW heat kit, rated at ${range.ratedHighV} V, gives about ${Math.round(kw * 100) / 100} kW at ${supplyV} V (output scales with the voltage squared).`,
+          fix: kw < ah.heatKitKw * 0.95 ? 'Size auxiliary or emergency heat on the output at the actual voltage.' : '',
+          values: { heatKitKw: ah.heatKitKw, ratedVoltage: range.ratedHighV, supplyVoltage: supplyV, outputKw: Math.round(kw * 100) / 100 },
+        }),
+      );
+    }
+    return findings;
+  },
+});

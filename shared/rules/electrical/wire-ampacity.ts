@@ -1,0 +1,55 @@
+import { ARTICLE_440_NOTE, conductorAmpacity, SMALL_CONDUCTOR_MAX_OCPD_AMPS, terminalColumnC } from '../../electrical';
+import { defineRule } from '../define-rule';
+import type { Finding } from '../types';
+import { ELECTRICAL_SAFETY } from '../../electrical/safety-text';
+
+/** Conductor ampacity at the terminal temperature column (NEC 110.14(C), Table 310.16) against the MCA (NEC 440.35). */
+export const wireAmpacity = defineRule({
+  id: 'electrical.wire-ampacity',
+  title: 'Wire ampacity',
+  basis: { kind: 'standard', citation: 'NEC Table 310.16 at the NEC 110.14(C) terminal rating; NEC 440.35 (conductors sized to the nameplate MCA)' },
+  evaluate(pairing, _context, tools) {
+    const e = pairing.electrical;
+    if (!e) return [];
+    const mca = pairing.outdoor.spec.mcaAmps;
+    if (mca === undefined) return [tools.missing("outdoor unit's MCA", 'wire size not checked')];
+    const column = terminalColumnC(e.terminalRatingC);
+    const wire = `${e.wireAwg} AWG ${e.wireMaterial}`;
+    const ampacity = conductorAmpacity(e.wireAwg, e.wireMaterial, column);
+    const values = { wireAwg: String(e.wireAwg), wireMaterial: e.wireMaterial, columnC: column, ampacityAmps: ampacity ?? null, mcaAmps: mca };
+    if (ampacity === undefined) {
+      return [
+        tools.finding({
+          severity: 'blocker',
+          detail: `NEC Table 310.16 gives no ampacity for ${wire}; it may not be used for this ${mca} A circuit.`,
+          fix: `Run a conductor whose ampacity at the ${column} °C column is at least ${mca} A. ${ELECTRICAL_SAFETY}`,
+          values,
+        }),
+      ];
+    }
+    const columnWhy = column === 60 ? '60 °C column, as both ends are not shown marked 75 °C' : '75 °C column, both ends marked 75 °C';
+    if (ampacity < mca) {
+      return [
+        tools.finding({
+          severity: 'blocker',
+          detail: `${wire} carries ${ampacity} A at the ${columnWhy}, below the outdoor unit's ${mca} A MCA.`,
+          fix: `Run a larger conductor (ampacity at least ${mca} A at the ${column} °C column), or confirm both terminations are marked 75 °C. ${ELECTRICAL_SAFETY}`,
+          values,
+        }),
+      ];
+    }
+    const findings: Finding[] = [];
+    const smallLimit = SMALL_CONDUCTOR_MAX_OCPD_AMPS[e.wireMaterial][String(e.wireAwg)];
+    if (smallLimit !== undefined && e.breakerAmps > smallLimit) {
+      findings.push(
+        tools.finding({
+          severity: 'info',
+          detail: `${wire} on a ${e.breakerAmps} A breaker exceeds the general ${smallLimit} A limit of NEC 240.4(D), which does not apply here. ${ARTICLE_440_NOTE}`,
+          fix: '',
+          values: { ...values, breakerAmps: e.breakerAmps, smallConductorLimitAmps: smallLimit },
+        }),
+      );
+    }
+    return findings;
+  },
+});

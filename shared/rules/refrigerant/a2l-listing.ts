@@ -1,0 +1,72 @@
+import { getRefrigerant, isA2L } from '../../refrigerants';
+import { KG_PER_OZ, systemChargeOz } from '../../refrigerants/a2l-charge';
+import { a2lListingOf, DETECTION_CITATION, detectionThresholdKg } from '../../refrigerants/a2l-detection';
+import { defineRule, type RuleTools } from '../define-rule';
+import type { Finding, Pairing } from '../types';
+
+const SAFETY =
+  'A2L refrigerants are mildly flammable: work by certified technicians, keep ignition sources away, and follow the equipment instructions and local codes (the AHJ decides).';
+
+/** A2L systems need A2L-listed indoor parts and, above m1, a refrigerant detection system (DESIGN §3). */
+export const a2lListing = defineRule({
+  id: 'refrigerant.a2l-listing',
+  title: 'A2L listing and leak detection',
+  basis: { kind: 'standard', citation: `UL 60335-2-40, 3rd ed. (2019); EPA SNAP Rule 23 use conditions (86 FR 24444); ${DETECTION_CITATION}` },
+  evaluate(pairing, _context, tools) {
+    const system = pairing.outdoor.spec.refrigerant;
+    if (!isA2L(system)) return [];
+    const findings: Finding[] = [];
+    const parts = [
+      { label: 'indoor coil', spec: pairing.indoorCoil?.spec },
+      { label: pairing.airHandler?.spec.kind === 'furnace' ? 'furnace' : 'air handler', spec: pairing.airHandler?.spec },
+    ];
+    for (const { label, spec } of parts) {
+      if (!spec) continue;
+      const listed = a2lListingOf(spec, isA2L);
+      if (listed === true) continue;
+      findings.push(
+        tools.finding({
+          severity: 'blocker',
+          detail: `The ${label}${spec.model ? ` ${spec.model}` : ''} is ${listed === false ? 'marked not listed' : 'not shown as listed'} for A2L refrigerants, and the system runs ${system} (class A2L).`,
+          fix: `Use a ${label} listed for ${system}${label === 'indoor coil' ? '' : ' (or the listed mitigation control kit its maker names) that runs the blower on a leak signal'}. ${SAFETY}`,
+          values: { part: label, systemRefrigerant: system, a2lListed: listed ?? null },
+        }),
+      );
+    }
+    const sensor = leakSensorFinding(pairing, tools);
+    if (sensor) findings.push(sensor);
+    return findings;
+  },
+});
+
+function leakSensorFinding(pairing: Pairing, tools: RuleTools): Finding | undefined {
+  const coil = pairing.indoorCoil?.spec;
+  if (!coil || a2lListingOf(coil, isA2L) !== true) return undefined;
+  if (coil.leakSensor === true) return undefined;
+  if (coil.leakSensor === undefined) return tools.missing('whether the indoor coil has a refrigerant leak sensor', 'A2L leak detection not checked');
+  const system = pairing.outdoor.spec.refrigerant;
+  const lfl = getRefrigerant(system)?.lflKgM3 ?? 0;
+  const thresholdOz = detectionThresholdKg(lfl) / KG_PER_OZ;
+  const charge = systemChargeOz(pairing.outdoor.spec, pairing.lineSet?.lengthFt);
+  if (charge !== undefined && charge <= thresholdOz) return undefined;
+  const values = { systemRefrigerant: system, leakSensor: false, chargeOz: charge === undefined ? null : round1(charge), detectionThresholdOz: round1(thresholdOz) };
+  const fix = `Fit the refrigerant detection sensor the coil's listing names and wire it to the air handler or furnace so the blower runs on a leak. ${SAFETY}`;
+  if (charge === undefined) {
+    return tools.finding({
+      severity: 'caution',
+      detail: `The indoor coil has no leak sensor; an ${system} system with more than ${round1(thresholdOz)} oz of charge needs a refrigerant detection system, and the total charge is not known.`,
+      fix,
+      values,
+    });
+  }
+  return tools.finding({
+    severity: 'blocker',
+    detail: `The indoor coil has no leak sensor, and the ${round1(charge)} oz ${system} charge is above the ${round1(thresholdOz)} oz above which a refrigerant detection system is required.`,
+    fix,
+    values,
+  });
+}
+
+function round1(n: number): number {
+  return Math.round(n * 10) / 10;
+}
