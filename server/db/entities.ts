@@ -1,4 +1,5 @@
+import { catalogEntities } from '../catalog/catalog-entities';
 import { User } from '../users/user.entity';
 
 /** Every TypeORM entity the data source knows. Each module adds its own here. */
-export const entities = [User];
+export const entities = [User, ...catalogEntities];

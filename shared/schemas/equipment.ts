@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { enumOf, isoDate, numberIn, numberListIn, refrigerant, refrigerantList, text, tons, tubeOdIn, yesNo } from './fields';
+import { blankToUndefined, enumOf, isoDate, numberIn, numberListIn, refrigerant, refrigerantList, text, tons, tubeOdIn, yesNo } from './fields';
 
 /**
  * Equipment specs: the same schemas validate catalog CSV rows, catalog API items and parts typed
@@ -15,7 +15,8 @@ export const METERING_TYPES = ['txv', 'piston', 'eev', 'none'] as const;
 export const AIR_HANDLER_KINDS = ['air-handler', 'furnace'] as const;
 export const KIT_TYPES = ['txv', 'piston', 'eev'] as const;
 
-const opt = <T extends z.ZodType>(schema: T) => schema.optional();
+/** Optional fields treat a blank CSV cell or a JSON null as absent. */
+const opt = <T extends z.ZodType>(schema: T) => z.preprocess(blankToUndefined, schema.optional());
 const pistonSizeIn = numberIn(0.03, 0.2);
 const amps = numberIn(0, 400);
 const voltage = z.preprocess(

@@ -1,4 +1,5 @@
 import { Users1764650000000 } from './1764650000000-users';
+import { Catalog1764700000000 } from './1764700000000-catalog';
 
 /** Every migration, in order. Add new ones at the end (one file per change, named by timestamp). */
-export const migrations = [Users1764650000000];
+export const migrations = [Users1764650000000, Catalog1764700000000];

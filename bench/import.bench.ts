@@ -1,0 +1,85 @@
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import Papa from 'papaparse';
+import pino from 'pino';
+import type { AppContext } from '../server/context';
+import { openDatabase } from '../server/db/data-source';
+import type { AppConfig } from '../server/env';
+import { uploadImport } from '../server/imports/imports.service';
+import { sqliteHandle } from '../server/imports/sqlite-handle';
+import { round, type Measure } from './measure';
+
+const ROWS = 100_000;
+
+/** A distributor-style price file: quoted descriptions, "$1,234.50" prices, a few effective dates. */
+function priceCsv(rows: number): string {
+  const lines = ['model,price,effective_from,description'];
+  for (let i = 0; i < rows; i++) {
+    const dollars = 100 + ((i * 7919) % 500000) / 100;
+    const price = `"$${dollars.toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })}"`;
+    lines.push(`BX-${String(i).padStart(6, '0')}-K,${price},2025-0${1 + (i % 9)}-01,"Bench part ${i}, generated"`);
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+function contextFor(dir: string, name: string, ds: Awaited<ReturnType<typeof openDatabase>>): AppContext {
+  const config = { databasePath: path.join(dir, name), dataDir: dir, jwtSecret: 'x'.repeat(32), webDir: dir, logLevel: 'silent', signInLimit: 10, port: 0, demo: false } as AppConfig;
+  return { dataSource: ds, config, logger: pino({ level: 'silent' }) };
+}
+
+/** Baseline: papaparse alone, then better-sqlite3 prepared inserts in one transaction (same table and indexes). */
+async function baseline(dir: string, file: string): Promise<number> {
+  const ds = await openDatabase(path.join(dir, 'baseline.sqlite'));
+  const db = sqliteHandle(ds.manager) as unknown as { prepare(sql: string): { run(...a: unknown[]): unknown }; transaction(fn: () => void): () => void };
+  db.prepare("INSERT INTO distributors (name) VALUES ('Baseline')").run();
+  const started = performance.now();
+  const parsed = Papa.parse<Record<string, string>>(readFileSync(file, 'utf8'), { header: true, skipEmptyLines: true });
+  const insert = db.prepare(
+    'INSERT INTO price_entries (distributorId, model, normalizedModel, priceCents, currency, effectiveFrom, description, importId) VALUES (1, ?, ?, ?, ?, ?, ?, NULL)',
+  );
+  db.transaction(() => {
+    for (const r of parsed.data) {
+      const cents = Math.round(Number(r.price.replace(/[$,]/g, '')) * 100);
+      insert.run(r.model, r.model, cents, 'USD', r.effective_from, r.description);
+    }
+  })();
+  const seconds = (performance.now() - started) / 1000;
+  await ds.destroy();
+  return seconds;
+}
+
+/** The real import, end to end through the service (parse, validate, plan, upsert in one transaction). */
+async function realImport(dir: string, file: string): Promise<{ seconds: number; peakRssMb: number; rows: number }> {
+  const ds = await openDatabase(path.join(dir, 'import.sqlite'));
+  const ctx = contextFor(dir, 'import.sqlite', ds);
+  globalThis.gc?.();
+  let peak = process.memoryUsage().rss;
+  const sampler = setInterval(() => {
+    peak = Math.max(peak, process.memoryUsage().rss);
+  }, 10);
+  const started = performance.now();
+  const view = await uploadImport(ctx, { buffer: readFileSync(file), fileName: 'bench.csv', kind: 'prices', distributor: 'Bench Supply', dryRun: false, userId: null });
+  const seconds = (performance.now() - started) / 1000;
+  clearInterval(sampler);
+  peak = Math.max(peak, process.memoryUsage().rss);
+  await ds.destroy();
+  return { seconds, peakRssMb: peak / 1024 / 1024, rows: view.counts.inserted };
+}
+
+export async function run(): Promise<Measure[]> {
+  const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-bench-import-'));
+  try {
+    const file = path.join(dir, 'prices.csv');
+    writeFileSync(file, priceCsv(ROWS));
+    const base = await baseline(dir, file);
+    const real = await realImport(dir, file);
+    if (real.rows !== ROWS) throw new Error(`import inserted ${real.rows} of ${ROWS} rows`);
+    return [
+      { id: 'import.prices-100k.s', value: round(real.seconds, 3), unit: 's', baseline: round(base, 3), ratio: round(real.seconds / base, 2), note: 'target ratio ≤ 2' },
+      { id: 'import.prices-100k.peak-rss-mb', value: round(real.peakRssMb, 1), unit: 'MB', note: 'peak RSS of the bench process during the import (sampled every 10 ms); target < 350' },
+    ];
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}

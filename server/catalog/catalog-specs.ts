@@ -1,0 +1,76 @@
+import type { EntityManager, Repository } from 'typeorm';
+import type {
+  AirHandlerSpec,
+  CatalogKind,
+  IndoorCoilSpec,
+  MeteringDeviceSpec,
+  OutdoorUnitSpec,
+  RatedCombinationSpec,
+} from '../../shared/schemas/equipment';
+import { normalizeModel } from '../../shared/schemas/fields';
+import type { AppContext } from '../context';
+import { AirHandler } from './air-handler.entity';
+import { KINDS } from './catalog-kinds';
+import { IndoorCoil } from './indoor-coil.entity';
+import { MeteringDevice } from './metering-device.entity';
+import { OutdoorUnit } from './outdoor-unit.entity';
+import { RatedCombination } from './rated-combination.entity';
+
+/** The spec type each catalog kind resolves to. */
+export interface SpecByKind {
+  'outdoor-units': OutdoorUnitSpec;
+  'indoor-coils': IndoorCoilSpec;
+  'air-handlers': AirHandlerSpec;
+  'metering-devices': MeteringDeviceSpec;
+  'rated-combinations': RatedCombinationSpec;
+}
+export interface EntityByKind {
+  'outdoor-units': OutdoorUnit;
+  'indoor-coils': IndoorCoil;
+  'air-handlers': AirHandler;
+  'metering-devices': MeteringDevice;
+  'rated-combinations': RatedCombination;
+}
+
+const BOOKKEEPING = new Set(['id', 'importId', 'normalizedModel', 'normalizedOutdoorModel', 'normalizedIndoorModel', 'normalizedAirHandlerModel']);
+
+/** The plain spec of a catalog row: its spec fields without id, import bookkeeping or nulls. */
+export function toSpec<K extends CatalogKind>(kind: K, entity: EntityByKind[K]): SpecByKind[K] {
+  const spec: Record<string, unknown> = {};
+  for (const field of KINDS[kind].fields) {
+    const value = (entity as unknown as Record<string, unknown>)[field];
+    if (value !== null && value !== undefined && !BOOKKEEPING.has(field)) spec[field] = value;
+  }
+  return spec as SpecByKind[K];
+}
+
+/** The spec plus its id, as the catalog API lists items. */
+export function toItem<K extends CatalogKind>(kind: K, entity: EntityByKind[K]): SpecByKind[K] & { id: number } {
+  return { id: entity.id, ...toSpec(kind, entity) };
+}
+
+/** The repository of each catalog kind (optionally inside a transaction's manager). */
+export function catalogRepositories(source: AppContext | EntityManager) {
+  const manager = 'dataSource' in source ? source.dataSource.manager : source;
+  return {
+    'outdoor-units': manager.getRepository(OutdoorUnit),
+    'indoor-coils': manager.getRepository(IndoorCoil),
+    'air-handlers': manager.getRepository(AirHandler),
+    'metering-devices': manager.getRepository(MeteringDevice),
+    'rated-combinations': manager.getRepository(RatedCombination),
+  } as { [K in CatalogKind]: Repository<EntityByKind[K]> };
+}
+
+/** One catalog row by kind and id, or null. */
+export async function findCatalogItem<K extends CatalogKind>(ctx: AppContext, kind: K, id: number): Promise<EntityByKind[K] | null> {
+  const repo = catalogRepositories(ctx)[kind] as unknown as Repository<{ id: number }>;
+  return (await repo.findOneBy({ id })) as EntityByKind[K] | null;
+}
+
+/** Rated combinations whose outdoor model matches (normalised), as specs. */
+export async function findRatedCombinations(ctx: AppContext, outdoorModel: string): Promise<RatedCombinationSpec[]> {
+  const rows = await ctx.dataSource
+    .getRepository(RatedCombination)
+    .find({ where: { normalizedOutdoorModel: normalizeModel(outdoorModel) }, order: { id: 'ASC' } });
+  return rows.map((row) => toSpec('rated-combinations', row));
+}

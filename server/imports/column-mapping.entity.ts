@@ -1,0 +1,13 @@
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+/** A distributor's own headers mapped to our fields, remembered from the last upload that sent one. */
+@Entity('column_mappings')
+@Index(['distributorId', 'kind'], { unique: true })
+export class ColumnMapping {
+  @PrimaryGeneratedColumn({ type: 'integer' }) id: number;
+  @Column({ type: 'integer' }) distributorId: number;
+  @Column({ type: 'varchar', length: 24 }) kind: string;
+  /** { "their header": "field" } */
+  @Column({ type: 'simple-json' }) mapping: Record<string, string>;
+  @Column({ type: 'datetime', nullable: true }) updatedAt: Date | null;
+}

@@ -1,0 +1,87 @@
+import Papa from 'papaparse';
+import { AppError } from '../lib/errors';
+
+export const MAX_FILE_BYTES = 20 * 1024 * 1024;
+export const MAX_ROWS = 200_000;
+const EXPECTED = 'Expected a CSV text file: a header row, then one row per item, separated by commas.';
+
+/** Turns an upload into text, refusing what is not a CSV: empty (422), too large (413), binary (415). */
+export function decodeCsv(buffer: Buffer): string {
+  if (buffer.length > MAX_FILE_BYTES) {
+    throw new AppError('too-large', `The file is larger than 20 MB. Split it into smaller files. ${EXPECTED}`, 413);
+  }
+  if (buffer.length === 0) throw new AppError('empty-file', `The file is empty. ${EXPECTED}`, 422);
+  if (looksBinary(buffer)) {
+    throw new AppError('not-csv', `The file is not text (it holds binary data, e.g. a spreadsheet or an image). Save it as CSV. ${EXPECTED}`, 415);
+  }
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(buffer);
+  } catch {
+    // Older spreadsheet exports write Windows-1252; latin1 reads its letters near enough for models and prices.
+    text = buffer.toString('latin1');
+  }
+  if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
+  if (text.trim() === '') throw new AppError('empty-file', `The file holds no rows. ${EXPECTED}`, 422);
+  return text;
+}
+
+/** NUL bytes anywhere, or many control characters in the first 8 KB, mean this is no text file. */
+function looksBinary(buffer: Buffer): boolean {
+  if (buffer.includes(0)) return true;
+  const head = buffer.subarray(0, 8192);
+  let control = 0;
+  for (const byte of head) if (byte < 9 || (byte > 13 && byte < 32)) control++;
+  return control > head.length * 0.05;
+}
+
+/** Comma unless the header line has none and uses tabs or semicolons. */
+function delimiterOf(text: string): string {
+  const firstLine = text.slice(0, text.search(/\r?\n|$/));
+  if (firstLine.includes(',')) return ',';
+  if (firstLine.includes('\t')) return '\t';
+  if (firstLine.includes(';')) return ';';
+  return ',';
+}
+
+export interface CsvVisitor {
+  header(cells: string[]): void;
+  /** One data row; `line` is its 1-based line in the file (the header is line 1 when it is the first line). */
+  row(cells: string[], line: number): void;
+}
+
+/** Streams the rows of a CSV text through the visitor, skipping blank lines; over MAX_ROWS rows is a 413. */
+export function readCsv(text: string, visitor: CsvVisitor): { rows: number } {
+  let rowStart = 0;
+  let counted = 0;
+  let line = 1;
+  let sawHeader = false;
+  let rows = 0;
+  let tooMany = false;
+  Papa.parse<string[]>(text, {
+    delimiter: delimiterOf(text),
+    skipEmptyLines: false,
+    step: (result, parser) => {
+      // The row's line is 1 + the newlines before where it starts (quoted fields may span lines).
+      for (let i = counted; i < rowStart; i++) if (text.charCodeAt(i) === 10) line++;
+      counted = rowStart;
+      const rowLine = line;
+      rowStart = result.meta.cursor;
+      const cells = result.data;
+      if (cells.every((c) => c.trim() === '')) return;
+      if (!sawHeader) {
+        sawHeader = true;
+        visitor.header(cells);
+        return;
+      }
+      if (++rows > MAX_ROWS) {
+        tooMany = true;
+        parser.abort();
+        return;
+      }
+      visitor.row(cells, rowLine);
+    },
+  });
+  if (tooMany) throw new AppError('too-many-rows', `The file has more than ${MAX_ROWS.toLocaleString('en-US')} rows. Split it into smaller files.`, 413);
+  return { rows };
+}

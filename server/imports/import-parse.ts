@@ -1,0 +1,132 @@
+import type { z } from 'zod';
+import type { ImportKind } from '../../shared/schemas/equipment';
+import { normalizeModel } from '../../shared/schemas/fields';
+import { KINDS } from '../catalog/catalog-kinds';
+import { AppError } from '../lib/errors';
+import { decodeCsv, readCsv } from './csv-file';
+import { fieldsOf, matchHeaders, toSnake, type HeaderMatch } from './header-map';
+import type { ImportRowError } from './import.entity';
+import { priceRowSchema } from './price-row';
+
+/** A valid row: its line in the file, its key and the values of the fields the file has columns for. */
+export interface ParsedRow {
+  line: number;
+  key: string;
+  values: Record<string, unknown>;
+}
+
+export interface ParsedFile {
+  kind: ImportKind;
+  rows: ParsedRow[];
+  errors: ImportRowError[];
+  /** Data rows in the file (blank lines not counted). */
+  rowCount: number;
+  rejected: number;
+  /** Fields that have a column: an update writes these and keeps the others. */
+  presentFields: string[];
+  header: HeaderMatch;
+}
+
+function keyOf(kind: ImportKind, values: Record<string, unknown>): string {
+  if (kind === 'prices') return `${normalizeModel(String(values.model))}|${values.effectiveFrom}`;
+  return Object.values(KINDS[kind].keyColumns(values)).join('|');
+}
+
+/** The field whose column identifies a row in messages about duplicates. */
+const keyField = (kind: ImportKind) => (kind === 'rated-combinations' ? 'outdoorModel' : 'model');
+
+/**
+ * Reads and validates a whole upload: header matched to fields (with the mapping), each row through
+ * the kind's zod schema, duplicates inside the file reported against the row they repeat.
+ */
+export function parseImportFile(buffer: Buffer, kind: ImportKind, mapping: Record<string, string> = {}, today?: string): ParsedFile {
+  const text = decodeCsv(buffer);
+  const schema: z.ZodType<Record<string, unknown>> =
+    kind === 'prices' ? (priceRowSchema(today) as unknown as z.ZodType<Record<string, unknown>>) : KINDS[kind].schema;
+  const rows: ParsedRow[] = [];
+  const errors: ImportRowError[] = [];
+  const firstLineOfKey = new Map<string, number>();
+  let header: HeaderMatch | undefined;
+  let headers: string[] = [];
+  let presentFields: string[] = [];
+  let rejected = 0;
+  const columnOf = (field: string) => {
+    const i = header!.columns.indexOf(field);
+    return i >= 0 ? headers[i] : toSnake(field);
+  };
+
+  const { rows: rowCount } = readCsv(text, {
+    header(cells) {
+      headers = cells.map((c) => c.trim());
+      header = matchHeaders(kind, headers, mapping);
+      if (header.missingFields.length > 0) throw noUsableHeader(kind, header);
+      presentFields = header.columns.filter((c): c is string => c !== null);
+    },
+    row(cells, line) {
+      // Blank cells are left out: the shared schemas' optional fields accept a missing key, not ''.
+      const input: Record<string, string> = {};
+      const columns = header!.columns;
+      for (let i = 0; i < columns.length; i++) {
+        const field = columns[i];
+        const cell = cells[i];
+        if (field !== null && cell !== undefined && cell.trim() !== '') input[field] = cell;
+      }
+      const rowErrors: ImportRowError[] = [];
+      for (let i = columns.length; i < cells.length; i++) {
+        if (cells[i].trim() !== '') {
+          rowErrors.push({ row: line, column: '', value: cells[i], message: 'this row has more cells than the header has columns' });
+          break;
+        }
+      }
+      const result = schema.safeParse(input);
+      if (!result.success) {
+        for (const issue of result.error.issues) {
+          const field = String(issue.path[0] ?? '');
+          rowErrors.push({ row: line, column: field ? columnOf(field) : '', value: field ? (input[field] ?? '') : '', message: issue.message });
+        }
+      } else if (rowErrors.length === 0) {
+        const values = result.data;
+        const key = keyOf(kind, values);
+        const first = firstLineOfKey.get(key);
+        if (first !== undefined) {
+          const field = keyField(kind);
+          const what = kind === 'prices' ? 'the same model and effective date as' : 'a duplicate of';
+          rowErrors.push({ row: line, column: columnOf(field), value: input[field] ?? '', message: `${what} row ${first}` });
+        } else {
+          firstLineOfKey.set(key, line);
+          rows.push({ line, key, values: kind === 'prices' ? values : pick(values, presentFields) });
+        }
+      }
+      if (rowErrors.length > 0) {
+        rejected++;
+        errors.push(...rowErrors);
+      }
+    },
+  });
+  if (!header) throw new AppError('empty-file', 'The file holds no header row.', 422);
+  if (rowCount === 0) throw new AppError('empty-file', 'The file has a header but no rows.', 422, { foundColumns: header.foundColumns });
+  return { kind, rows, errors, rowCount, rejected, presentFields, header };
+}
+
+/** The present fields of a parsed row; a blank cell becomes null so an update clears it. */
+function pick(values: Record<string, unknown>, fields: string[]): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const f of fields) out[f] = values[f] ?? null;
+  return out;
+}
+
+function noUsableHeader(kind: ImportKind, header: HeaderMatch): AppError {
+  const { fields, required } = fieldsOf(kind);
+  const missing = header.missingFields.map(toSnake).join(', ');
+  return new AppError(
+    'no-usable-header',
+    `The header row has no column for ${missing}. Expected a header row naming the columns (see the ${kind} template), or send a mapping from your column names to these fields.`,
+    422,
+    {
+      foundColumns: header.foundColumns,
+      missingFields: header.missingFields.map(toSnake),
+      requiredFields: required.map(toSnake),
+      knownFields: fields.map(toSnake),
+    },
+  );
+}

@@ -1,0 +1,32 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+export type ImportStatus = 'preview' | 'committed' | 'reverted';
+export interface ImportRowError {
+  row: number;
+  column: string;
+  value: string;
+  message: string;
+}
+
+/** One upload: its counts, row errors and, while a preview, the valid rows waiting for commit. */
+@Entity('imports')
+export class ImportRecord {
+  @PrimaryGeneratedColumn({ type: 'integer' }) id: number;
+  @Column({ type: 'varchar', length: 24 }) kind: string;
+  @Column({ type: 'varchar', length: 255 }) fileName: string;
+  @Column({ type: 'integer', nullable: true }) distributorId: number | null;
+  @Column({ type: 'integer', nullable: true }) uploadedById: number | null;
+  @Column({ type: 'varchar', length: 16 }) status: ImportStatus;
+  @Column({ type: 'integer', default: 0 }) rows: number;
+  @Column({ type: 'integer', default: 0 }) inserted: number;
+  @Column({ type: 'integer', default: 0 }) updated: number;
+  @Column({ type: 'integer', default: 0 }) unchanged: number;
+  @Column({ type: 'integer', default: 0 }) rejected: number;
+  @Column({ type: 'integer', default: 0 }) unmatched: number;
+  @Column({ type: 'simple-json' }) errors: ImportRowError[];
+  /** The preview's valid rows as JSON (cleared on commit). */
+  @Column({ type: 'text', nullable: true }) payload: string | null;
+  @CreateDateColumn({ type: 'datetime' }) createdAt: Date;
+  @Column({ type: 'datetime', nullable: true }) committedAt: Date | null;
+  @Column({ type: 'datetime', nullable: true }) revertedAt: Date | null;
+}

@@ -1,0 +1,15 @@
+import type { EntityManager } from 'typeorm';
+
+/** The slice of better-sqlite3's Database the bulk writers use. */
+export interface RawSqlite {
+  prepare(sql: string): { run(...params: unknown[]): unknown };
+}
+
+/**
+ * The raw better-sqlite3 connection behind a manager, or null on another driver. SQLite has one
+ * connection, so statements prepared on it run inside the manager's open transaction.
+ */
+export function sqliteHandle(manager: EntityManager): RawSqlite | null {
+  const driver = manager.connection.driver as unknown as { options: { type: string }; databaseConnection?: RawSqlite };
+  return driver.options.type === 'better-sqlite3' && driver.databaseConnection ? driver.databaseConnection : null;
+}
