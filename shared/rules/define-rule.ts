@@ -20,7 +20,16 @@ export interface RuleDefinition {
 export function defineRule(def: RuleDefinition): Rule {
   const family = def.id.split('.')[0];
   const tools: RuleTools = {
-    finding: (draft) => ({ ruleId: def.id, title: def.title, basis: def.basis, ...draft }),
+    // Explicit fields, not a spread: this runs for every finding of every check (hot path).
+    finding: (d) => ({
+      ruleId: def.id,
+      severity: d.severity,
+      title: d.title ?? def.title,
+      detail: d.detail,
+      fix: d.fix,
+      basis: d.basis ?? def.basis,
+      values: d.values,
+    }),
     missing: (facts, consequence) => ({
       ruleId: def.id,
       severity: 'info' as Severity,

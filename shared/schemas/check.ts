@@ -9,7 +9,6 @@ export const INDOOR_LOCATIONS = ['attic', 'above-ceiling', 'closet', 'utility-ro
 export const AIRFLOW_DIRECTIONS = ['upflow', 'downflow', 'horizontal-left', 'horizontal-right'] as const;
 export const FILTER_DRIERS = ['bi-flow', 'one-way', 'none'] as const;
 export const WIRE_AWG = [14, 12, 10, 8, 6, 4, 3, 2, 1, '1/0', '2/0', '3/0', '4/0'] as const;
-type WireAwgValue = (typeof WIRE_AWG)[number];
 export const WIRE_MATERIALS = ['copper', 'aluminum'] as const;
 export const TERMINAL_RATINGS_C = [60, 75, 90] as const;
 
@@ -49,9 +48,7 @@ export const LineSetSchema = z.object({
 
 export const ElectricalSchema = z.object({
   breakerAmps: z.number().positive().max(1000),
-  wireAwg: z.union(WIRE_AWG.map((w) => z.literal(w)) as unknown as [z.ZodLiteral<WireAwgValue>, z.ZodLiteral<WireAwgValue>], {
-    error: `wireAwg must be one of ${WIRE_AWG.join(', ')}`,
-  }),
+  wireAwg: z.literal(WIRE_AWG, { error: `wireAwg must be one of ${WIRE_AWG.join(', ')}` }),
   wireMaterial: z.enum(WIRE_MATERIALS),
   terminalRatingC: z.union([z.literal(60), z.literal(75), z.literal(90)]).optional(),
   supplyVoltage: z.number().int().min(100).max(600).optional(),

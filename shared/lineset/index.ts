@@ -1,0 +1,4 @@
+export * from './tube-sizes';
+export * from './liquid-content';
+export * from './charge-adjustment';
+export * from './size-check';
