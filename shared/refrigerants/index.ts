@@ -24,6 +24,8 @@ export function listRefrigerants(): Refrigerant[] {
 /** The refrigerant by trade name ("R-410A", "410a", "r32"); undefined when unknown. */
 export function getRefrigerant(name: string | undefined | null): Refrigerant | undefined {
   if (!name) return undefined;
+  const direct = BY_ID.get(name as Refrigerant['id']);
+  if (direct) return direct;
   const id = normalizeRefrigerantName(name);
   return typeof id === 'string' ? BY_ID.get(id) : undefined;
 }

@@ -8,12 +8,19 @@ import { z } from 'zod';
 export const REFRIGERANT_IDS = ['R-22', 'R-410A', 'R-32', 'R-454B', 'R-407C'] as const;
 export type RefrigerantId = (typeof REFRIGERANT_IDS)[number];
 
+const REFRIGERANT_BY_COMPACT = new Map<string, RefrigerantId>(REFRIGERANT_IDS.map((id) => [id.slice(2), id]));
+/** Memo of spellings already seen: the rules engine asks for the same few names on every check. */
+const refrigerantNameMemo = new Map<string, string>();
+
 /** Normalises "r410a", "410A", "R-410A" to the trade spelling "R-410A"; other input is returned unchanged. */
 export function normalizeRefrigerantName(value: unknown): unknown {
   if (typeof value !== 'string') return value;
+  const known = refrigerantNameMemo.get(value);
+  if (known !== undefined) return known;
   const compact = value.trim().toUpperCase().replace(/[\s-]/g, '').replace(/^R/, '');
-  const match = REFRIGERANT_IDS.find((id) => id.slice(2) === compact);
-  return match ?? value.trim();
+  const result = REFRIGERANT_BY_COMPACT.get(compact) ?? value.trim();
+  if (refrigerantNameMemo.size < 512) refrigerantNameMemo.set(value, result);
+  return result;
 }
 
 /** Normalised model key for matching: upper case with spaces, dashes, dots and slashes removed. */
