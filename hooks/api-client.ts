@@ -104,6 +104,22 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   return json as T;
 }
 
+/** Fetches a file (CSV, PDF) with the session token; a plain link would carry none. */
+export async function apiBlob(path: string): Promise<Blob> {
+  let response: Response;
+  try {
+    response = await fetch(`${API_BASE}${path}`, { headers: token ? { Authorization: `Bearer ${token}` } : {} });
+  } catch {
+    throw new ApiError('network', 'Tandem can not reach the server.', 0, 'network');
+  }
+  if (!response.ok) {
+    const kind = kindForStatus(response.status);
+    if (kind === 'unauthorized') onUnauthorized?.();
+    throw new ApiError(kind, `The file could not be fetched (${response.status}).`, response.status, kind);
+  }
+  return response.blob();
+}
+
 export const api = {
   get: <T>(path: string, signal?: AbortSignal) => apiRequest<T>(path, { signal }),
   post: <T>(path: string, body?: unknown) => apiRequest<T>(path, { method: 'POST', body }),

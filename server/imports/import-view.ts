@@ -7,18 +7,21 @@ export interface ImportView {
   status: ImportStatus;
   fileName: string;
   distributor?: string;
+  /** Name of the admin who uploaded it (history only). */
+  uploadedBy?: string;
   createdAt: string;
   counts: { rows: number; inserted: number; updated: number; unchanged: number; rejected: number; unmatched: number };
   errors: ImportRowError[];
 }
 
-export function toImportView(record: ImportRecord, distributorName?: string | null): ImportView {
+export function toImportView(record: ImportRecord, distributorName?: string | null, uploadedBy?: string): ImportView {
   return {
     id: record.id,
     kind: record.kind,
     status: record.status,
     fileName: record.fileName,
     ...(distributorName ? { distributor: distributorName } : {}),
+    ...(uploadedBy ? { uploadedBy } : {}),
     createdAt: new Date(record.createdAt).toISOString(),
     counts: {
       rows: record.rows,

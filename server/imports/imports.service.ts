@@ -3,6 +3,7 @@ import type { ImportKind } from '../../shared/schemas/equipment';
 import { Distributor } from '../catalog/distributor.entity';
 import type { AppContext } from '../context';
 import { AppError, conflict, notFound } from '../lib/errors';
+import { User } from '../users/user.entity';
 import { ColumnMapping } from './column-mapping.entity';
 import { applyCatalogPlan, applyPricePlan } from './import-apply';
 import { parseImportFile, type ParsedFile, type ParsedRow } from './import-parse';
@@ -110,11 +111,14 @@ export async function revertImport(ctx: AppContext, id: number): Promise<ImportV
 export async function listImports(ctx: AppContext): Promise<ImportView[]> {
   const records = await ctx.dataSource.getRepository(ImportRecord).find({
     order: { id: 'DESC' },
-    select: ['id', 'kind', 'status', 'fileName', 'distributorId', 'createdAt', 'rows', 'inserted', 'updated', 'unchanged', 'rejected', 'unmatched', 'errors'],
+    select: ['id', 'kind', 'status', 'fileName', 'distributorId', 'uploadedById', 'createdAt', 'rows', 'inserted', 'updated', 'unchanged', 'rejected', 'unmatched', 'errors'],
     take: 200,
   });
   const names = new Map((await ctx.dataSource.getRepository(Distributor).find()).map((d) => [d.id, d.name]));
-  return records.map((r) => toImportView(r, r.distributorId ? names.get(r.distributorId) : undefined));
+  const uploaders = new Map((await ctx.dataSource.getRepository(User).find({ select: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  return records.map((r) =>
+    toImportView(r, r.distributorId ? names.get(r.distributorId) : undefined, r.uploadedById ? uploaders.get(r.uploadedById) : undefined),
+  );
 }
 
 export async function getImport(ctx: AppContext, id: number): Promise<ImportView> {

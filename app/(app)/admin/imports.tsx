@@ -1,0 +1,5 @@
+import { ImportsPanel } from '@/components/imports/imports-panel';
+
+export default function ImportsScreen() {
+  return <ImportsPanel />;
+}

@@ -1,0 +1,106 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useEffect, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { ActivityIndicator, ProgressBar, Searchbar, Text } from 'react-native-paper';
+import type { CatalogKind } from '@/shared/schemas/equipment';
+import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { errorText } from '@/hooks/error-text';
+import { useCatalogList } from '@/hooks/use-catalog';
+import { useIsWide } from '@/hooks/use-layout';
+import { MessageBanner } from '@/components/ui/message-banner';
+import { Screen } from '@/components/ui/screen';
+import { CatalogFilters } from './catalog-filters';
+import { isCatalogKind, KIND_LABELS } from './catalog-kind-labels';
+import { CatalogPager } from './catalog-pager';
+import { CatalogResultCard } from './catalog-result-card';
+import { CatalogResultTable } from './catalog-result-table';
+import { summarize } from './item-summary';
+import { KindSwitcher } from './kind-switcher';
+import { useDebouncedValue } from './use-debounced-value';
+
+const PAGE_SIZE = 20;
+const SEARCH_DEBOUNCE_MS = 250;
+
+type Params = { kind?: string; q?: string; refrigerant?: string; tons?: string; page?: string };
+
+/** Catalog tab: pick a kind, search as you type, filter, page. The choices live in the URL (back and reload keep them). */
+export function CatalogBrowser() {
+  const params = useLocalSearchParams<Params>();
+  const router = useRouter();
+  const wide = useIsWide();
+  const kind: CatalogKind = isCatalogKind(params.kind) ? params.kind : 'outdoor-units';
+  const page = Math.max(1, Number(params.page) || 1);
+  const tons = params.tons ? Number(params.tons) : undefined;
+  const [text, setText] = useState(params.q ?? '');
+  const q = useDebouncedValue(text.trim(), SEARCH_DEBOUNCE_MS);
+
+  const setParams = (next: Partial<Params>) => router.setParams({ ...next } as never);
+  useEffect(() => {
+    if ((params.q ?? '') !== q) setParams({ q: q || undefined, page: undefined });
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [q]);
+
+  const withFilters = kind !== 'rated-combinations';
+  const list = useCatalogList(kind, {
+    q: q || undefined,
+    refrigerant: withFilters ? params.refrigerant : undefined,
+    tons: withFilters ? tons : undefined,
+    page,
+    pageSize: PAGE_SIZE,
+  });
+  const rows = (list.data?.items ?? []).map((item) => ({ id: item.id, summary: summarize(kind, item) }));
+  const open = (id: number) => router.push(`/catalog/${kind}/${id}` as never);
+
+  return (
+    <Screen title="Catalog" subtitle="Equipment, metering kits and rated combinations, with current distributor prices.">
+      <KindSwitcher value={kind} onChange={(k) => setParams({ kind: k, page: undefined, refrigerant: undefined, tons: undefined })} />
+      <Searchbar
+        placeholder={`Search ${KIND_LABELS[kind].toLowerCase()} by model, brand or description`}
+        value={text}
+        onChangeText={setText}
+        style={styles.search}
+        inputStyle={styles.searchInput}
+        testID="catalog-search"
+        accessibilityLabel="Search the catalog"
+      />
+      {withFilters ? (
+        <CatalogFilters
+          refrigerant={params.refrigerant}
+          tons={tons}
+          onRefrigerant={(r) => setParams({ refrigerant: r, page: undefined })}
+          onTons={(t) => setParams({ tons: t === undefined ? undefined : String(t), page: undefined })}
+        />
+      ) : null}
+      {/* A thin bar while a new search runs over the previous results (kept on screen). */}
+      {/* Paper's ProgressBar is 100% tall on the web: the wrapper gives it its 4 px. */}
+      <View style={styles.progress}>
+        <ProgressBar indeterminate visible={list.isFetching && !list.isPending} />
+      </View>
+      {list.isPending ? <ActivityIndicator /> : null}
+      {list.isError ? <MessageBanner tone="error">{errorText(list.error)}</MessageBanner> : null}
+      {list.data && rows.length === 0 ? (
+        <Text variant="bodyLarge" testID="catalog-empty">
+          Nothing in {KIND_LABELS[kind].toLowerCase()} matches{q ? ` “${q}”` : ''}. Try fewer letters or clear a filter.
+        </Text>
+      ) : null}
+      {rows.length > 0 && wide ? <CatalogResultTable kind={kind} rows={rows} onOpen={open} /> : null}
+      {rows.length > 0 && !wide ? (
+        <View style={styles.cards} testID="catalog-results">
+          {rows.map(({ id, summary }) => (
+            <CatalogResultCard key={id} summary={summary} onPress={() => open(id)} testID={`catalog-item-${summary.title}`} />
+          ))}
+        </View>
+      ) : null}
+      {list.data && list.data.total > 0 ? (
+        <CatalogPager page={list.data.page} pageSize={list.data.pageSize} total={list.data.total} onPage={(p) => setParams({ page: String(p) })} />
+      ) : null}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  search: { minHeight: TOUCH_TARGET },
+  searchInput: { minHeight: TOUCH_TARGET },
+  cards: { gap: spacing.sm },
+  progress: { height: 4 },
+});

@@ -1,0 +1,75 @@
+import { useRouter } from 'expo-router';
+import { StyleSheet, View } from 'react-native';
+import { ActivityIndicator, Button, Card, Text } from 'react-native-paper';
+import type { CatalogKind } from '@/shared/schemas/equipment';
+import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { errorText } from '@/hooks/error-text';
+import { useCatalogDetail } from '@/hooks/use-catalog';
+import { MessageBanner } from '@/components/ui/message-banner';
+import { Screen } from '@/components/ui/screen';
+import { KIND_SINGULAR } from './catalog-kind-labels';
+import { CombinationList } from './combination-list';
+import { summarize } from './item-summary';
+import { PriceList } from './price-list';
+import { SpecList } from './spec-list';
+import { specRows } from './spec-rows';
+
+function Section({ title, children, testID }: { title: string; children: React.ReactNode; testID?: string }) {
+  return (
+    <Card mode="outlined" testID={testID}>
+      <Card.Content style={styles.section}>
+        <Text variant="titleLarge" accessibilityRole="header">
+          {title}
+        </Text>
+        {children}
+      </Card.Content>
+    </Card>
+  );
+}
+
+/** One catalog item: every spec in plain words, prices by distributor, the rated combinations it is in. */
+export function CatalogDetail({ kind, id }: { kind: CatalogKind; id: number }) {
+  const router = useRouter();
+  const detail = useCatalogDetail(kind, id);
+  const back = () => (router.canGoBack() ? router.back() : router.replace(`/catalog?kind=${kind}` as never));
+  const data = detail.data;
+  const summary = data ? summarize(kind, data.item) : undefined;
+
+  return (
+    <Screen
+      title={summary?.title ?? KIND_SINGULAR[kind]}
+      subtitle={summary ? [KIND_SINGULAR[kind], summary.brand].filter(Boolean).join(' · ') : undefined}
+      actions={
+        <Button icon="arrow-left" mode="outlined" onPress={back} contentStyle={styles.touch} testID="catalog-back">
+          Catalog
+        </Button>
+      }
+    >
+      {detail.isPending ? <ActivityIndicator /> : null}
+      {detail.isError ? <MessageBanner tone="error">{errorText(detail.error)}</MessageBanner> : null}
+      {data ? (
+        <View style={styles.body}>
+          <Section title="Specifications">
+            <SpecList rows={specRows(kind, data.item)} />
+          </Section>
+          {kind !== 'rated-combinations' ? (
+            <Section title="Prices" testID="catalog-prices-section">
+              <PriceList prices={data.prices} />
+            </Section>
+          ) : null}
+          {kind === 'outdoor-units' || kind === 'indoor-coils' || kind === 'air-handlers' ? (
+            <Section title="Rated combinations">
+              <CombinationList combinations={data.ratedCombinations} />
+            </Section>
+          ) : null}
+        </View>
+      ) : null}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  body: { gap: spacing.lg },
+  section: { gap: spacing.sm },
+  touch: { minHeight: TOUCH_TARGET },
+});

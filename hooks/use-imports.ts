@@ -1,0 +1,130 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { ImportKind } from '@/shared/schemas/equipment';
+import { api, apiBlob, apiRequest, ApiError } from './api-client';
+import { catalogKeys } from './use-catalog';
+import { STALE } from './stale-times';
+
+export type ImportStatus = 'preview' | 'committed' | 'reverted';
+
+export interface ImportRowError {
+  /** 1-based line in the file (the header is line 1). */
+  row: number;
+  column: string;
+  value: string;
+  message: string;
+}
+
+export interface ImportCounts {
+  rows: number;
+  inserted: number;
+  updated: number;
+  unchanged: number;
+  rejected: number;
+  unmatched: number;
+}
+
+/** An import as /api/imports returns it (DESIGN.md §5, contract). */
+export interface ImportView {
+  id: number;
+  kind: ImportKind;
+  status: ImportStatus;
+  fileName: string;
+  distributor?: string;
+  /** Who uploaded it, when the server says. */
+  uploadedBy?: string;
+  createdAt: string;
+  counts: ImportCounts;
+  errors: ImportRowError[];
+}
+
+/** A picked file: a web File, or a native { uri, name, type } part. */
+export type UploadFile = Blob | { uri: string; name: string; type: string };
+
+export interface UploadInput {
+  file: UploadFile;
+  fileName: string;
+  kind: ImportKind;
+  distributor?: string;
+  /** `{ "their header": "field" }`; the server remembers it per distributor. */
+  mapping?: Record<string, string>;
+}
+
+export const importKeys = {
+  all: ['imports'] as const,
+  list: () => [...importKeys.all, 'list'] as const,
+};
+
+export const importsQuery = () =>
+  queryOptions({
+    queryKey: importKeys.list(),
+    queryFn: ({ signal }) => api.get<{ imports: ImportView[] }>('/imports', signal).then((r) => r.imports),
+    staleTime: STALE.adminLists,
+  });
+
+export function useImports() {
+  return useQuery(importsQuery());
+}
+
+/** After anything that writes the catalog: the history and every catalog page are stale. */
+function invalidateAfterWrite(client: ReturnType<typeof useQueryClient>) {
+  return Promise.all([client.invalidateQueries({ queryKey: importKeys.all }), client.invalidateQueries({ queryKey: catalogKeys.all })]);
+}
+
+/** Uploads a file as a dry run: the server validates it and stores a preview to commit later. */
+export function useUploadPreview() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: UploadInput) => {
+      const form = new FormData();
+      if (input.file instanceof Blob) form.append('file', input.file, input.fileName);
+      else form.append('file', input.file as unknown as Blob); // React Native's FormData takes { uri, name, type }
+      form.append('kind', input.kind);
+      form.append('dryRun', 'true');
+      if (input.distributor) form.append('distributor', input.distributor);
+      if (input.mapping) form.append('mapping', JSON.stringify(input.mapping));
+      return apiRequest<{ import: ImportView }>('/imports', { method: 'POST', body: form }).then((r) => r.import);
+    },
+    onSuccess: () => client.invalidateQueries({ queryKey: importKeys.all }),
+  });
+}
+
+export function useCommitImport() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.post<{ import: ImportView }>(`/imports/${id}/commit`).then((r) => r.import),
+    onSuccess: () => invalidateAfterWrite(client),
+  });
+}
+
+export function useRevertImport() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.post<{ import: ImportView }>(`/imports/${id}/revert`).then((r) => r.import),
+    onSuccess: () => invalidateAfterWrite(client),
+  });
+}
+
+/** The header problem a 422 `no-usable-header` carries: what the file has and what we need. */
+export interface HeaderProblem {
+  foundColumns: string[];
+  missingFields: string[];
+  requiredFields: string[];
+  knownFields: string[];
+}
+
+export function headerProblemOf(error: unknown): HeaderProblem | null {
+  if (!(error instanceof ApiError) || error.code !== 'no-usable-header') return null;
+  const d = error.details as Partial<HeaderProblem> | undefined;
+  if (!d || !Array.isArray(d.foundColumns)) return null;
+  return {
+    foundColumns: d.foundColumns,
+    missingFields: d.missingFields ?? [],
+    requiredFields: d.requiredFields ?? [],
+    knownFields: d.knownFields ?? [],
+  };
+}
+
+/** Fetches a kind's CSV template with the session token. */
+export function fetchTemplate(kind: ImportKind): Promise<Blob> {
+  return apiBlob(`/imports/templates/${kind}`);
+}
