@@ -1,5 +1,5 @@
 import MaterialCommunityIcons from '@expo/vector-icons/MaterialCommunityIcons';
-import { QueryClientProvider } from '@tanstack/react-query';
+import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
 import { useFonts } from 'expo-font';
 import { Stack } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
@@ -9,12 +9,14 @@ import { PaperProvider } from 'react-native-paper';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { darkTheme, FONT_FILES, lightTheme } from '@/constants/theme';
 import { createQueryClient } from '@/hooks/query-client';
+import { persistOptions } from '@/hooks/query-persistence';
 import { SessionProvider } from '@/hooks/use-session';
 
 /** Root: fonts first (no flash of fallback text or empty icon boxes), then theme, data and session. */
 export default function RootLayout() {
   const [fontsLoaded] = useFonts({ ...FONT_FILES, ...MaterialCommunityIcons.font });
   const [queryClient] = useState(createQueryClient);
+  const [persistence] = useState(persistOptions);
   const scheme = useColorScheme();
   const theme = scheme === 'dark' ? darkTheme : lightTheme;
 
@@ -27,14 +29,14 @@ export default function RootLayout() {
   }
   return (
     <SafeAreaProvider>
-      <QueryClientProvider client={queryClient}>
+      <PersistQueryClientProvider client={queryClient} persistOptions={persistence}>
         <PaperProvider theme={theme}>
           <SessionProvider>
             <StatusBar style={scheme === 'dark' ? 'light' : 'dark'} />
             <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: theme.colors.background } }} />
           </SessionProvider>
         </PaperProvider>
-      </QueryClientProvider>
+      </PersistQueryClientProvider>
     </SafeAreaProvider>
   );
 }

@@ -13,6 +13,8 @@ export interface NavItem {
 const everyone: readonly Role[] = ['tech', 'estimator', 'admin'];
 
 export const NAV_ITEMS: NavItem[] = [
+  { href: '/check', segment: 'check', label: 'Check', icon: 'clipboard-check-outline', roles: everyone },
+  { href: '/catalog', segment: 'catalog', label: 'Catalog', icon: 'book-open-variant', roles: everyone },
   { href: '/admin', segment: 'admin', label: 'Admin', icon: 'cog-outline', roles: ['admin'] },
   { href: '/account', segment: 'account', label: 'Account', icon: 'account-circle-outline', roles: everyone },
 ];
@@ -24,4 +26,6 @@ export function navItemsFor(role: Role): NavItem[] {
 /** Admin sub-sections, shown as a row of choices at the top of Admin. */
 export const ADMIN_SECTIONS: { href: string; segment: string; label: string; icon: string }[] = [
   { href: '/admin/users', segment: 'users', label: 'Users', icon: 'account-multiple-outline' },
+  { href: '/admin/imports', segment: 'imports', label: 'Imports', icon: 'file-upload-outline' },
+  { href: '/admin/rules', segment: 'rules', label: 'Rules', icon: 'tune-variant' },
 ];

@@ -3,9 +3,11 @@ import type { AppContext } from './context';
 import { catalogRouter } from './catalog/catalog.routes';
 import { importsRouter } from './imports/imports.routes';
 import { usersRouter } from './users/users.routes';
+import { checksRouter } from './checks/checks.routes';
+import { settingsRouter } from './settings/settings.routes';
 
 /**
  * The API's resource routers, mounted under /api/<prefix>. Each module adds its line here.
  * (Auth and health are mounted by createApp itself.)
  */
-export const apiRoutes: [string, (ctx: AppContext) => Router][] = [['users', usersRouter], ['catalog', catalogRouter], ['imports', importsRouter]];
+export const apiRoutes: [string, (ctx: AppContext) => Router][] = [['users', usersRouter], ['catalog', catalogRouter], ['imports', importsRouter], ['checks', checksRouter], ['settings', settingsRouter]];

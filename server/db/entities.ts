@@ -1,5 +1,6 @@
 import { catalogEntities } from '../catalog/catalog-entities';
 import { User } from '../users/user.entity';
+import { settingsEntities } from '../settings/settings-entities';
 
 /** Every TypeORM entity the data source knows. Each module adds its own here. */
-export const entities = [User, ...catalogEntities];
+export const entities = [User, ...catalogEntities, ...settingsEntities];

@@ -1,0 +1,5 @@
+import { RulesPanel } from '@/components/settings/rules-panel';
+
+export default function RulesScreen() {
+  return <RulesPanel />;
+}

@@ -1,0 +1,47 @@
+import { StyleSheet, View } from 'react-native';
+import { Button, SegmentedButtons, Text } from 'react-native-paper';
+import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { SECTION_KEYS } from './check-sections';
+import { updateCheckForm, useCheckForm } from './check-store';
+import { OptionalSection } from './optional-section';
+import { PART_SLOTS } from './part-slots';
+import { PartPicker } from './part-picker';
+
+/** The driveway check's inputs: scope, the parts, the optional facts, and one big button. */
+export function CheckForm({ onCheck, busy }: { onCheck(): void; busy: boolean }) {
+  const form = useCheckForm();
+  return (
+    <View style={styles.form}>
+      <View style={styles.scope}>
+        <Text variant="labelLarge">Scope</Text>
+        <SegmentedButtons
+          value={form.scope}
+          onValueChange={(scope) => updateCheckForm((s) => ({ ...s, scope: scope as typeof s.scope }))}
+          buttons={[
+            { value: 'new-system', label: 'New system', style: styles.segment, testID: 'scope-new-system' },
+            { value: 'component-replacement', label: 'Replacing a part', accessibilityLabel: 'Component replacement', style: styles.segment, testID: 'scope-component-replacement' },
+          ]}
+        />
+      </View>
+      {PART_SLOTS.map((slot) => (
+        <PartPicker key={slot} slot={slot} />
+      ))}
+      <View>
+        {SECTION_KEYS.map((key) => (
+          <OptionalSection key={key} section={key} />
+        ))}
+      </View>
+      <Button mode="contained" icon="clipboard-check-outline" onPress={onCheck} loading={busy} disabled={busy} contentStyle={styles.check} labelStyle={styles.checkLabel} testID="run-check">
+        Check
+      </Button>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: spacing.lg },
+  scope: { gap: spacing.xs },
+  segment: { minHeight: TOUCH_TARGET },
+  check: { minHeight: 64 },
+  checkLabel: { fontSize: 20, lineHeight: 28 },
+});

@@ -1,0 +1,111 @@
+import { useRef } from 'react';
+import { ScrollView, StyleSheet, View } from 'react-native';
+import { Button, Text } from 'react-native-paper';
+import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { errorText } from '@/hooks/error-text';
+import { useIsWide } from '@/hooks/use-layout';
+import { useRuleSettings } from '@/hooks/use-rule-settings';
+import { MessageBanner } from '@/components/ui/message-banner';
+import { buildCheckRequest } from './build-check-request';
+import { CheckForm } from './check-form';
+import { CheckFrame, CheckHeading } from './check-frame';
+import { CheckResultView } from './check-result';
+import { initialCheckForm, updateCheckForm, useCheckForm } from './check-store';
+import { useCheckRunner } from './use-check-runner';
+
+/** The driveway check: the form, one button, the answer (beside it on a wide screen, below it on a phone). */
+export function CheckScreen() {
+  const wide = useIsWide();
+  const form = useCheckForm();
+  const runner = useCheckRunner();
+  // Fetched while there is a signal so an offline check runs with the shop's own settings.
+  useRuleSettings();
+  const scroll = useRef<ScrollView>(null);
+  const resultY = useRef(0);
+
+  const onCheck = () => {
+    const built = buildCheckRequest(form);
+    if (!built.ok) {
+      updateCheckForm((s) => ({ ...s, errors: built.errors }));
+      return;
+    }
+    updateCheckForm((s) => ({ ...s, errors: {} }));
+    runner.mutate(
+      { request: built.request, picked: built.picked },
+      {
+        onSuccess: (outcome) => {
+          updateCheckForm((s) => ({ ...s, outcome }));
+          if (!wide) setTimeout(() => scroll.current?.scrollTo({ y: resultY.current, animated: true }), 50);
+        },
+      },
+    );
+  };
+
+  const outdoor = form.parts.outdoor;
+  const refrigerant = String((outdoor.mode === 'catalog' ? outdoor.picked?.spec.refrigerant : outdoor.typed.refrigerant) ?? '');
+  const errorCount = Object.keys(form.errors).length;
+  const status = (
+    <>
+      {errorCount ? (
+        <MessageBanner tone="error" testID="form-errors">
+          {`${errorCount === 1 ? 'One entry needs' : `${errorCount} entries need`} fixing before the check can run (marked ⚠ above).`}
+        </MessageBanner>
+      ) : null}
+      {runner.isError ? <MessageBanner tone="error">{errorText(runner.error)}</MessageBanner> : null}
+    </>
+  );
+  const result = form.outcome ? (
+    <View onLayout={(e) => (resultY.current = e.nativeEvent.layout.y)}>
+      <CheckResultView outcome={form.outcome} systemRefrigerant={refrigerant} />
+    </View>
+  ) : null;
+  const reset = (
+    <Button mode="outlined" icon="restart" onPress={() => updateCheckForm(() => initialCheckForm())} contentStyle={styles.button} testID="check-reset">
+      Start over
+    </Button>
+  );
+
+  if (wide) {
+    return (
+      <CheckFrame>
+        <View style={styles.wideHead}>
+          <CheckHeading actions={reset} />
+        </View>
+        <View style={styles.columns}>
+          <ScrollView style={styles.column} contentContainerStyle={styles.columnContent} keyboardShouldPersistTaps="handled">
+            <CheckForm onCheck={onCheck} busy={runner.isPending} />
+            {status}
+          </ScrollView>
+          <ScrollView style={styles.column} contentContainerStyle={styles.columnContent}>
+            {result ?? (
+              <Text variant="bodyLarge" style={styles.placeholder}>
+                Pick the parts and tap Check: the answer appears here.
+              </Text>
+            )}
+          </ScrollView>
+        </View>
+      </CheckFrame>
+    );
+  }
+  return (
+    <CheckFrame>
+      <ScrollView ref={scroll} style={styles.fill} contentContainerStyle={styles.phoneContent} keyboardShouldPersistTaps="handled">
+        <CheckHeading actions={reset} />
+        <CheckForm onCheck={onCheck} busy={runner.isPending} />
+        {status}
+        {result}
+      </ScrollView>
+    </CheckFrame>
+  );
+}
+
+const styles = StyleSheet.create({
+  fill: { flex: 1, minHeight: 0 },
+  phoneContent: { gap: spacing.lg, padding: spacing.lg, paddingBottom: spacing.xxl },
+  wideHead: { padding: spacing.lg, paddingBottom: 0 },
+  columns: { flex: 1, minHeight: 0, flexDirection: 'row', gap: spacing.xl, paddingHorizontal: spacing.lg },
+  column: { flex: 1, minHeight: 0 },
+  columnContent: { gap: spacing.lg, paddingTop: spacing.lg, paddingBottom: spacing.xxl, paddingRight: spacing.sm },
+  placeholder: { paddingTop: spacing.xl },
+  button: { minHeight: TOUCH_TARGET },
+});

@@ -1,0 +1,114 @@
+import { useEffect, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { ActivityIndicator, Button, Text } from 'react-native-paper';
+import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { errorText } from '@/hooks/error-text';
+import { useRuleSettings, useSaveRuleSettings } from '@/hooks/use-rule-settings';
+import { FormField } from '@/components/ui/form-field';
+import { MessageBanner } from '@/components/ui/message-banner';
+import { Screen } from '@/components/ui/screen';
+import { bodyOf, draftOf, SETTING_FIELDS, type RulesDraft } from './rules-draft';
+import { TransitionRuleCard } from './transition-rule-card';
+
+/** Admin → Rules: the shop's thresholds and the refrigerant transition rules checks run with. */
+export function RulesPanel() {
+  const query = useRuleSettings();
+  const save = useSaveRuleSettings();
+  const [draft, setDraft] = useState<RulesDraft | null>(null);
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [saved, setSaved] = useState(false);
+
+  useEffect(() => {
+    if (query.data && !draft) setDraft(draftOf(query.data));
+  }, [query.data, draft]);
+
+  const onSave = () => {
+    if (!draft) return;
+    const built = bodyOf(draft);
+    setSaved(false);
+    if (!built.ok) return setErrors(built.errors);
+    setErrors({});
+    save.mutate(built.body, { onSuccess: (data) => (setDraft(draftOf(data)), setSaved(true)) });
+  };
+  const resetDefaults = () => query.data && draft && setDraft({ ...draftOf({ ...query.data, settings: query.data.defaults }), rules: draft.rules });
+
+  return (
+    <Screen
+      title="Rules"
+      subtitle="Thresholds your shop works to, and the refrigerant rules in force. Every check uses these."
+      actions={
+        <Button mode="contained" icon="content-save-outline" onPress={onSave} loading={save.isPending} disabled={!draft || save.isPending} contentStyle={styles.button} testID="save-rules">
+          Save
+        </Button>
+      }
+    >
+      {query.isPending ? <ActivityIndicator /> : null}
+      {query.isError ? <MessageBanner tone="error">{errorText(query.error)}</MessageBanner> : null}
+      {save.isError ? <MessageBanner tone="error">{errorText(save.error)}</MessageBanner> : null}
+      {saved ? <MessageBanner tone="success">Saved. New checks use these settings.</MessageBanner> : null}
+      {Object.keys(errors).length ? <MessageBanner tone="error">Some entries need fixing (marked below).</MessageBanner> : null}
+      {draft ? (
+        <>
+          <View style={styles.grid}>
+            {SETTING_FIELDS.map((f) => (
+              <FormField
+                key={f.key}
+                style={styles.cell}
+                label={f.label}
+                value={draft.settings[f.key]}
+                keyboardType="decimal-pad"
+                onChangeText={(v) => setDraft({ ...draft, settings: { ...draft.settings, [f.key]: v } })}
+                error={errors[`settings.${f.key}`]}
+                hint={query.data ? `Default ${query.data.defaults[f.key]}` : undefined}
+                testID={`setting-${f.key}`}
+              />
+            ))}
+          </View>
+          <Button mode="text" icon="restore" onPress={resetDefaults} contentStyle={styles.button}>
+            Put the default thresholds back
+          </Button>
+          <Text variant="titleMedium" accessibilityRole="header">
+            Rebate tier
+          </Text>
+          <Text variant="bodySmall">The tier your shop sells to; leave every box empty to check none.</Text>
+          <View style={styles.grid}>
+            {(['name', 'seer2', 'eer2', 'hspf2'] as const).map((k) => (
+              <FormField
+                key={k}
+                style={styles.cell}
+                label={{ name: 'Tier name', seer2: 'Minimum SEER2', eer2: 'Minimum EER2', hspf2: 'Minimum HSPF2' }[k]}
+                value={draft.tier[k]}
+                keyboardType={k === 'name' ? 'default' : 'decimal-pad'}
+                onChangeText={(v) => setDraft({ ...draft, tier: { ...draft.tier, [k]: v } })}
+                error={errors[`settings.rebateTier.${k}`] ?? (k === 'name' ? errors['settings.rebateTier'] : undefined)}
+                testID={`tier-${k}`}
+              />
+            ))}
+          </View>
+          <Text variant="titleMedium" accessibilityRole="header">
+            Refrigerant transition rules
+          </Text>
+          <Text variant="bodySmall">
+            Kept as data so the office can follow changes in the rules. Check the regulation itself before changing a date; local codes and the
+            authority having jurisdiction come first.
+          </Text>
+          {draft.rules.map((rule, i) => (
+            <TransitionRuleCard
+              key={rule.id}
+              rule={rule}
+              index={i}
+              errors={errors}
+              onChange={(patch) => setDraft({ ...draft, rules: draft.rules.map((r, j) => (j === i ? { ...r, ...patch } : r)) })}
+            />
+          ))}
+        </>
+      ) : null}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  button: { minHeight: TOUCH_TARGET },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
+  cell: { flexGrow: 1, minWidth: 240 },
+});

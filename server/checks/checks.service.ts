@@ -1,0 +1,45 @@
+import { runChecks } from '../../shared/rules/engine';
+import type { CheckResult, Pairing } from '../../shared/rules/types';
+import type { CheckRequest } from '../../shared/schemas/check';
+import type { AppContext } from '../context';
+import { findRatedCombinations } from '../catalog/catalog-specs';
+import { loadRuleContext } from '../settings/settings.service';
+import { resolvePart } from './resolve-parts';
+
+/** Today's date (server clock) as YYYY-MM-DD, the install date when the request gives none. */
+export function today(now = new Date()): string {
+  return now.toISOString().slice(0, 10);
+}
+
+/** Resolves every part of a validated check request into the pairing the engine takes. */
+export async function resolvePairing(ctx: AppContext, body: CheckRequest, installDate = today()): Promise<Pairing> {
+  const [outdoor, indoorCoil, airHandler, metering] = await Promise.all([
+    resolvePart(ctx, 'outdoor-units', 'outdoor', body.outdoor),
+    resolvePart(ctx, 'indoor-coils', 'indoorCoil', body.indoorCoil),
+    resolvePart(ctx, 'air-handlers', 'airHandler', body.airHandler),
+    resolvePart(ctx, 'metering-devices', 'metering', body.metering),
+  ]);
+  const model = outdoor!.spec.model;
+  return {
+    scope: body.scope,
+    installDate: body.installDate ?? installDate,
+    site: body.site,
+    outdoor: outdoor!,
+    indoorCoil,
+    airHandler,
+    metering,
+    controls: body.controls,
+    lineSet: body.lineSet,
+    electrical: body.electrical,
+    indoorElectrical: body.indoorElectrical,
+    // A typed outdoor unit with no model can not be looked up: undefined makes the rating rules say so.
+    ratedCombinations: model ? await findRatedCombinations(ctx, model) : undefined,
+  };
+}
+
+/** POST /api/checks: resolve, load the shop's settings, run the shared engine. */
+export async function runCheck(ctx: AppContext, body: CheckRequest): Promise<CheckResult> {
+  const [pairing, context] = await Promise.all([resolvePairing(ctx, body), loadRuleContext(ctx)]);
+  const { verdict, rulesVersion, findings, coverage, computed } = runChecks(pairing, context);
+  return { verdict, rulesVersion, findings, coverage, computed };
+}

@@ -1,0 +1,90 @@
+import type { DataSource } from 'typeorm';
+import { DEFAULT_RULE_SETTINGS, resolveSettings } from '../../shared/rules/settings';
+import type { RuleContext, TransitionRule } from '../../shared/rules/types';
+import type { RulesSettingsBody, RulesSettingsResponse } from '../../shared/schemas/settings';
+import type { AppContext } from '../context';
+import { RuleSettingsRow } from './rule-settings.entity';
+import { TransitionRuleRow } from './transition-rule.entity';
+
+const SETTINGS_ROW_ID = 1;
+
+// Every check needs the settings: keep them in memory per database, dropped when an admin saves.
+const cache = new WeakMap<DataSource, Promise<RulesSettingsResponse>>();
+
+/** The rule settings and transition rules checks run with (cached until the next save). */
+export function getRulesSettings(ctx: AppContext): Promise<RulesSettingsResponse> {
+  let pending = cache.get(ctx.dataSource);
+  if (!pending) {
+    pending = readRulesSettings(ctx);
+    cache.set(ctx.dataSource, pending);
+    pending.catch(() => cache.delete(ctx.dataSource));
+  }
+  return pending;
+}
+
+/** The context the rules engine takes. */
+export async function loadRuleContext(ctx: AppContext): Promise<RuleContext> {
+  const { settings, transitionRules } = await getRulesSettings(ctx);
+  return { settings, transitionRules };
+}
+
+/** Replaces the settings and the transition rules in one transaction (admin). */
+export async function saveRulesSettings(ctx: AppContext, body: RulesSettingsBody, userId: number): Promise<RulesSettingsResponse> {
+  await ctx.dataSource.transaction(async (manager) => {
+    await manager.getRepository(RuleSettingsRow).save({
+      id: SETTINGS_ROW_ID,
+      settings: stripUndefined(body.settings),
+      updatedAt: new Date().toISOString(),
+      updatedBy: userId,
+    });
+    const rules = manager.getRepository(TransitionRuleRow);
+    await rules.clear();
+    if (body.transitionRules.length) await rules.insert(body.transitionRules.map(toRow));
+  });
+  cache.delete(ctx.dataSource);
+  return getRulesSettings(ctx);
+}
+
+async function readRulesSettings(ctx: AppContext): Promise<RulesSettingsResponse> {
+  const row = await ctx.dataSource.getRepository(RuleSettingsRow).findOneBy({ id: SETTINGS_ROW_ID });
+  const rules = await ctx.dataSource.getRepository(TransitionRuleRow).find({ order: { position: 'ASC' } });
+  return {
+    settings: resolveSettings(row?.settings),
+    transitionRules: rules.map(fromRow),
+    defaults: DEFAULT_RULE_SETTINGS,
+    updatedAt: row?.updatedAt ?? null,
+  };
+}
+
+function toRow(rule: TransitionRule, position: number): TransitionRuleRow {
+  return {
+    id: rule.id,
+    position,
+    refrigerants: rule.refrigerants,
+    scope: rule.scope,
+    installFrom: rule.installFrom,
+    manufacturedBefore: rule.manufacturedBefore ?? null,
+    severity: rule.severity,
+    citation: rule.citation,
+    note: rule.note,
+  };
+}
+
+function fromRow(row: TransitionRuleRow): TransitionRule {
+  const rule: TransitionRule = {
+    id: row.id,
+    refrigerants: row.refrigerants,
+    scope: row.scope,
+    installFrom: row.installFrom,
+    severity: row.severity,
+    citation: row.citation,
+    note: row.note,
+  };
+  if (row.manufacturedBefore) rule.manufacturedBefore = row.manufacturedBefore;
+  return rule;
+}
+
+/** simple-json drops undefined anyway; this keeps the stored object equal to what comes back. */
+function stripUndefined<T extends object>(value: T): T {
+  return JSON.parse(JSON.stringify(value)) as T;
+}
