@@ -9,6 +9,7 @@ import type {
 } from '../../shared/schemas/equipment';
 import { normalizeModel } from '../../shared/schemas/fields';
 import type { AppContext } from '../context';
+import { kindIndex } from './catalog-index';
 import { AirHandler } from './air-handler.entity';
 import { KINDS } from './catalog-kinds';
 import { IndoorCoil } from './indoor-coil.entity';
@@ -63,14 +64,15 @@ export function catalogRepositories(source: AppContext | EntityManager) {
 
 /** One catalog row by kind and id, or null. */
 export async function findCatalogItem<K extends CatalogKind>(ctx: AppContext, kind: K, id: number): Promise<EntityByKind[K] | null> {
-  const repo = catalogRepositories(ctx)[kind] as unknown as Repository<{ id: number }>;
-  return (await repo.findOneBy({ id })) as EntityByKind[K] | null;
+  // Served from the in-memory catalog index (kept current with imports) rather than a query per part.
+  const index = await kindIndex(ctx.dataSource, kind);
+  return (index.byId.get(id) as EntityByKind[K] | undefined) ?? null;
 }
 
 /** Rated combinations whose outdoor model matches (normalised), as specs. */
 export async function findRatedCombinations(ctx: AppContext, outdoorModel: string): Promise<RatedCombinationSpec[]> {
-  const rows = await ctx.dataSource
-    .getRepository(RatedCombination)
-    .find({ where: { normalizedOutdoorModel: normalizeModel(outdoorModel) }, order: { id: 'ASC' } });
+  const key = normalizeModel(outdoorModel);
+  const index = await kindIndex(ctx.dataSource, 'rated-combinations');
+  const rows = (index.byOutdoorModel.get(key) ?? []) as unknown as RatedCombination[];
   return rows.map((row) => toSpec('rated-combinations', row));
 }

@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import type { ImportKind } from '../../shared/schemas/equipment';
+import { invalidateCatalogIndex } from '../catalog/catalog-index';
 import { Distributor } from '../catalog/distributor.entity';
 import type { AppContext } from '../context';
 import { AppError, conflict, notFound } from '../lib/errors';
@@ -52,7 +53,7 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
     });
   }
 
-  return ctx.dataSource.transaction(async (manager) => {
+  const view = await ctx.dataSource.transaction(async (manager) => {
     const distributor = distributorName ? await ensureDistributor(manager, distributorName) : null;
     if (distributor && input.mapping && Object.keys(input.mapping).length > 0) await rememberMapping(manager, distributor.id, input.kind, mapping);
     const plan = await planFor(manager, input.kind, distributor?.id ?? null, parsed.rows);
@@ -76,11 +77,13 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
     }
     return toImportView(record, distributor?.name);
   });
+  invalidateCatalogIndex(ctx.dataSource);
+  return view;
 }
 
 /** Applies a preview's valid rows in one transaction (planned again against the tables as they are now). */
 export async function commitImport(ctx: AppContext, id: number): Promise<ImportView> {
-  return ctx.dataSource.transaction(async (manager) => {
+  const view = await ctx.dataSource.transaction(async (manager) => {
     const record = await manager.findOneBy(ImportRecord, { id });
     if (!record) throw notFound('Import');
     if (record.status !== 'preview') throw conflict(`This import is already ${record.status}; only a preview can be committed.`);
@@ -91,11 +94,13 @@ export async function commitImport(ctx: AppContext, id: number): Promise<ImportV
     await manager.save(record);
     return toImportView(record, await distributorName(manager, record.distributorId));
   });
+  invalidateCatalogIndex(ctx.dataSource);
+  return view;
 }
 
 /** Reverts a committed import in one transaction. */
 export async function revertImport(ctx: AppContext, id: number): Promise<ImportView> {
-  return ctx.dataSource.transaction(async (manager) => {
+  const view = await ctx.dataSource.transaction(async (manager) => {
     const record = await manager.findOneBy(ImportRecord, { id });
     if (!record) throw notFound('Import');
     if (record.status !== 'committed') throw conflict(`This import is ${record.status}; only a committed import can be reverted.`);
@@ -105,6 +110,8 @@ export async function revertImport(ctx: AppContext, id: number): Promise<ImportV
     await manager.save(record);
     return toImportView(record, await distributorName(manager, record.distributorId));
   });
+  invalidateCatalogIndex(ctx.dataSource);
+  return view;
 }
 
 /** Import history, newest first. */

@@ -62,14 +62,14 @@ async function waitForHealth(url: string, child: ChildProcess): Promise<void> {
   throw new Error('server did not become healthy in 60 s');
 }
 
-async function api(url: string, pathname: string, body: unknown, token?: string) {
+async function api(url: string, pathname: string, body: unknown, token?: string): Promise<{ token: string }> {
   const res = await fetch(`${url}/api${pathname}`, {
     method: 'POST',
     headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
     body: JSON.stringify(body),
   });
   if (!res.ok) throw new Error(`${pathname} answered ${res.status}: ${await res.text()}`);
-  return res.json();
+  return (await res.json()) as { token: string };
 }
 
 export default async function setup(project: TestProject) {
