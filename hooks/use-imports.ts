@@ -1,41 +1,11 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ImportKind } from '@/shared/schemas/equipment';
+import type { ImportView } from '@/shared/schemas/imports';
 import { api, apiBlob, apiRequest, ApiError } from './api-client';
 import { catalogKeys } from './use-catalog';
 import { STALE } from './stale-times';
 
-export type ImportStatus = 'preview' | 'committed' | 'reverted';
-
-export interface ImportRowError {
-  /** 1-based line in the file (the header is line 1). */
-  row: number;
-  column: string;
-  value: string;
-  message: string;
-}
-
-export interface ImportCounts {
-  rows: number;
-  inserted: number;
-  updated: number;
-  unchanged: number;
-  rejected: number;
-  unmatched: number;
-}
-
-/** An import as /api/imports returns it (DESIGN.md §5, contract). */
-export interface ImportView {
-  id: number;
-  kind: ImportKind;
-  status: ImportStatus;
-  fileName: string;
-  distributor?: string;
-  /** Who uploaded it, when the server says. */
-  uploadedBy?: string;
-  createdAt: string;
-  counts: ImportCounts;
-  errors: ImportRowError[];
-}
+export type { ImportCounts, ImportRowError, ImportStatus, ImportView } from '@/shared/schemas/imports';
 
 /** A picked file: a web File, or a native { uri, name, type } part. */
 export type UploadFile = Blob | { uri: string; name: string; type: string };

@@ -37,7 +37,7 @@ export function CatalogBrowser() {
   const setParams = (next: Partial<Params>) => router.setParams({ ...next } as never);
   useEffect(() => {
     if ((params.q ?? '') !== q) setParams({ q: q || undefined, page: undefined });
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // Only the debounced text drives this; params and setParams change on every render.
   }, [q]);
 
   const withFilters = kind !== 'rated-combinations';

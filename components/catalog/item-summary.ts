@@ -13,6 +13,7 @@ export interface ItemSummary {
   keyFacts?: string;
 }
 
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
 type Any = Record<string, any>; // each kind's item is one of the spec shapes; read by field name
 
 /** The short facts of an item, by kind. */

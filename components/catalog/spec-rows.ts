@@ -8,6 +8,7 @@ export interface SpecRow {
   value: string;
 }
 
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
 type Any = Record<string, any>; // read by field name; each kind's fields are listed below
 type Line = [label: string, value: (e: Any) => string | undefined];
 

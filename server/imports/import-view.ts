@@ -1,23 +1,14 @@
-import type { ImportRecord, ImportRowError, ImportStatus } from './import.entity';
+import type { ImportKind } from '../../shared/schemas/equipment';
+import type { ImportView } from '../../shared/schemas/imports';
+import type { ImportRecord } from './import.entity';
 
-/** An import as the API returns it (DESIGN.md §5, contract). */
-export interface ImportView {
-  id: number;
-  kind: string;
-  status: ImportStatus;
-  fileName: string;
-  distributor?: string;
-  /** Name of the admin who uploaded it (history only). */
-  uploadedBy?: string;
-  createdAt: string;
-  counts: { rows: number; inserted: number; updated: number; unchanged: number; rejected: number; unmatched: number };
-  errors: ImportRowError[];
-}
+export type { ImportView };
+
 
 export function toImportView(record: ImportRecord, distributorName?: string | null, uploadedBy?: string): ImportView {
   return {
     id: record.id,
-    kind: record.kind,
+    kind: record.kind as ImportKind,
     status: record.status,
     fileName: record.fileName,
     ...(distributorName ? { distributor: distributorName } : {}),

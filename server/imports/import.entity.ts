@@ -1,12 +1,7 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import type { ImportRowError, ImportStatus } from '../../shared/schemas/imports';
 
-export type ImportStatus = 'preview' | 'committed' | 'reverted';
-export interface ImportRowError {
-  row: number;
-  column: string;
-  value: string;
-  message: string;
-}
+export type { ImportRowError, ImportStatus };
 
 /** One upload: its counts, row errors and, while a preview, the valid rows waiting for commit. */
 @Entity('imports')

@@ -1,6 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { account, launchBrowser, openPage, screenshot, signIn } from './browser';
+import { adminToken, importCsv } from './api-setup';
 
 /**
  * Story 3 in the browser: an admin uploads a distributor price file through Admin → Imports, reads
@@ -23,24 +24,7 @@ const PRICE_CSV = ['model,price,effective_from', `${UNIT_PHONE},"$1,234.50",2024
 // A distributor with its own headers: none match, so the admin maps them in the app.
 const ODD_PRICE_CSV = ['Part Code,Net Cost,Starts', `${UNIT_WIDE},2310.00,2024-02-01`].join('\r\n');
 
-async function adminToken(): Promise<string> {
-  const admin = account('admin');
-  const res = await fetch(`${inject('baseUrl')}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: admin.email, password: admin.password }),
-  });
-  return ((await res.json()) as { token: string }).token;
-}
 
-async function importOutdoorUnits(token: string) {
-  const form = new FormData();
-  form.append('file', new Blob([OUTDOOR_CSV], { type: 'text/csv' }), 'e2e-outdoor-units.csv');
-  form.append('kind', 'outdoor-units');
-  form.append('dryRun', 'false');
-  const res = await fetch(`${inject('baseUrl')}/api/imports`, { method: 'POST', headers: { Authorization: `Bearer ${token}` }, body: form });
-  expect(res.status, await res.clone().text()).toBe(201);
-}
 
 /** Picks a file through the app's own picker button (expo-document-picker's hidden input). */
 async function chooseFile(page: Page, name: string, csv: string) {
@@ -63,7 +47,7 @@ async function openCatalogItem(page: Page, model: string) {
 let browser: Browser;
 beforeAll(async () => {
   browser = await launchBrowser();
-  await importOutdoorUnits(await adminToken());
+  await importCsv(await adminToken(), 'outdoor-units', OUTDOOR_CSV);
 });
 afterAll(async () => {
   await browser?.close();

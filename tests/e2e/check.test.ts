@@ -1,6 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { account, launchBrowser, openPage, screenshot, signIn, type ViewportName } from './browser';
+import { adminToken, importCsv } from './api-setup';
 
 // Invented models unique to this file. The heat pump runs R-410A; the kept coil's factory TXV is set
 // for R-22, which does not meter R-410A (common practice: a metering device rated for the system's refrigerant).
@@ -9,24 +10,7 @@ const COIL = 'E2CK-COIL-R22';
 const OUTDOOR_CSV = ['model,system_type,refrigerant,nominal_tons,metering_required,mca_amps,mocp_amps', `${OUTDOOR},heat-pump,R-410A,3,txv,21.2,35`].join('\n');
 const COIL_CSV = ['model,min_tons,max_tons,refrigerants,metering_type,metering_refrigerant,metering_bidirectional', `${COIL},2.5,3.5,R-22,txv,R-22,yes`].join('\n');
 
-async function adminToken(): Promise<string> {
-  const admin = account('admin');
-  const res = await fetch(`${inject('baseUrl')}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: admin.email, password: admin.password }),
-  });
-  return ((await res.json()) as { token: string }).token;
-}
 
-async function importCsv(token: string, kind: string, csv: string) {
-  const form = new FormData();
-  form.append('file', new Blob([csv], { type: 'text/csv' }), `e2e-check-${kind}.csv`);
-  form.append('kind', kind);
-  form.append('dryRun', 'false');
-  const res = await fetch(`${inject('baseUrl')}/api/imports`, { method: 'POST', headers: { Authorization: `Bearer ${token}` }, body: form });
-  expect(res.status, await res.clone().text()).toBe(201);
-}
 
 async function pick(page: Page, slot: string, model: string) {
   await page.getByTestId(`${slot}-search`).fill(model);
