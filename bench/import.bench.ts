@@ -7,7 +7,7 @@ import type { AppContext } from '../server/context';
 import { openDatabase } from '../server/db/data-source';
 import type { AppConfig } from '../server/env';
 import { uploadImport } from '../server/imports/imports.service';
-import { sqliteHandle } from '../server/imports/sqlite-handle';
+import { sqliteHandle } from '../server/db/sqlite-handle';
 import { round, type Measure } from './measure';
 
 const ROWS = 100_000;

@@ -12,6 +12,8 @@ import { apiRoutes } from './routes';
 export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable('x-powered-by');
+  // API answers are per-user and rarely re-fetched unchanged; hashing every body is not worth it.
+  app.set('etag', false);
   app.set('trust proxy', 'loopback');
   app.use(
     helmet({

@@ -33,13 +33,28 @@ function keyFor(secret: string): KeyObject {
   return key;
 }
 
+/**
+ * Tokens already verified, with their expiry: a phone sends the same token on every request, and
+ * a token can not change, so re-checking its signature each time is wasted work. Bounded; the
+ * expiry is still checked on every use.
+ */
+const verified = new Map<string, { claims: TokenClaims; expiresAtMs: number }>();
+const VERIFIED_MAX = 5000;
+
 /** Verifies signature, algorithm (HS256 only: `alg: none` and others are refused) and expiry. */
 export function verifyToken(secret: string, token: string): TokenClaims {
+  const cacheKey = `${secret}\n${token}`;
+  const known = verified.get(cacheKey);
+  if (known && known.expiresAtMs > Date.now()) return known.claims;
   try {
-    const payload = jwt.verify(token, keyFor(secret), { algorithms: ['HS256'] });
-    const claims = ClaimsSchema.parse(payload);
-    return { userId: Number(claims.sub), role: claims.role };
+    const payload = jwt.verify(token, keyFor(secret), { algorithms: ['HS256'] }) as jwt.JwtPayload;
+    const parsed = ClaimsSchema.parse(payload);
+    const claims = { userId: Number(parsed.sub), role: parsed.role };
+    if (verified.size >= VERIFIED_MAX) verified.clear();
+    verified.set(cacheKey, { claims, expiresAtMs: (payload.exp ?? 0) * 1000 });
+    return claims;
   } catch {
+    verified.delete(cacheKey);
     throw unauthorized('Your session is not valid or has expired. Sign in again.');
   }
 }

@@ -5,7 +5,7 @@ import { KINDS } from '../catalog/catalog-kinds';
 import { PriceEntry } from '../catalog/price-entry.entity';
 import { ImportChange } from './import-change.entity';
 import type { ImportPlan } from './import-plan';
-import { sqliteHandle } from './sqlite-handle';
+import { sqliteHandle } from '../db/sqlite-handle';
 
 const BATCH = 500;
 

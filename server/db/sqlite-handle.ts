@@ -1,8 +1,8 @@
 import type { EntityManager } from 'typeorm';
 
-/** The slice of better-sqlite3's Database the bulk writers use. */
+/** The slice of better-sqlite3's Database that hot paths use (bulk writes, per-request lookups). */
 export interface RawSqlite {
-  prepare(sql: string): { run(...params: unknown[]): unknown };
+  prepare(sql: string): { run(...params: unknown[]): unknown; get(...params: unknown[]): unknown };
 }
 
 /**
