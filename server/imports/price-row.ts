@@ -18,9 +18,16 @@ export function priceToCents(value: unknown): unknown {
   return Math.round(Number(cleaned) * 100);
 }
 
+const DAYS_IN_MONTH = [31, 29, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+
+/** A YYYY-MM-DD that names a real day (Gregorian leap years); arithmetic, not Date: it runs per row. */
 function realDate(value: string) {
-  const d = new Date(`${value}T00:00:00Z`);
-  return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === value;
+  const year = Number(value.slice(0, 4));
+  const month = Number(value.slice(5, 7));
+  const day = Number(value.slice(8, 10));
+  if (month < 1 || month > 12 || day < 1) return false;
+  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+  return day <= (month === 2 && !leap ? 28 : DAYS_IN_MONTH[month - 1]);
 }
 
 /** One price row; `today` fills a blank effective date. */

@@ -66,6 +66,12 @@ describe('importer: awkward price files', () => {
       [3, 'price'],
     ]);
   });
+
+  it('when effective dates fall on leap days, then the Gregorian rule decides which are real', () => {
+    // Gregorian calendar (ISO 8601): leap years divide by 4, except centuries not divisible by 400.
+    const parsed = parse('prices', 'model,price,effective_from\nL1,10,2024-02-29\nL2,10,2000-02-29\nL3,10,2025-02-29\nL4,10,2100-02-29\nL5,10,2025-04-31\nL6,10,2025-13-01\n');
+    expect(parsed.errors.map((e) => e.row)).toEqual([4, 5, 6, 7]);
+  });
 });
 
 describe('importer: awkward catalog files', () => {
