@@ -72,8 +72,25 @@ function componentsMadeBy(pairing: Pairing): string | undefined {
   return latestManufactureDate(dates);
 }
 
-/** A blocker or caution makes the exemption and repair notes beside it noise; one repair note is enough. */
+/**
+ * One verdict per refrigerant: several rules that forbid the install become one blocker citing each
+ * (and the conditions of the others are moot); a blocker or caution makes the exemption and repair
+ * notes beside it noise; one repair note is enough.
+ */
 function tidy(findings: Finding[]): Finding[] {
+  const blockers = findings.filter((f) => f.severity === 'blocker');
+  if (blockers.length > 1) {
+    const [first, ...rest] = blockers;
+    return [
+      {
+        ...first,
+        detail: [first.detail, ...rest.map((f) => `Also: ${f.detail}`)].join(' '),
+        basis: { kind: 'regulation', citation: blockers.map((f) => f.basis.citation).join('; ') },
+        values: { ...first.values, alsoRuleIds: rest.map((f) => String(f.values.ruleId)).join(', ') },
+      },
+    ];
+  }
+  if (blockers.length === 1) return blockers;
   const serious = findings.some((f) => f.severity !== 'info');
   const infos = findings.filter((f) => f.severity === 'info');
   if (serious) return findings.filter((f) => f.severity !== 'info');

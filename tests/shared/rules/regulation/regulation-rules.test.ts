@@ -35,6 +35,15 @@ describe('regulation.refrigerant-transition', () => {
     expectWellFormed(refrigerantTransition, findings);
   });
 
+  it('when two transition rules both forbid a new system, then one blocker cites both and no caution is left beside it', () => {
+    // Parts made 2025 (after 40 CFR 84.54's 2025-01-01 limit, 88 FR 73098) installed 2026 (after 88 FR 88825's cutoff)
+    const findings = run(refrigerantTransition, pairing({ installDate: '2026-03-01', outdoor: { manufactureDate: '2025-03-01' }, coil: { manufactureDate: '2025-03-01' } }));
+    expect(findings.map((f) => f.severity)).toEqual(['blocker']);
+    expect(findings[0].basis.citation).toMatch(/88 FR 73098.*; .*88 FR 88825|88 FR 88825.*; .*88 FR 73098/);
+    expect(findings[0].detail).toMatch(/Also: /);
+    expectWellFormed(refrigerantTransition, findings);
+  });
+
   it('when a repair is checked, then the note says which rule allows it', () => {
     const [f] = run(refrigerantTransition, pairing({ scope: 'component-replacement', installDate: '2026-06-01' }));
     expect(f.detail).toMatch(/Allowed as a repair.*40 CFR 84\.54/);
