@@ -11,6 +11,7 @@ interface Props {
   isMe: boolean;
   wide: boolean;
   onChange(patch: UserPatch): void;
+  onResetPassword(): void;
 }
 
 function RoleMenu({ user, onChange }: Pick<Props, 'user' | 'onChange'>) {
@@ -49,7 +50,15 @@ function ActiveToggle({ user, onChange }: Pick<Props, 'user' | 'onChange'>) {
 }
 
 /** One user: a table row on a wide screen, a stacked entry on a phone. */
-export function UserRow({ user, isMe, wide, onChange }: Props) {
+function ResetButton({ user, onResetPassword }: Pick<Props, 'user' | 'onResetPassword'>) {
+  return (
+    <Button compact mode="text" contentStyle={styles.touch} onPress={onResetPassword} testID={`reset-password-${user.email}`}>
+      Reset password
+    </Button>
+  );
+}
+
+export function UserRow({ user, isMe, wide, onChange, onResetPassword }: Props) {
   const theme = useTandemTheme();
   const status = user.active ? 'Active' : 'Deactivated';
   const identity = (
@@ -73,28 +82,34 @@ export function UserRow({ user, isMe, wide, onChange }: Props) {
             {status}
           </Text>
           <ActiveToggle user={user} onChange={onChange} />
+          <ResetButton user={user} onResetPassword={onResetPassword} />
         </View>
       </View>
     );
   }
   return (
-    <DataTable.Row testID={`user-row-${user.email}`} style={!user.active && styles.inactive}>
+    // A plain row, not DataTable.Row: that one is a ripple marked aria-disabled without onPress, which
+    // makes the buttons inside read as disabled to assistive tech.
+    <View testID={`user-row-${user.email}`} style={[styles.tableRow, { borderBottomColor: theme.colors.outlineVariant }, !user.active && styles.inactive]}>
       <DataTable.Cell style={styles.nameCol}>{identity}</DataTable.Cell>
       <DataTable.Cell>
         <RoleMenu user={user} onChange={onChange} />
       </DataTable.Cell>
       <DataTable.Cell>{status}</DataTable.Cell>
-      <DataTable.Cell style={styles.actionCol}>
+      <View style={[styles.actionCol, styles.actions]}>
         <ActiveToggle user={user} onChange={onChange} />
-      </DataTable.Cell>
-    </DataTable.Row>
+        <ResetButton user={user} onResetPassword={onResetPassword} />
+      </View>
+    </View>
   );
 }
 
 const styles = StyleSheet.create({
   identity: { paddingVertical: spacing.xs },
   nameCol: { flex: 2 },
-  actionCol: { justifyContent: 'flex-end' },
+  actionCol: { flex: 1.6, justifyContent: 'flex-end' },
+  actions: { flexDirection: 'row', alignItems: 'center' },
+  tableRow: { flexDirection: 'row', alignItems: 'center', minHeight: TOUCH_TARGET, paddingHorizontal: spacing.lg, borderBottomWidth: StyleSheet.hairlineWidth },
   touch: { minHeight: TOUCH_TARGET },
   stacked: { paddingVertical: spacing.sm, borderBottomWidth: StyleSheet.hairlineWidth, gap: spacing.xs },
   controls: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, flexWrap: 'wrap' },

@@ -6,9 +6,11 @@ import { errorText } from '@/hooks/error-text';
 import { useIsWide } from '@/hooks/use-layout';
 import { useCurrentUser } from '@/hooks/use-session';
 import { useUpdateUser, useUsers } from '@/hooks/use-users';
+import type { PublicUser } from '@/shared/schemas/auth';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
 import { AddUserDialog } from './add-user-dialog';
+import { ResetPasswordDialog } from './reset-password-dialog';
 import { UserRow } from './user-row';
 
 /** Admin → Users: everyone who can sign in, their role and whether they are active. */
@@ -18,6 +20,8 @@ export function UsersPanel() {
   const me = useCurrentUser();
   const wide = useIsWide();
   const [adding, setAdding] = useState(false);
+  const [resetting, setResetting] = useState<PublicUser | null>(null);
+  const [done, setDone] = useState<string | null>(null);
 
   return (
     <Screen
@@ -30,6 +34,7 @@ export function UsersPanel() {
       }
     >
       {update.isError ? <MessageBanner tone="error">{errorText(update.error)}</MessageBanner> : null}
+      {done && !update.isError ? <MessageBanner tone="success">{done}</MessageBanner> : null}
       {users.isPending ? <ActivityIndicator /> : null}
       {users.isError ? <MessageBanner tone="error">{errorText(users.error)}</MessageBanner> : null}
       {users.data && wide ? (
@@ -41,14 +46,14 @@ export function UsersPanel() {
             <DataTable.Title style={styles.actionCol}> </DataTable.Title>
           </DataTable.Header>
           {users.data.map((u) => (
-            <UserRow key={u.id} user={u} isMe={u.id === me.id} wide onChange={(patch) => update.mutate({ id: u.id, patch })} />
+            <UserRow key={u.id} user={u} isMe={u.id === me.id} wide onChange={(patch) => update.mutate({ id: u.id, patch })} onResetPassword={() => setResetting(u)} />
           ))}
         </DataTable>
       ) : null}
       {users.data && !wide ? (
         <View testID="users-table">
           {users.data.map((u) => (
-            <UserRow key={u.id} user={u} isMe={u.id === me.id} wide={false} onChange={(patch) => update.mutate({ id: u.id, patch })} />
+            <UserRow key={u.id} user={u} isMe={u.id === me.id} wide={false} onChange={(patch) => update.mutate({ id: u.id, patch })} onResetPassword={() => setResetting(u)} />
           ))}
         </View>
       ) : null}
@@ -59,6 +64,11 @@ export function UsersPanel() {
         </Text>
       </View>
       <AddUserDialog visible={adding} onDismiss={() => setAdding(false)} />
+      <ResetPasswordDialog
+        user={resetting}
+        onDismiss={() => setResetting(null)}
+        onReset={(password) => resetting && update.mutate({ id: resetting.id, patch: { password } }, { onSuccess: () => setDone(`New password set for ${resetting.name}.`) })}
+      />
     </Screen>
   );
 }
@@ -66,5 +76,5 @@ export function UsersPanel() {
 const styles = StyleSheet.create({
   button: { minHeight: TOUCH_TARGET },
   nameCol: { flex: 2 },
-  actionCol: { justifyContent: 'flex-end' },
+  actionCol: { flex: 1.6, justifyContent: 'flex-end' },
 });

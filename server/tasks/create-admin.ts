@@ -15,9 +15,23 @@ function flag(name: string): string | undefined {
   return i >= 0 ? process.argv[i + 1] : undefined;
 }
 
+/** Answers to the questions, one a line: asked at a terminal, or read from piped input. */
+function answerSource() {
+  const rl = createInterface({ input: process.stdin, output: process.stdout, terminal: process.stdin.isTTY });
+  const piped = process.stdin.isTTY ? null : rl[Symbol.asyncIterator]();
+  return {
+    ask: async (question: string) => {
+      if (!piped) return rl.question(question);
+      const next = await piped.next();
+      return next.done ? '' : next.value;
+    },
+    close: () => rl.close(),
+  };
+}
+
 async function main() {
-  const rl = createInterface({ input: process.stdin, output: process.stdout });
-  const ask = async (name: string, question: string) => flag(name) ?? (await rl.question(question));
+  const rl = answerSource();
+  const ask = async (name: string, question: string) => flag(name) ?? (await rl.ask(question));
   const input = UserCreateSchema.safeParse({
     email: await ask('email', 'E-mail: '),
     name: await ask('name', 'Name: '),

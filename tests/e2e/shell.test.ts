@@ -49,12 +49,33 @@ describe.each(Object.keys(VIEWPORTS) as ViewportName[])('app shell at the %s vie
     await page.context().close();
   });
 
-  it('when an admin opens Admin → Users, then the table lists the accounts', async () => {
+  it('when an admin opens Admin → Users, then the table lists the accounts, and a user added there can have their password reset', async () => {
     const page = await openPage(browser, viewport);
     await signIn(page, account('admin'));
     await page.goto('/admin/users');
     await expect.poll(() => page.getByTestId(`user-row-${account('tech').email}`).isVisible()).toBe(true);
     await screenshot(page, `admin-users-${viewport}`);
+
+    // Add a user through the dialog, then reset their password; the new one signs in.
+    const email = `new-${viewport}@example.test`;
+    await page.getByTestId('add-user').click();
+    await page.getByTestId('new-user-name').fill(`New ${viewport} tech`);
+    await page.getByTestId('new-user-email').fill(email);
+    await page.getByTestId('new-user-password').fill('first-password-1');
+    await page.getByTestId('new-user-save').click();
+    await expect.poll(() => page.getByTestId(`user-row-${email}`).isVisible()).toBe(true);
+    await expect.poll(() => page.getByTestId('add-user-dialog').count()).toBe(0);
+    await screenshot(page, `admin-user-added-${viewport}`);
+    await page.getByTestId(`reset-password-${email}`).click();
+    await page.getByTestId('reset-password-input').fill('second-password-2');
+    await screenshot(page, `admin-reset-password-${viewport}`);
+    await page.getByTestId('reset-password-save').click();
+    await expect.poll(() => page.getByText('New password set').isVisible()).toBe(true);
     await page.context().close();
+
+    const fresh = await openPage(browser, viewport);
+    await signIn(fresh, { email, password: 'second-password-2', name: '', role: 'tech' });
+    await expect.poll(() => fresh.getByTestId(viewport === 'phone' ? 'bottom-tabs' : 'side-rail').isVisible()).toBe(true);
+    await fresh.context().close();
   });
 });

@@ -1,0 +1,61 @@
+import { StyleSheet } from 'react-native';
+import { Button, Dialog, Portal, Text } from 'react-native-paper';
+import { z } from 'zod';
+import { PasswordSchema, type PublicUser } from '@/shared/schemas/auth';
+import { spacing } from '@/constants/theme';
+import { useZodForm } from '@/hooks/use-zod-form';
+import { FormField } from '@/components/ui/form-field';
+
+const ResetSchema = z.object({ password: PasswordSchema });
+const EMPTY = { password: '' };
+
+interface Props {
+  user: PublicUser | null;
+  onDismiss(): void;
+  onReset(password: string): void;
+}
+
+/** Sets a new password for someone who lost theirs; they can change it under Account. */
+export function ResetPasswordDialog({ user, onDismiss, onReset }: Props) {
+  const form = useZodForm(ResetSchema, EMPTY);
+  const close = () => {
+    form.reset();
+    onDismiss();
+  };
+  const submit = () => {
+    const input = form.validate();
+    if (!input) return;
+    onReset(input.password);
+    close();
+  };
+  return (
+    <Portal>
+      <Dialog visible={user !== null} onDismiss={close} style={styles.dialog} testID="reset-password-dialog">
+        <Dialog.Title>Reset password</Dialog.Title>
+        <Dialog.Content style={styles.gap}>
+          <Text variant="bodyMedium">A new password for {user?.name}. Tell them in person or by phone, not by e-mail.</Text>
+          <FormField
+            label="New password"
+            secureTextEntry
+            value={form.values.password}
+            onChangeText={(t) => form.setField('password', t)}
+            error={form.errors.password}
+            hint="At least 10 characters."
+            testID="reset-password-input"
+          />
+        </Dialog.Content>
+        <Dialog.Actions>
+          <Button onPress={close}>Cancel</Button>
+          <Button mode="contained" onPress={submit} testID="reset-password-save">
+            Set password
+          </Button>
+        </Dialog.Actions>
+      </Dialog>
+    </Portal>
+  );
+}
+
+const styles = StyleSheet.create({
+  dialog: { maxWidth: 480, width: '92%', alignSelf: 'center' },
+  gap: { gap: spacing.sm },
+});
