@@ -37,7 +37,8 @@ export function HistoryEntry({ entry, wide, onRevert }: Props) {
     ) : null;
   if (wide) {
     return (
-      <DataTable.Row testID={`history-${entry.id}`}>
+      // A plain row: DataTable.Row without onPress is marked aria-disabled, and so would be its Revert button.
+      <View testID={`history-${entry.id}`} style={[styles.tableRow, { borderBottomColor: theme.colors.outlineVariant }]}>
         <View style={[styles.fileCol, styles.cell]}>
           <Text variant="titleSmall">{entry.fileName}</Text>
           <Text variant="bodySmall">{what}</Text>
@@ -50,7 +51,7 @@ export function HistoryEntry({ entry, wide, onRevert }: Props) {
           <Text variant="bodySmall">{countsLine(entry.counts)}</Text>
         </View>
         <View style={[styles.actionCol, styles.cell]}>{revert}</View>
-      </DataTable.Row>
+      </View>
     );
   }
   return (
@@ -78,4 +79,5 @@ const styles = StyleSheet.create({
   stacked: { paddingVertical: spacing.sm, gap: 2, borderBottomWidth: StyleSheet.hairlineWidth },
   stackedAction: { flexDirection: 'row', marginTop: spacing.xs },
   touch: { minHeight: TOUCH_TARGET },
+  tableRow: { flexDirection: 'row', minHeight: TOUCH_TARGET, paddingHorizontal: spacing.lg, borderBottomWidth: StyleSheet.hairlineWidth },
 });
