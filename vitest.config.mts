@@ -9,7 +9,7 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: 'unit', include: ['tests/shared/**/*.test.ts'], environment: 'node' },
+        test: { name: 'unit', include: ['tests/shared/**/*.test.ts', 'tests/app/**/*.test.ts'], environment: 'node' },
       },
       {
         extends: true,

@@ -3,6 +3,7 @@ import { List, Text } from 'react-native-paper';
 import type { Finding } from '@/shared/rules/types';
 import { spacing } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { valueLabel } from './value-label';
 import { BASIS_WORDS, SEVERITY_GROUPS } from './verdict-words';
 
 const shown = (v: unknown) => (v === null || v === undefined || v === '' ? null : typeof v === 'boolean' ? (v ? 'yes' : 'no') : String(v));
@@ -43,7 +44,7 @@ export function FindingRow({ finding }: { finding: Finding }) {
             <Text variant="labelLarge">Values used</Text>
             {values.map(([k, v]) => (
               <Text key={k} variant="bodySmall">
-                {k}: {shown(v)}
+                {valueLabel(k)}: {shown(v)}
               </Text>
             ))}
           </View>
