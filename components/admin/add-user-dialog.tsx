@@ -1,12 +1,11 @@
-import { StyleSheet } from 'react-native';
-import { Button, Dialog, Portal, SegmentedButtons, Text } from 'react-native-paper';
+import { Button, SegmentedButtons, Text } from 'react-native-paper';
 import { ROLES, UserCreateSchema } from '@/shared/schemas/auth';
-import { spacing } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
 import { useCreateUser } from '@/hooks/use-users';
 import { useZodForm } from '@/hooks/use-zod-form';
 import { ROLE_LABELS } from '@/components/account/role-labels';
 import { FormField } from '@/components/ui/form-field';
+import { AppDialog } from '@/components/ui/app-dialog';
 import { MessageBanner } from '@/components/ui/message-banner';
 
 const EMPTY = { email: '', name: '', role: 'tech' as const, password: '' };
@@ -26,49 +25,52 @@ export function AddUserDialog({ visible, onDismiss }: { visible: boolean; onDism
   };
 
   return (
-    <Portal>
-      <Dialog visible={visible} onDismiss={close} style={styles.dialog} testID="add-user-dialog">
-        <Dialog.Title>Add user</Dialog.Title>
-        <Dialog.Content style={styles.gap}>
-          {create.isError ? <MessageBanner tone="error">{errorText(create.error)}</MessageBanner> : null}
-          <FormField label="Name" value={form.values.name} onChangeText={(t) => form.setField('name', t)} error={form.errors.name} testID="new-user-name" />
-          <FormField
-            label="E-mail"
-            value={form.values.email}
-            onChangeText={(t) => form.setField('email', t)}
-            error={form.errors.email}
-            autoCapitalize="none"
-            inputMode="email"
-            testID="new-user-email"
-          />
-          <Text variant="labelLarge">Role</Text>
-          <SegmentedButtons
-            value={form.values.role}
-            onValueChange={(v) => form.setField('role', v as (typeof ROLES)[number])}
-            buttons={ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }))}
-          />
-          <FormField
-            label="First password"
-            secureTextEntry
-            value={form.values.password}
-            onChangeText={(t) => form.setField('password', t)}
-            error={form.errors.password}
-            hint="At least 10 characters; they can change it under Account."
-            testID="new-user-password"
-          />
-        </Dialog.Content>
-        <Dialog.Actions>
+    <AppDialog
+      visible={visible}
+      onDismiss={close}
+      title="Add user"
+      testID="add-user-dialog"
+      actions={
+        <>
           <Button onPress={close}>Cancel</Button>
           <Button mode="contained" onPress={submit} loading={create.isPending} testID="new-user-save">
             Add
           </Button>
-        </Dialog.Actions>
-      </Dialog>
-    </Portal>
+        </>
+      }
+    >
+      {create.isError ? <MessageBanner tone="error">{errorText(create.error)}</MessageBanner> : null}
+      <FormField
+        label="Name"
+        value={form.values.name}
+        onChangeText={(t) => form.setField('name', t)}
+        error={form.errors.name}
+        testID="new-user-name"
+      />
+      <FormField
+        label="E-mail"
+        value={form.values.email}
+        onChangeText={(t) => form.setField('email', t)}
+        error={form.errors.email}
+        autoCapitalize="none"
+        inputMode="email"
+        testID="new-user-email"
+      />
+      <Text variant="labelLarge">Role</Text>
+      <SegmentedButtons
+        value={form.values.role}
+        onValueChange={(v) => form.setField('role', v as (typeof ROLES)[number])}
+        buttons={ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }))}
+      />
+      <FormField
+        label="First password"
+        secureTextEntry
+        value={form.values.password}
+        onChangeText={(t) => form.setField('password', t)}
+        error={form.errors.password}
+        hint="At least 10 characters; they can change it under Account."
+        testID="new-user-password"
+      />
+    </AppDialog>
   );
 }
-
-const styles = StyleSheet.create({
-  dialog: { maxWidth: 520, width: '92%', alignSelf: 'center' },
-  gap: { gap: spacing.sm },
-});

@@ -1,9 +1,8 @@
-import { StyleSheet } from 'react-native';
-import { Button, Dialog, Portal, Text } from 'react-native-paper';
+import { Button, Text } from 'react-native-paper';
 import { z } from 'zod';
 import { PasswordSchema, type PublicUser } from '@/shared/schemas/auth';
-import { spacing } from '@/constants/theme';
 import { useZodForm } from '@/hooks/use-zod-form';
+import { AppDialog } from '@/components/ui/app-dialog';
 import { FormField } from '@/components/ui/form-field';
 
 const ResetSchema = z.object({ password: PasswordSchema });
@@ -29,33 +28,30 @@ export function ResetPasswordDialog({ user, onDismiss, onReset }: Props) {
     close();
   };
   return (
-    <Portal>
-      <Dialog visible={user !== null} onDismiss={close} style={styles.dialog} testID="reset-password-dialog">
-        <Dialog.Title>Reset password</Dialog.Title>
-        <Dialog.Content style={styles.gap}>
-          <Text variant="bodyMedium">A new password for {user?.name}. Tell them in person or by phone, not by e-mail.</Text>
-          <FormField
-            label="New password"
-            secureTextEntry
-            value={form.values.password}
-            onChangeText={(t) => form.setField('password', t)}
-            error={form.errors.password}
-            hint="At least 10 characters."
-            testID="reset-password-input"
-          />
-        </Dialog.Content>
-        <Dialog.Actions>
+    <AppDialog
+      visible={user !== null}
+      onDismiss={close}
+      title="Reset password"
+      testID="reset-password-dialog"
+      actions={
+        <>
           <Button onPress={close}>Cancel</Button>
           <Button mode="contained" onPress={submit} testID="reset-password-save">
             Set password
           </Button>
-        </Dialog.Actions>
-      </Dialog>
-    </Portal>
+        </>
+      }
+    >
+      <Text variant="bodyMedium">A new password for {user?.name}. Tell them in person or by phone, not by e-mail.</Text>
+      <FormField
+        label="New password"
+        secureTextEntry
+        value={form.values.password}
+        onChangeText={(t) => form.setField('password', t)}
+        error={form.errors.password}
+        hint="At least 10 characters."
+        testID="reset-password-input"
+      />
+    </AppDialog>
   );
 }
-
-const styles = StyleSheet.create({
-  dialog: { maxWidth: 480, width: '92%', alignSelf: 'center' },
-  gap: { gap: spacing.sm },
-});

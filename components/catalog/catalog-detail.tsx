@@ -1,12 +1,13 @@
 import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
-import { ActivityIndicator, Button, Card, Text } from 'react-native-paper';
+import { ActivityIndicator, Button } from 'react-native-paper';
 import type { CatalogKind } from '@/shared/schemas/equipment';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
 import { useCatalogDetail } from '@/hooks/use-catalog';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
+import { SectionCard } from '@/components/ui/section-card';
 import { KIND_SINGULAR } from './catalog-kind-labels';
 import { CombinationList } from './combination-list';
 import { summarize } from './item-summary';
@@ -14,18 +15,6 @@ import { PriceList } from './price-list';
 import { SpecList } from './spec-list';
 import { specRows } from './spec-rows';
 
-function Section({ title, children, testID }: { title: string; children: React.ReactNode; testID?: string }) {
-  return (
-    <Card mode="outlined" testID={testID}>
-      <Card.Content style={styles.section}>
-        <Text variant="titleLarge" accessibilityRole="header">
-          {title}
-        </Text>
-        {children}
-      </Card.Content>
-    </Card>
-  );
-}
 
 /** One catalog item: every spec in plain words, prices by distributor, the rated combinations it is in. */
 export function CatalogDetail({ kind, id }: { kind: CatalogKind; id: number }) {
@@ -49,18 +38,18 @@ export function CatalogDetail({ kind, id }: { kind: CatalogKind; id: number }) {
       {detail.isError ? <MessageBanner tone="error">{errorText(detail.error)}</MessageBanner> : null}
       {data ? (
         <View style={styles.body}>
-          <Section title="Specifications">
+          <SectionCard title="Specifications">
             <SpecList rows={specRows(kind, data.item)} />
-          </Section>
+          </SectionCard>
           {kind !== 'rated-combinations' ? (
-            <Section title="Prices" testID="catalog-prices-section">
+            <SectionCard title="Prices" testID="catalog-prices-section">
               <PriceList prices={data.prices} />
-            </Section>
+            </SectionCard>
           ) : null}
           {kind === 'outdoor-units' || kind === 'indoor-coils' || kind === 'air-handlers' ? (
-            <Section title="Rated combinations">
+            <SectionCard title="Rated combinations">
               <CombinationList combinations={data.ratedCombinations} />
-            </Section>
+            </SectionCard>
           ) : null}
         </View>
       ) : null}
@@ -70,6 +59,5 @@ export function CatalogDetail({ kind, id }: { kind: CatalogKind; id: number }) {
 
 const styles = StyleSheet.create({
   body: { gap: spacing.lg },
-  section: { gap: spacing.sm },
   touch: { minHeight: TOUCH_TARGET },
 });

@@ -1,11 +1,12 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { Card, ProgressBar, Text } from 'react-native-paper';
+import { ProgressBar, Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
 import { headerProblemOf, useImports, useUploadPreview, type HeaderProblem, type ImportView } from '@/hooks/use-imports';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
+import { SectionCard } from '@/components/ui/section-card';
 import { ColumnMappingForm } from './column-mapping-form';
 import { ImportHistory } from './import-history';
 import { ImportPreview } from './import-preview';
@@ -15,18 +16,6 @@ import { UploadForm, type UploadChoice } from './upload-form';
 
 const START: UploadChoice = { kind: 'prices', distributor: '', picked: null };
 
-function Section({ title, children }: { title: string; children: React.ReactNode }) {
-  return (
-    <Card mode="outlined">
-      <Card.Content style={styles.gap}>
-        <Text variant="titleLarge" accessibilityRole="header">
-          {title}
-        </Text>
-        {children}
-      </Card.Content>
-    </Card>
-  );
-}
 
 /** Admin → Imports: upload a file as a dry run, read the preview, commit it; the history with revert. */
 export function ImportsPanel() {
@@ -70,7 +59,7 @@ export function ImportsPanel() {
 
   return (
     <Screen title="Imports" subtitle="Catalog and distributor price files: check them first, then commit; any import can be reverted.">
-      <Section title="Upload a file">
+      <SectionCard title="Upload a file">
         <UploadForm
           value={choice}
           knownDistributors={known}
@@ -98,7 +87,7 @@ export function ImportsPanel() {
             {errorText(upload.error)}
           </MessageBanner>
         ) : null}
-      </Section>
+      </SectionCard>
       {headerProblem ? (
         <ColumnMappingForm
           key={headerProblem.foundColumns.join('|')}
@@ -109,12 +98,12 @@ export function ImportsPanel() {
         />
       ) : null}
       {preview ? <ImportPreview preview={preview} onCommitted={setPreview} onDiscard={startOver} /> : null}
-      <Section title="Templates">
+      <SectionCard title="Templates">
         <TemplateLinks />
-      </Section>
-      <Section title="History">
+      </SectionCard>
+      <SectionCard title="History">
         <ImportHistory />
-      </Section>
+      </SectionCard>
     </Screen>
   );
 }

@@ -1,8 +1,7 @@
-import { StyleSheet } from 'react-native';
-import { Button, Dialog, Portal, Text } from 'react-native-paper';
-import { spacing } from '@/constants/theme';
+import { Button, Text } from 'react-native-paper';
 import { errorText } from '@/hooks/error-text';
 import { useRevertImport, type ImportView } from '@/hooks/use-imports';
+import { AppDialog } from '@/components/ui/app-dialog';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { IMPORT_KIND_LABELS } from './import-labels';
 
@@ -14,32 +13,34 @@ export function RevertDialog({ target, onDismiss }: { target: ImportView | null;
     onDismiss();
   };
   return (
-    <Portal>
-      <Dialog visible={target !== null} onDismiss={close} style={styles.dialog} testID="revert-dialog">
-        <Dialog.Title>Revert this import?</Dialog.Title>
-        <Dialog.Content style={styles.gap}>
-          {target ? (
-            <Text variant="bodyMedium">
-              {IMPORT_KIND_LABELS[target.kind]} from “{target.fileName}”: the {target.counts.inserted} rows it added are removed and the{' '}
-              {target.counts.updated} rows it changed go back to what they were, all in one step.
-            </Text>
-          ) : null}
-          {revert.isError ? <MessageBanner tone="error">{errorText(revert.error)}</MessageBanner> : null}
-        </Dialog.Content>
-        <Dialog.Actions>
+    <AppDialog
+      visible={target !== null}
+      onDismiss={close}
+      title="Revert this import?"
+      testID="revert-dialog"
+      actions={
+        <>
           <Button onPress={close} testID="revert-cancel">
             Keep it
           </Button>
-          <Button mode="contained" loading={revert.isPending} onPress={() => target && revert.mutate(target.id, { onSuccess: close })} testID="revert-confirm">
+          <Button
+            mode="contained"
+            loading={revert.isPending}
+            onPress={() => target && revert.mutate(target.id, { onSuccess: close })}
+            testID="revert-confirm"
+          >
             Revert
           </Button>
-        </Dialog.Actions>
-      </Dialog>
-    </Portal>
+        </>
+      }
+    >
+      {target ? (
+        <Text variant="bodyMedium">
+          {IMPORT_KIND_LABELS[target.kind]} from “{target.fileName}”: the {target.counts.inserted} rows it added are removed and the{' '}
+          {target.counts.updated} rows it changed go back to what they were, all in one step.
+        </Text>
+      ) : null}
+      {revert.isError ? <MessageBanner tone="error">{errorText(revert.error)}</MessageBanner> : null}
+    </AppDialog>
   );
 }
-
-const styles = StyleSheet.create({
-  dialog: { maxWidth: 520, width: '92%', alignSelf: 'center' },
-  gap: { gap: spacing.sm },
-});

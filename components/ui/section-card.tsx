@@ -1,0 +1,20 @@
+import type { ReactNode } from 'react';
+import { StyleSheet } from 'react-native';
+import { Card, Text } from 'react-native-paper';
+import { spacing } from '@/constants/theme';
+
+/** An outlined card headed by a title (a heading for screen readers). */
+export function SectionCard({ title, children, testID }: { title: string; children: ReactNode; testID?: string }) {
+  return (
+    <Card mode="outlined" testID={testID}>
+      <Card.Content style={styles.content}>
+        <Text variant="titleLarge" accessibilityRole="header">
+          {title}
+        </Text>
+        {children}
+      </Card.Content>
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({ content: { gap: spacing.md } });
