@@ -12,7 +12,7 @@ export function useZodForm<S extends z.ZodType<unknown, Record<string, unknown>>
   const setField = useCallback(<K extends keyof z.input<S>>(key: K, value: z.input<S>[K]) => {
     setValues((v) => ({ ...v, [key]: value }));
     setErrors((e) => {
-      if (!(key as string in e)) return e;
+      if (!((key as string) in e)) return e;
       const next = { ...e };
       delete next[key as string];
       return next;
@@ -40,5 +40,12 @@ export function useZodForm<S extends z.ZodType<unknown, Record<string, unknown>>
     setErrors({});
   }, [initial]);
 
-  return { values, errors, setField, validate, reset, setErrors };
+  /** The props a text field needs for one key: its value, its change handler and its message. */
+  const bind = <K extends keyof z.input<S> & string>(key: K) => ({
+    value: String(values[key] ?? ''),
+    onChangeText: (text: string) => setField(key, text as z.input<S>[K]),
+    error: errors[key],
+  });
+
+  return { values, errors, setField, validate, reset, setErrors, bind };
 }

@@ -50,20 +50,11 @@ export function AccountPanel() {
         <Card.Content style={styles.gap}>
           {change.isError ? <MessageBanner tone="error">{errorText(change.error)}</MessageBanner> : null}
           {done ? <MessageBanner tone="success">Password changed.</MessageBanner> : null}
-          <FormField
-            label="Current password"
-            secureTextEntry
-            value={form.values.currentPassword}
-            onChangeText={(t) => form.setField('currentPassword', t)}
-            error={form.errors.currentPassword}
-            autoComplete="current-password"
-          />
+          <FormField label="Current password" secureTextEntry {...form.bind('currentPassword')} autoComplete="current-password" />
           <FormField
             label="New password"
             secureTextEntry
-            value={form.values.newPassword}
-            onChangeText={(t) => form.setField('newPassword', t)}
-            error={form.errors.newPassword}
+            {...form.bind('newPassword')}
             hint="At least 10 characters."
             autoComplete="new-password"
           />

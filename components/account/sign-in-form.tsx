@@ -51,9 +51,7 @@ export function SignInForm() {
           <FormField
             label="E-mail"
             testID="sign-in-email"
-            value={form.values.email}
-            onChangeText={(t) => form.setField('email', t)}
-            error={form.errors.email}
+            {...form.bind('email')}
             autoCapitalize="none"
             autoComplete="email"
             keyboardType="email-address"
@@ -62,9 +60,7 @@ export function SignInForm() {
           <FormField
             label="Password"
             testID="sign-in-password"
-            value={form.values.password}
-            onChangeText={(t) => form.setField('password', t)}
-            error={form.errors.password}
+            {...form.bind('password')}
             secureTextEntry
             autoComplete="current-password"
             onSubmitEditing={submit}

@@ -40,22 +40,8 @@ export function AddUserDialog({ visible, onDismiss }: { visible: boolean; onDism
       }
     >
       {create.isError ? <MessageBanner tone="error">{errorText(create.error)}</MessageBanner> : null}
-      <FormField
-        label="Name"
-        value={form.values.name}
-        onChangeText={(t) => form.setField('name', t)}
-        error={form.errors.name}
-        testID="new-user-name"
-      />
-      <FormField
-        label="E-mail"
-        value={form.values.email}
-        onChangeText={(t) => form.setField('email', t)}
-        error={form.errors.email}
-        autoCapitalize="none"
-        inputMode="email"
-        testID="new-user-email"
-      />
+      <FormField label="Name" {...form.bind('name')} testID="new-user-name" />
+      <FormField label="E-mail" {...form.bind('email')} autoCapitalize="none" inputMode="email" testID="new-user-email" />
       <Text variant="labelLarge">Role</Text>
       <SegmentedButtons
         value={form.values.role}
@@ -65,9 +51,7 @@ export function AddUserDialog({ visible, onDismiss }: { visible: boolean; onDism
       <FormField
         label="First password"
         secureTextEntry
-        value={form.values.password}
-        onChangeText={(t) => form.setField('password', t)}
-        error={form.errors.password}
+        {...form.bind('password')}
         hint="At least 10 characters; they can change it under Account."
         testID="new-user-password"
       />

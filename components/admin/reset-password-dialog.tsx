@@ -46,9 +46,7 @@ export function ResetPasswordDialog({ user, onDismiss, onReset }: Props) {
       <FormField
         label="New password"
         secureTextEntry
-        value={form.values.password}
-        onChangeText={(t) => form.setField('password', t)}
-        error={form.errors.password}
+        {...form.bind('password')}
         hint="At least 10 characters."
         testID="reset-password-input"
       />
