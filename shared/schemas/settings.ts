@@ -28,6 +28,12 @@ export const RuleSettingsSchema = z
     defaultTargetSubcoolingF: z.number().min(0).max(30),
     defaultMaxLineLengthFt: z.number().min(5).max(500),
     defaultMaxLiftFt: z.number().min(0).max(300),
+    // Start-up readings (issue 9): the verdict's margins and the evacuation limits.
+    superheatToleranceF: z.number().min(0.5).max(15),
+    subcoolingToleranceF: z.number().min(0.5).max(10),
+    evacuationTargetMicrons: z.number().int().min(50).max(5000),
+    decayLimitMicrons: z.number().int().min(50).max(5000),
+    decayHoldMinutes: z.number().int().min(1).max(120),
     rebateTier: RebateTierSchema.optional(),
   })
   .refine((s) => s.cfmPerTonMax > s.cfmPerTonMin, { error: 'cfmPerTonMax must be above cfmPerTonMin', path: ['cfmPerTonMax'] });
