@@ -19,11 +19,11 @@ describe('GET /api/refrigerants', () => {
     const res = await request(t.app).get('/api/refrigerants').set(auth()).expect(200);
     const byId = Object.fromEntries(res.body.items.map((r: { id: string }) => [r.id, r]));
     expect(Object.keys(byId)).toEqual(expect.arrayContaining(['R-22', 'R-410A', 'R-32', 'R-454B']));
-    // A1 / 2088 (2087.5 rounded), A2L / 675, A2L / 466: ASHRAE 34 groups, IPCC AR4 GWPs (values.json REF-02..04, GWP blend table)
+    // A1 / 2088 (2087.5 rounded), A2L / 675, A2L / 466: ASHRAE 34 groups, IPCC AR4 GWPs (values.json RP-02, RP-03, RP-04)
     expect(byId['R-410A']).toMatchObject({ safetyClass: 'A1', gwp: 2088, oil: 'poe', zeotropic: true });
     expect(byId['R-32']).toMatchObject({ safetyClass: 'A2L', gwp: 675, oil: 'poe', zeotropic: false, glideF: 0 });
     expect(byId['R-454B']).toMatchObject({ safetyClass: 'A2L', oil: 'poe', zeotropic: true });
-    expect(Math.abs(byId['R-454B'].gwp - 466)).toBeLessThanOrEqual(2); // values.json: 466.3 ± 2 (AR4 basis)
+    expect(Math.abs(byId['R-454B'].gwp - 466)).toBeLessThanOrEqual(2); // values.json RP-04: 466.3 ± 2 (AR4 basis)
     // R-454B glide 2.7 °F at a 40 °F dew point: CoolProp 8.0.0 mixture model (values.json PT-05), ± 0.5 °F
     expect(byId['R-454B'].glideAtDewF).toBe(40);
     expect(Math.abs(byId['R-454B'].glideF - 2.7)).toBeLessThanOrEqual(0.5);
@@ -76,7 +76,7 @@ describe('GET /api/refrigerants/:id/saturation', () => {
   });
 
   it('when the gauges read at 5,000 ft, then the same saturation needs the thinner atmosphere more gauge pressure', async () => {
-    // Standard atmosphere at 5,000 ft: 12.228 psia vs 14.696 at sea level (values.json PT-06, ASHRAE Fundamentals ch.1 Table 1)
+    // Standard atmosphere at 5,000 ft: 12.228 psia vs 14.696 at sea level (values.json PS-05, ASHRAE Fundamentals ch.1 Table 1)
     const sea = await saturation('R-410A', 'tempF=40').expect(200);
     const high = await saturation('R-410A', 'tempF=40&altitudeFt=5000').expect(200);
     expect(high.body.dewPsig - sea.body.dewPsig).toBeCloseTo(14.696 - 12.228, 1);
