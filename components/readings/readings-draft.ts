@@ -100,6 +100,9 @@ export function liveReadings(draft: ReadingsDraft, settings: RuleSettings): Live
   live.indoorWbF = indoor.indoorWbF;
 
   live.missing = NEEDED.filter(({ key }) => (key === 'meteringType' ? !draft.meteringType : n[key] === undefined && !errors[key])).map((f) => f.label);
+  // A fixed orifice's target superheat comes from the indoor wet bulb (cooling only).
+  const wbTyped = draft.indoorBy === 'wet-bulb' ? n.indoorWbF !== undefined || errors.indoorWbF : n.indoorDbF !== undefined && n.indoorRhPct !== undefined;
+  if (draft.meteringType === 'piston' && draft.mode === 'cooling' && !wbTyped) live.missing.push('indoor wet bulb');
   if (live.missing.length || Object.keys(errors).length) return live;
 
   const parsed = CommissioningEvaluateSchema.safeParse({
