@@ -21,3 +21,10 @@ export function formatNumber(value: number | undefined, digits = 1): string {
   const text = value.toFixed(digits);
   return (text.startsWith('-') && Number(text) !== 0 ? '−' + text.slice(1) : text.replace(/^-/, ''));
 }
+
+/** "118 psig is above …" → "118 psig is above ….": the shared messages read as a sentence on screen. */
+export function asSentence(message: string): string {
+  const t = message.trim();
+  if (!t) return t;
+  return t[0].toUpperCase() + t.slice(1) + (/[.!?]$/.test(t) ? '' : '.');
+}

@@ -1,5 +1,5 @@
 import { bubblePointF, bubblePressurePsig, dewPointF, dewPressurePsig, SaturationRangeError } from '@/shared/refrigerants';
-import { readNumber } from './number-text';
+import { asSentence, readNumber } from './number-text';
 
 export interface LookupAnswer {
   bubble?: number;
@@ -15,7 +15,7 @@ function solve(text: string, bubble: (v: number) => number, dew: (v: number) => 
   try {
     return { bubble: bubble(v), dew: dew(v) };
   } catch (err) {
-    if (err instanceof SaturationRangeError) return { error: err.message };
+    if (err instanceof SaturationRangeError) return { error: asSentence(err.message) };
     throw err;
   }
 }

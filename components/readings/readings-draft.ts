@@ -1,8 +1,8 @@
 import type { RuleSettings } from '@/shared/rules/types';
 import { CommissioningEvaluateSchema, type CommissioningEvaluateInput, type CommissioningEvaluateResult } from '@/shared/schemas/commissioning';
 import { dewPointF, bubblePointF, SaturationRangeError } from '@/shared/refrigerants';
-import { evaluateReadings, wetBulbF } from '@/shared/commissioning';
-import { plainIssue, readNumber } from './number-text';
+import { evaluateReadings, ReadingInputError, wetBulbF } from '@/shared/commissioning';
+import { asSentence, plainIssue, readNumber } from './number-text';
 
 /** The Readings form as typed: every number kept as text so a half-typed "3." survives. */
 export interface ReadingsDraft {
@@ -62,7 +62,7 @@ function saturated(compute: () => number, key: ReadingKey, errors: LiveReadings[
     return compute();
   } catch (err) {
     if (err instanceof SaturationRangeError) {
-      errors[key] = err.message;
+      errors[key] = asSentence(err.message);
       return undefined;
     }
     throw err;
@@ -125,8 +125,9 @@ export function liveReadings(draft: ReadingsDraft, settings: RuleSettings): Live
   try {
     live.result = evaluateReadings(parsed.data, settings);
   } catch (err) {
-    if (!(err instanceof SaturationRangeError)) throw err;
-    errors[(READING_KEYS as readonly string[]).includes(err.field) ? (err.field as ReadingKey) : 'suctionPsig'] = err.message;
+    if (!(err instanceof ReadingInputError)) throw err;
+    const key = (READING_KEYS as readonly string[]).includes(err.field) ? (err.field as ReadingKey) : 'suctionPsig';
+    errors[key] = asSentence(err.message);
   }
   return live;
 }

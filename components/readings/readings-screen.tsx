@@ -62,7 +62,7 @@ export function ReadingsScreen() {
       <PtLookupCard refrigerant={refrigerant.id} altitudeFt={altitudeFt} zeotropic={refrigerant.zeotropic} />
     </>
   ) : null;
-  const evac = <EvacuationSection draft={evacuation} settings={settings} onChange={(next) => updateReadings((s) => ({ ...s, evacuation: next }))} />;
+  const evac = <EvacuationSection draft={evacuation} settings={settings} altitudeFt={altitudeFt} onChange={(next) => updateReadings((s) => ({ ...s, evacuation: next }))} />;
   const safety = <SafetyNote points={readingsSafetyPoints(draft.refrigerant)} />;
 
   return (

@@ -1,3 +1,4 @@
+import { ReadingInputError } from '../../shared/commissioning';
 import { SaturationRangeError } from '../../shared/refrigerants';
 import { AppError } from '../lib/errors';
 
@@ -14,7 +15,8 @@ export function withRangeCheck<T>(compute: () => T, fieldName: (field: string) =
   try {
     return compute();
   } catch (err) {
-    if (err instanceof SaturationRangeError) throw fieldError(fieldName(err.field), err.message);
+    if (err instanceof SaturationRangeError) throw fieldError(err.field === 'refrigerant' ? 'refrigerant' : fieldName(err.field), err.message);
+    if (err instanceof ReadingInputError) throw fieldError(err.field, err.message);
     throw err;
   }
 }
