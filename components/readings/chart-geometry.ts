@@ -20,11 +20,11 @@ export interface ChartModel {
 
 const STEP_F = 2.5;
 
-/** Tick spacing for a span: 10, 20, 25, 50, 100 … so about five ticks show. */
-function tickStep(span: number): number {
-  const raw = span / 5;
+/** Tick spacing for a span: 10, 20, 50, 100 … so about `count` ticks show. */
+function tickStep(span: number, count: number): number {
+  const raw = span / count;
   const pow = 10 ** Math.floor(Math.log10(raw));
-  const nice = [1, 2, 2.5, 5, 10].find((m) => m * pow >= raw) ?? 10;
+  const nice = [1, 2, 5, 10].find((m) => m * pow >= raw) ?? 10;
   return nice * pow;
 }
 
@@ -42,7 +42,7 @@ export function chartModel(refrigerant: string, altitudeFt: number, readings: Ch
   temps.push(maxF);
   const bubble = temps.map((t) => bubblePressurePsig(t, refrigerant, altitudeFt));
   const dew = temps.map((t) => dewPressurePsig(t, refrigerant, altitudeFt));
-  const yStep = tickStep(Math.max(...bubble, ...readings.map((r) => r.psig)));
+  const yStep = tickStep(Math.max(...bubble, ...readings.map((r) => r.psig)), 6);
   const maxPsig = Math.ceil(Math.max(...bubble, ...readings.map((r) => r.psig)) / yStep) * yStep;
   const minPsig = Math.min(0, Math.floor(Math.min(...dew) / yStep) * yStep);
 
@@ -51,7 +51,7 @@ export function chartModel(refrigerant: string, altitudeFt: number, readings: Ch
   const y = (p: number) => plot.top + plot.height - ((p - minPsig) / (maxPsig - minPsig)) * plot.height;
   const path = (ps: number[]) => ps.map((p, i) => `${i ? 'L' : 'M'}${x(temps[i]).toFixed(1)},${y(p).toFixed(1)}`).join(' ');
 
-  const xStep = tickStep(maxF - minF);
+  const xStep = tickStep(maxF - minF, 7);
   const xTicks: ChartModel['xTicks'] = [];
   for (let f = Math.ceil(minF / xStep) * xStep; f <= maxF; f += xStep) xTicks.push({ value: f, x: x(f) });
   const yTicks: ChartModel['yTicks'] = [];

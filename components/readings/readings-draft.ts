@@ -56,6 +56,9 @@ const NEEDED: { key: ReadingKey | 'meteringType'; label: string }[] = [
   { key: 'outdoorDbF', label: 'outdoor dry bulb' },
 ];
 
+/** To 0.1 °F, as the shared evaluation rounds, so the live figures and the verdict's agree. */
+const round1 = (v: number) => Math.round(v * 10) / 10;
+
 /** Runs a saturation step; a reading out of the refrigerant's range becomes the field's message. */
 function saturated(compute: () => number, key: ReadingKey, errors: LiveReadings['errors']): number | undefined {
   try {
@@ -88,13 +91,13 @@ export function liveReadings(draft: ReadingsDraft, settings: RuleSettings): Live
 
   if (ref && n.suctionPsig !== undefined) {
     const psig = n.suctionPsig;
-    live.suctionSatF = saturated(() => dewPointF(psig, ref, altitudeFt), 'suctionPsig', errors);
-    if (live.suctionSatF !== undefined && n.suctionLineF !== undefined) live.superheatF = n.suctionLineF - live.suctionSatF;
+    live.suctionSatF = saturated(() => round1(dewPointF(psig, ref, altitudeFt)), 'suctionPsig', errors);
+    if (live.suctionSatF !== undefined && n.suctionLineF !== undefined) live.superheatF = round1(n.suctionLineF - live.suctionSatF);
   }
   if (ref && n.liquidPsig !== undefined) {
     const psig = n.liquidPsig;
-    live.liquidSatF = saturated(() => bubblePointF(psig, ref, altitudeFt), 'liquidPsig', errors);
-    if (live.liquidSatF !== undefined && n.liquidLineF !== undefined) live.subcoolingF = live.liquidSatF - n.liquidLineF;
+    live.liquidSatF = saturated(() => round1(bubblePointF(psig, ref, altitudeFt)), 'liquidPsig', errors);
+    if (live.liquidSatF !== undefined && n.liquidLineF !== undefined) live.subcoolingF = round1(live.liquidSatF - n.liquidLineF);
   }
   const indoor = indoorAir(draft, n, altitudeFt, errors);
   live.indoorWbF = indoor.indoorWbF;
