@@ -45,7 +45,7 @@ export function ReadingsForm({ draft, live, onChange }: Props) {
   return (
     <View style={styles.stack}>
       <SectionCard title="System">
-        <ChoiceChips label="Refrigerant" options={REFRIGERANT_OPTIONS} value={draft.refrigerant} onChange={(v) => set({ refrigerant: v })} error={live.errors.refrigerant} testID="refrigerant" />
+        <ChoiceChips label="Refrigerant" options={REFRIGERANT_OPTIONS} value={draft.refrigerant} onChange={(v) => v && set({ refrigerant: v })} error={live.errors.refrigerant} testID="refrigerant" />
         <ChoiceChips
           label="Metering device"
           options={METERING_OPTIONS}

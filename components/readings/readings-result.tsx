@@ -59,5 +59,5 @@ const styles = StyleSheet.create({
   banner: { flexDirection: 'row', alignItems: 'center', gap: spacing.md, padding: spacing.lg, borderRadius: 14, borderWidth: 2 },
   words: { flex: 1, gap: 2 },
   tiles: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
-  tile: { flexGrow: 1, flexBasis: 150, borderWidth: 1, borderRadius: 12, padding: spacing.md, gap: 2 },
+  tile: { flexGrow: 1, flexBasis: '40%', borderWidth: 1, borderRadius: 12, padding: spacing.md, gap: 2 },
 });

@@ -8,6 +8,8 @@ import { chartModel, type ChartReading } from './chart-geometry';
 import { formatNumber } from './number-text';
 
 const HEIGHT_PX = 240;
+/** The app's own face (loaded by expo-font), so the axis labels match the screen. */
+const FONT = 'Inter-Regular';
 
 interface Props {
   refrigerant: string;
@@ -44,7 +46,7 @@ export function SaturationChart({ refrigerant, altitudeFt, readings }: Props) {
             {model.yTicks.map((t) => (
               <G key={`y${t.value}`}>
                 <Line x1={model.plot.left} x2={model.plot.left + model.plot.width} y1={t.y} y2={t.y} stroke={faint} strokeWidth={0.5} />
-                <SvgText x={model.plot.left - 6} y={t.y + 4} fontSize={11} fill={ink} textAnchor="end">
+                <SvgText fontFamily={FONT} x={model.plot.left - 6} y={t.y + 4} fontSize={11} fill={ink} textAnchor="end">
                   {String(t.value)}
                 </SvgText>
               </G>
@@ -52,15 +54,15 @@ export function SaturationChart({ refrigerant, altitudeFt, readings }: Props) {
             {model.xTicks.map((t) => (
               <G key={`x${t.value}`}>
                 <Line x1={t.x} x2={t.x} y1={model.plot.top} y2={model.plot.top + model.plot.height} stroke={faint} strokeWidth={0.5} />
-                <SvgText x={t.x} y={model.plot.top + model.plot.height + 16} fontSize={11} fill={ink} textAnchor="middle">
+                <SvgText fontFamily={FONT} x={t.x} y={model.plot.top + model.plot.height + 16} fontSize={11} fill={ink} textAnchor="middle">
                   {String(t.value)}
                 </SvgText>
               </G>
             ))}
-            <SvgText x={model.plot.left + model.plot.width} y={HEIGHT_PX - 2} fontSize={11} fill={ink} textAnchor="end">
+            <SvgText fontFamily={FONT} x={model.plot.left + model.plot.width} y={HEIGHT_PX - 2} fontSize={11} fill={ink} textAnchor="end">
               °F
             </SvgText>
-            <SvgText x={4} y={model.plot.top + 10} fontSize={11} fill={ink}>
+            <SvgText fontFamily={FONT} x={4} y={model.plot.top + 10} fontSize={11} fill={ink}>
               psig
             </SvgText>
             <Path d={model.bubblePath} stroke={curve} strokeWidth={2.5} fill="none" />
@@ -70,7 +72,7 @@ export function SaturationChart({ refrigerant, altitudeFt, readings }: Props) {
                 {m.line ? <Line x1={m.sat.x} x2={m.line.x} y1={m.sat.y} y2={m.line.y} stroke={markColor[m.kind]} strokeWidth={3} /> : null}
                 <Circle cx={m.sat.x} cy={m.sat.y} r={5} fill={markColor[m.kind]} />
                 {m.line ? <Circle cx={m.line.x} cy={m.line.y} r={6} fill={theme.colors.surface} stroke={markColor[m.kind]} strokeWidth={3} /> : null}
-                <SvgText x={(m.line ?? m.sat).x + (m.kind === 'suction' ? 10 : -10)} y={m.sat.y - 8} fontSize={12} fontWeight="bold" fill={ink} textAnchor={m.kind === 'suction' ? 'start' : 'end'}>
+                <SvgText fontFamily={FONT} x={(m.line ?? m.sat).x + (m.kind === 'suction' ? 10 : -10)} y={m.sat.y - 8} fontSize={12} fontWeight="bold" fill={ink} textAnchor={m.kind === 'suction' ? 'start' : 'end'}>
                   {m.kind === 'suction' ? 'Suction' : 'Liquid'}
                 </SvgText>
               </G>
