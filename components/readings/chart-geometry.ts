@@ -46,7 +46,7 @@ export function chartModel(refrigerant: string, altitudeFt: number, readings: Ch
   const maxPsig = Math.ceil(Math.max(...bubble, ...readings.map((r) => r.psig)) / yStep) * yStep;
   const minPsig = Math.min(0, Math.floor(Math.min(...dew) / yStep) * yStep);
 
-  const plot = { left: 48, top: 12, width: Math.max(40, widthPx - 60), height: Math.max(40, heightPx - 44) };
+  const plot = { left: 48, top: 24, width: Math.max(40, widthPx - 60), height: Math.max(40, heightPx - 56) };
   const x = (f: number) => plot.left + ((f - minF) / (maxF - minF)) * plot.width;
   const y = (p: number) => plot.top + plot.height - ((p - minPsig) / (maxPsig - minPsig)) * plot.height;
   const path = (ps: number[]) => ps.map((p, i) => `${i ? 'L' : 'M'}${x(temps[i]).toFixed(1)},${y(p).toFixed(1)}`).join(' ');

@@ -62,7 +62,7 @@ export function SaturationChart({ refrigerant, altitudeFt, readings }: Props) {
             <SvgText fontFamily={FONT} x={model.plot.left + model.plot.width} y={HEIGHT_PX - 2} fontSize={11} fill={ink} textAnchor="end">
               °F
             </SvgText>
-            <SvgText fontFamily={FONT} x={4} y={model.plot.top + 10} fontSize={11} fill={ink}>
+            <SvgText fontFamily={FONT} x={model.plot.left - 6} y={12} fontSize={11} fill={ink} textAnchor="end">
               psig
             </SvgText>
             <Path d={model.bubblePath} stroke={curve} strokeWidth={2.5} fill="none" />
