@@ -32,7 +32,13 @@ function tickStep(span: number, count: number): number {
  * The saturation curve (bubble and dew, psig against °F) drawn for a box of `widthPx` × `heightPx`,
  * from 0 to 140 °F (widened to show any reading), with the readings placed on it.
  */
-export function chartModel(refrigerant: string, altitudeFt: number, readings: ChartReading[], widthPx: number, heightPx: number): ChartModel {
+export function chartModel(
+  refrigerant: string,
+  altitudeFt: number,
+  readings: ChartReading[],
+  widthPx: number,
+  heightPx: number,
+): ChartModel {
   const range = saturationRange(refrigerant);
   const seen = readings.flatMap((r) => [r.satF, r.lineF ?? r.satF]);
   const minF = Math.max(range.minF, Math.floor(Math.min(0, ...seen) / 10) * 10);

@@ -7,7 +7,15 @@ export interface EvacuationDraft {
   values: Partial<Record<EvacuationKey, string>>;
 }
 
-export const EVACUATION_KEYS = ['finalMicrons', 'decayMicrons', 'decayHoldMinutes', 'testPsig', 'maxTestPsig', 'nitrogenHoldMinutes', 'dropPsig'] as const;
+export const EVACUATION_KEYS = [
+  'finalMicrons',
+  'decayMicrons',
+  'decayHoldMinutes',
+  'testPsig',
+  'maxTestPsig',
+  'nitrogenHoldMinutes',
+  'dropPsig',
+] as const;
 export type EvacuationKey = (typeof EVACUATION_KEYS)[number];
 
 export interface EvacuationOutcome {
@@ -33,11 +41,20 @@ export function evacuationOutcome(draft: EvacuationDraft, settings: RuleSettings
   }
   const outcome: EvacuationOutcome = { errors };
   if (n.finalMicrons !== undefined && !errors.decayMicrons && !errors.decayHoldMinutes) {
-    outcome.evacuation = evaluateEvacuation({ finalMicrons: n.finalMicrons, decayMicrons: n.decayMicrons, holdMinutes: n.decayHoldMinutes }, settings);
+    outcome.evacuation = evaluateEvacuation(
+      { finalMicrons: n.finalMicrons, decayMicrons: n.decayMicrons, holdMinutes: n.decayHoldMinutes },
+      settings,
+    );
   }
   if (n.testPsig !== undefined && !errors.maxTestPsig && !errors.nitrogenHoldMinutes && !errors.dropPsig) {
     outcome.pressureTest = evaluatePressureTest(
-      { testPsig: n.testPsig, holdMinutes: n.nitrogenHoldMinutes ?? Number.NaN, dropPsig: n.dropPsig, maxTestPsig: n.maxTestPsig, altitudeFt },
+      {
+        testPsig: n.testPsig,
+        holdMinutes: n.nitrogenHoldMinutes ?? Number.NaN,
+        dropPsig: n.dropPsig,
+        maxTestPsig: n.maxTestPsig,
+        altitudeFt,
+      },
       settings,
     );
   }

@@ -19,7 +19,7 @@ export function plainIssue(issue: z.core.$ZodIssue): string {
 export function formatNumber(value: number | undefined, digits = 1): string {
   if (value === undefined || !Number.isFinite(value)) return '—';
   const text = value.toFixed(digits);
-  return (text.startsWith('-') && Number(text) !== 0 ? '−' + text.slice(1) : text.replace(/^-/, ''));
+  return text.startsWith('-') && Number(text) !== 0 ? '−' + text.slice(1) : text.replace(/^-/, '');
 }
 
 /** "118 psig is above …" → "118 psig is above ….": the shared messages read as a sentence on screen. */

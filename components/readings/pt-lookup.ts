@@ -22,10 +22,18 @@ function solve(text: string, bubble: (v: number) => number, dew: (v: number) => 
 
 /** Bubble and dew points (°F) at a typed gauge pressure. */
 export function lookupByPressure(psigText: string, refrigerant: string, altitudeFt: number): LookupAnswer {
-  return solve(psigText, (p) => bubblePointF(p, refrigerant, altitudeFt), (p) => dewPointF(p, refrigerant, altitudeFt));
+  return solve(
+    psigText,
+    (p) => bubblePointF(p, refrigerant, altitudeFt),
+    (p) => dewPointF(p, refrigerant, altitudeFt),
+  );
 }
 
 /** Bubble and dew pressures (psig) at a typed temperature in °F. */
 export function lookupByTemperature(tempText: string, refrigerant: string, altitudeFt: number): LookupAnswer {
-  return solve(tempText, (t) => bubblePressurePsig(t, refrigerant, altitudeFt), (t) => dewPressurePsig(t, refrigerant, altitudeFt));
+  return solve(
+    tempText,
+    (t) => bubblePressurePsig(t, refrigerant, altitudeFt),
+    (t) => dewPressurePsig(t, refrigerant, altitudeFt),
+  );
 }

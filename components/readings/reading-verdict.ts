@@ -3,7 +3,11 @@ import type { CommissioningEvaluateResult } from '@/shared/schemas/commissioning
 export type ReadingTone = 'ok' | 'caution' | 'info';
 
 /** The verdict in plain words with its icon (never colour alone). */
-export function readingVerdictWords(verdict: CommissioningEvaluateResult['verdict'] | undefined): { word: string; icon: string; tone: ReadingTone } {
+export function readingVerdictWords(verdict: CommissioningEvaluateResult['verdict'] | undefined): {
+  word: string;
+  icon: string;
+  tone: ReadingTone;
+} {
   if (verdict === 'on-target') return { word: 'On target', icon: 'check-circle', tone: 'ok' };
   if (verdict === 'off-target') return { word: 'Off target', icon: 'alert', tone: 'caution' };
   if (verdict === 'not-evaluated') return { word: 'Not evaluated', icon: 'information-outline', tone: 'info' };

@@ -1,5 +1,9 @@
 import type { RuleSettings } from '@/shared/rules/types';
-import { CommissioningEvaluateSchema, type CommissioningEvaluateInput, type CommissioningEvaluateResult } from '@/shared/schemas/commissioning';
+import {
+  CommissioningEvaluateSchema,
+  type CommissioningEvaluateInput,
+  type CommissioningEvaluateResult,
+} from '@/shared/schemas/commissioning';
 import { dewPointF, bubblePointF, SaturationRangeError } from '@/shared/refrigerants';
 import { evaluateReadings, ReadingInputError, wetBulbF } from '@/shared/commissioning';
 import { asSentence, plainIssue, readNumber } from './number-text';
@@ -102,9 +106,14 @@ export function liveReadings(draft: ReadingsDraft, settings: RuleSettings): Live
   const indoor = indoorAir(draft, n, altitudeFt, errors);
   live.indoorWbF = indoor.indoorWbF;
 
-  live.missing = NEEDED.filter(({ key }) => (key === 'meteringType' ? !draft.meteringType : n[key] === undefined && !errors[key])).map((f) => f.label);
+  live.missing = NEEDED.filter(({ key }) => (key === 'meteringType' ? !draft.meteringType : n[key] === undefined && !errors[key])).map(
+    (f) => f.label,
+  );
   // A fixed orifice's target superheat comes from the indoor wet bulb (cooling only).
-  const wbTyped = draft.indoorBy === 'wet-bulb' ? n.indoorWbF !== undefined || errors.indoorWbF : n.indoorDbF !== undefined && n.indoorRhPct !== undefined;
+  const wbTyped =
+    draft.indoorBy === 'wet-bulb'
+      ? n.indoorWbF !== undefined || errors.indoorWbF
+      : n.indoorDbF !== undefined && n.indoorRhPct !== undefined;
   if (draft.meteringType === 'piston' && draft.mode === 'cooling' && !wbTyped) live.missing.push('indoor wet bulb');
   if (live.missing.length || Object.keys(errors).length) return live;
 
@@ -138,7 +147,8 @@ export function liveReadings(draft: ReadingsDraft, settings: RuleSettings): Live
 /** The indoor air as the evaluation takes it: the typed wet bulb, or dry bulb with humidity. */
 function indoorAir(draft: ReadingsDraft, n: Partial<Record<ReadingKey, number>>, altitudeFt: number, errors: LiveReadings['errors']) {
   if (draft.indoorBy === 'wet-bulb') return { indoorWbF: n.indoorWbF, input: { indoorWbF: n.indoorWbF } };
-  if (n.indoorDbF === undefined || n.indoorRhPct === undefined) return { indoorWbF: undefined, input: { indoorDbF: n.indoorDbF, indoorRhPct: n.indoorRhPct } };
+  if (n.indoorDbF === undefined || n.indoorRhPct === undefined)
+    return { indoorWbF: undefined, input: { indoorDbF: n.indoorDbF, indoorRhPct: n.indoorRhPct } };
   if (n.indoorRhPct <= 0 || n.indoorRhPct > 100) {
     errors.indoorRhPct = 'Relative humidity is between 1 and 100 %.';
     return { indoorWbF: undefined, input: {} };

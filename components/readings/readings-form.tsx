@@ -45,7 +45,14 @@ export function ReadingsForm({ draft, live, onChange }: Props) {
   return (
     <View style={styles.stack}>
       <SectionCard title="System">
-        <ChoiceChips label="Refrigerant" options={REFRIGERANT_OPTIONS} value={draft.refrigerant} onChange={(v) => v && set({ refrigerant: v })} error={live.errors.refrigerant} testID="refrigerant" />
+        <ChoiceChips
+          label="Refrigerant"
+          options={REFRIGERANT_OPTIONS}
+          value={draft.refrigerant}
+          onChange={(v) => v && set({ refrigerant: v })}
+          error={live.errors.refrigerant}
+          testID="refrigerant"
+        />
         <ChoiceChips
           label="Metering device"
           options={METERING_OPTIONS}
@@ -54,7 +61,13 @@ export function ReadingsForm({ draft, live, onChange }: Props) {
           hint="A fixed orifice is charged to superheat; a TXV or EEV to subcooling."
           testID="metering"
         />
-        <ChoiceChips label="Mode" options={MODE_OPTIONS} value={draft.mode} onChange={(v) => v && set({ mode: v as ReadingsDraft['mode'] })} testID="mode" />
+        <ChoiceChips
+          label="Mode"
+          options={MODE_OPTIONS}
+          value={draft.mode}
+          onChange={(v) => v && set({ mode: v as ReadingsDraft['mode'] })}
+          testID="mode"
+        />
       </SectionCard>
       <SectionCard title="Suction (vapor) line">
         <View style={styles.row}>
@@ -70,7 +83,13 @@ export function ReadingsForm({ draft, live, onChange }: Props) {
       </SectionCard>
       <SectionCard title="Air">
         <View style={styles.row}>{field('outdoorDbF', 'Outdoor dry bulb (°F)')}</View>
-        <ChoiceChips label="Indoor air measured as" options={INDOOR_OPTIONS} value={draft.indoorBy} onChange={(v) => v && set({ indoorBy: v as ReadingsDraft['indoorBy'] })} testID="indoor-by" />
+        <ChoiceChips
+          label="Indoor air measured as"
+          options={INDOOR_OPTIONS}
+          value={draft.indoorBy}
+          onChange={(v) => v && set({ indoorBy: v as ReadingsDraft['indoorBy'] })}
+          testID="indoor-by"
+        />
         <View style={styles.row}>
           {draft.indoorBy === 'wet-bulb' ? (
             field('indoorWbF', 'Indoor wet bulb (°F)', 'Return air, needed for a fixed orifice.')
@@ -83,7 +102,9 @@ export function ReadingsForm({ draft, live, onChange }: Props) {
         </View>
       </SectionCard>
       <SectionCard title="More">
-        <Text variant="bodySmall">Optional. The unit’s own target subcooling comes from its data plate or instructions; altitude corrects the gauges.</Text>
+        <Text variant="bodySmall">
+          Optional. The unit’s own target subcooling comes from its data plate or instructions; altitude corrects the gauges.
+        </Text>
         <View style={styles.row}>
           {field('targetSubcoolingF', 'Target subcooling (°F)', 'Blank: the shop’s default.')}
           {field('altitudeFt', 'Altitude (ft)', 'Blank: sea level.')}

@@ -62,7 +62,14 @@ export function ReadingsScreen() {
       <PtLookupCard refrigerant={refrigerant.id} altitudeFt={altitudeFt} zeotropic={refrigerant.zeotropic} />
     </>
   ) : null;
-  const evac = <EvacuationSection draft={evacuation} settings={settings} altitudeFt={altitudeFt} onChange={(next) => updateReadings((s) => ({ ...s, evacuation: next }))} />;
+  const evac = (
+    <EvacuationSection
+      draft={evacuation}
+      settings={settings}
+      altitudeFt={altitudeFt}
+      onChange={(next) => updateReadings((s) => ({ ...s, evacuation: next }))}
+    />
+  );
   const safety = <SafetyNote points={readingsSafetyPoints(draft.refrigerant)} />;
 
   return (
@@ -106,8 +113,10 @@ function readingsForChart(draft: ReadingsDraft, live: ReturnType<typeof liveRead
   const num = (k: keyof ReadingsDraft['values']) => readNumber(draft.values[k]).value;
   const suctionPsig = num('suctionPsig');
   const liquidPsig = num('liquidPsig');
-  if (suctionPsig !== undefined && live.suctionSatF !== undefined) marks.push({ kind: 'suction', psig: suctionPsig, satF: live.suctionSatF, lineF: num('suctionLineF') });
-  if (liquidPsig !== undefined && live.liquidSatF !== undefined) marks.push({ kind: 'liquid', psig: liquidPsig, satF: live.liquidSatF, lineF: num('liquidLineF') });
+  if (suctionPsig !== undefined && live.suctionSatF !== undefined)
+    marks.push({ kind: 'suction', psig: suctionPsig, satF: live.suctionSatF, lineF: num('suctionLineF') });
+  if (liquidPsig !== undefined && live.liquidSatF !== undefined)
+    marks.push({ kind: 'liquid', psig: liquidPsig, satF: live.liquidSatF, lineF: num('liquidLineF') });
   return marks;
 }
 

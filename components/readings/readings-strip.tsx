@@ -13,7 +13,10 @@ export function ReadingsStrip({ live }: { live: LiveReadings }) {
   const fg = { ok: theme.status.ok, caution: theme.status.caution, info: theme.status.info }[tone];
   const value = (v: number | undefined) => (v === undefined ? '—' : `${formatNumber(v)} °F`);
   return (
-    <View style={[styles.strip, { backgroundColor: theme.colors.surface, borderColor: theme.colors.outlineVariant }]} testID="readings-strip">
+    <View
+      style={[styles.strip, { backgroundColor: theme.colors.surface, borderColor: theme.colors.outlineVariant }]}
+      testID="readings-strip"
+    >
       <View style={styles.cell}>
         <Text variant="labelSmall">Superheat</Text>
         <Text variant="titleLarge" testID="strip-superheat">
@@ -37,7 +40,14 @@ export function ReadingsStrip({ live }: { live: LiveReadings }) {
 }
 
 const styles = StyleSheet.create({
-  strip: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, paddingHorizontal: spacing.lg, paddingVertical: spacing.sm, borderBottomWidth: 1 },
+  strip: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.sm,
+    paddingHorizontal: spacing.lg,
+    paddingVertical: spacing.sm,
+    borderBottomWidth: 1,
+  },
   cell: { flex: 1, gap: 0 },
   verdict: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs, flex: 1.3 },
   word: { flexShrink: 1 },

@@ -21,13 +21,19 @@ interface Props {
 export function SaturationChart({ refrigerant, altitudeFt, readings }: Props) {
   const theme = useTandemTheme();
   const [widthPx, setWidthPx] = useState(0);
-  const model = useMemo(() => (widthPx > 0 ? chartModel(refrigerant, altitudeFt, readings, widthPx, HEIGHT_PX) : null), [refrigerant, altitudeFt, readings, widthPx]);
+  const model = useMemo(
+    () => (widthPx > 0 ? chartModel(refrigerant, altitudeFt, readings, widthPx, HEIGHT_PX) : null),
+    [refrigerant, altitudeFt, readings, widthPx],
+  );
   const ink = theme.colors.onSurface;
   const faint = theme.colors.outlineVariant;
   const curve = theme.colors.primary;
   const markColor = { suction: theme.status.info, liquid: theme.colors.tertiary };
   const described = readings
-    .map((r) => `${r.kind} ${formatNumber(r.psig)} psig saturates at ${formatNumber(r.satF)} °F${r.lineF === undefined ? '' : `, line at ${formatNumber(r.lineF)} °F`}`)
+    .map(
+      (r) =>
+        `${r.kind} ${formatNumber(r.psig)} psig saturates at ${formatNumber(r.satF)} °F${r.lineF === undefined ? '' : `, line at ${formatNumber(r.lineF)} °F`}`,
+    )
     .join('; ');
 
   return (
@@ -71,8 +77,18 @@ export function SaturationChart({ refrigerant, altitudeFt, readings }: Props) {
               <G key={m.kind}>
                 {m.line ? <Line x1={m.sat.x} x2={m.line.x} y1={m.sat.y} y2={m.line.y} stroke={markColor[m.kind]} strokeWidth={3} /> : null}
                 <Circle cx={m.sat.x} cy={m.sat.y} r={5} fill={markColor[m.kind]} />
-                {m.line ? <Circle cx={m.line.x} cy={m.line.y} r={6} fill={theme.colors.surface} stroke={markColor[m.kind]} strokeWidth={3} /> : null}
-                <SvgText fontFamily={FONT} x={(m.line ?? m.sat).x + (m.kind === 'suction' ? 10 : -10)} y={m.sat.y - 8} fontSize={12} fontWeight="bold" fill={ink} textAnchor={m.kind === 'suction' ? 'start' : 'end'}>
+                {m.line ? (
+                  <Circle cx={m.line.x} cy={m.line.y} r={6} fill={theme.colors.surface} stroke={markColor[m.kind]} strokeWidth={3} />
+                ) : null}
+                <SvgText
+                  fontFamily={FONT}
+                  x={(m.line ?? m.sat).x + (m.kind === 'suction' ? 10 : -10)}
+                  y={m.sat.y - 8}
+                  fontSize={12}
+                  fontWeight="bold"
+                  fill={ink}
+                  textAnchor={m.kind === 'suction' ? 'start' : 'end'}
+                >
                   {m.kind === 'suction' ? 'Suction' : 'Liquid'}
                 </SvgText>
               </G>
@@ -81,8 +97,8 @@ export function SaturationChart({ refrigerant, altitudeFt, readings }: Props) {
         ) : null}
       </View>
       <Text variant="bodySmall">
-        Solid line: bubble point. Dashed: dew point. A dot on the curve is the gauge's saturation; the ring is the line thermometer — the gap between
-        them is the superheat (suction) or subcooling (liquid).
+        Solid line: bubble point. Dashed: dew point. A dot on the curve is the gauge's saturation; the ring is the line thermometer — the
+        gap between them is the superheat (suction) or subcooling (liquid).
       </Text>
     </View>
   );

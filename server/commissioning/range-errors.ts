@@ -15,7 +15,8 @@ export function withRangeCheck<T>(compute: () => T, fieldName: (field: string) =
   try {
     return compute();
   } catch (err) {
-    if (err instanceof SaturationRangeError) throw fieldError(err.field === 'refrigerant' ? 'refrigerant' : fieldName(err.field), err.message);
+    if (err instanceof SaturationRangeError)
+      throw fieldError(err.field === 'refrigerant' ? 'refrigerant' : fieldName(err.field), err.message);
     if (err instanceof ReadingInputError) throw fieldError(err.field, err.message);
     throw err;
   }

@@ -1,4 +1,13 @@
-import { bubblePointF, bubblePressurePsig, dewPointF, dewPressurePsig, getRefrigerant, listRefrigerants, saturationRange, type Refrigerant } from '../../shared/refrigerants';
+import {
+  bubblePointF,
+  bubblePressurePsig,
+  dewPointF,
+  dewPressurePsig,
+  getRefrigerant,
+  listRefrigerants,
+  saturationRange,
+  type Refrigerant,
+} from '../../shared/refrigerants';
 import type { SaturationQuery } from '../../shared/schemas/commissioning';
 import type { RefrigerantSummary, SaturationAtPressure, SaturationAtTemperature } from '../../shared/schemas/refrigerants';
 import { fieldError, withRangeCheck } from '../commissioning/range-errors';
@@ -14,7 +23,13 @@ export function refrigerantSummaries(): RefrigerantSummary[] {
 /** The refrigerant named in the URL in any trade spelling; unknown is bad input (422). */
 export function findRefrigerant(name: string): Refrigerant {
   const found = getRefrigerant(name);
-  if (!found) throw fieldError('refrigerant', `Tandem does not know the refrigerant "${name}". Known: ${listRefrigerants().map((r) => r.id).join(', ')}.`);
+  if (!found)
+    throw fieldError(
+      'refrigerant',
+      `Tandem does not know the refrigerant "${name}". Known: ${listRefrigerants()
+        .map((r) => r.id)
+        .join(', ')}.`,
+    );
   return found;
 }
 
@@ -24,10 +39,21 @@ export function saturation(refrigerant: Refrigerant, query: SaturationQuery): Sa
   const id = refrigerant.id;
   if (query.psig !== undefined) {
     const psig = query.psig;
-    return withRangeCheck(() => ({ refrigerant: id, psig, bubbleF: bubblePointF(psig, id, altitudeFt), dewF: dewPointF(psig, id, altitudeFt) }), () => 'psig');
+    return withRangeCheck(
+      () => ({ refrigerant: id, psig, bubbleF: bubblePointF(psig, id, altitudeFt), dewF: dewPointF(psig, id, altitudeFt) }),
+      () => 'psig',
+    );
   }
   const tempF = query.tempF as number;
-  return withRangeCheck(() => ({ refrigerant: id, tempF, bubblePsig: bubblePressurePsig(tempF, id, altitudeFt), dewPsig: dewPressurePsig(tempF, id, altitudeFt) }), () => 'tempF');
+  return withRangeCheck(
+    () => ({
+      refrigerant: id,
+      tempF,
+      bubblePsig: bubblePressurePsig(tempF, id, altitudeFt),
+      dewPsig: dewPressurePsig(tempF, id, altitudeFt),
+    }),
+    () => 'tempF',
+  );
 }
 
 function summarize(r: Refrigerant): RefrigerantSummary {

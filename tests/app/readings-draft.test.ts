@@ -40,7 +40,10 @@ describe('liveReadings', () => {
   });
 
   it('when the indoor air is given as 75 °F and 50 % RH, then the wet bulb is 62.55 °F', () => {
-    const draft = draftWith({ refrigerant: 'R-410A', meteringType: 'piston', indoorBy: 'humidity' }, { ...TXV_VALUES, indoorDbF: '75', indoorRhPct: '50' });
+    const draft = draftWith(
+      { refrigerant: 'R-410A', meteringType: 'piston', indoorBy: 'humidity' },
+      { ...TXV_VALUES, indoorDbF: '75', indoorRhPct: '50' },
+    );
     const live = liveReadings(draft, DEFAULT_RULE_SETTINGS);
     // 62.55 °F: psychrolib 1.1.1, ASHRAE Fundamentals 2017 ch.1 (values.json PS-02), ± 0.2 °F
     expect(Math.abs((live.indoorWbF ?? NaN) - 62.55)).toBeLessThanOrEqual(0.2);
@@ -48,7 +51,10 @@ describe('liveReadings', () => {
   });
 
   it('when a reading is not a number or past the critical point, then the field says so in words and no verdict shows', () => {
-    const live = liveReadings(draftWith({ refrigerant: 'R-410A', meteringType: 'txv' }, { ...TXV_VALUES, suctionLineF: 'fifty', liquidPsig: '800' }), DEFAULT_RULE_SETTINGS);
+    const live = liveReadings(
+      draftWith({ refrigerant: 'R-410A', meteringType: 'txv' }, { ...TXV_VALUES, suctionLineF: 'fifty', liquidPsig: '800' }),
+      DEFAULT_RULE_SETTINGS,
+    );
     expect(live.errors.suctionLineF).toBe('Type a number.');
     // 800 psig is above R-410A's critical pressure (about 711 psia, from memory)
     expect(live.errors.liquidPsig).toMatch(/critical/i);
@@ -56,7 +62,10 @@ describe('liveReadings', () => {
   });
 
   it('when the mode is heating, then the readings are not evaluated', () => {
-    const live = liveReadings(draftWith({ refrigerant: 'R-410A', meteringType: 'txv', mode: 'heating' }, TXV_VALUES), DEFAULT_RULE_SETTINGS);
+    const live = liveReadings(
+      draftWith({ refrigerant: 'R-410A', meteringType: 'txv', mode: 'heating' }, TXV_VALUES),
+      DEFAULT_RULE_SETTINGS,
+    );
     expect(live.result?.verdict).toBe('not-evaluated');
   });
 });

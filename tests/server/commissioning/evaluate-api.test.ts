@@ -11,7 +11,8 @@ afterAll(async () => {
 });
 
 const auth = (role: 'tech' | 'estimator' | 'admin' = 'tech') => ({ Authorization: `Bearer ${t.tokenFor(role)}` });
-const evaluate = (body: object, role: 'tech' | 'estimator' | 'admin' = 'tech') => request(t.app).post('/api/commissioning/evaluate').set(auth(role)).send(body);
+const evaluate = (body: object, role: 'tech' | 'estimator' | 'admin' = 'tech') =>
+  request(t.app).post('/api/commissioning/evaluate').set(auth(role)).send(body);
 const paths = (res: request.Response) => (res.body.error.details as { path: string }[]).map((d) => d.path);
 
 // R-410A: dew 118.4 psig at 40 °F, bubble 318.5 psig at 100 °F — CoolProp 8.0.0, Lemmon 2003 EOS (values.json PT-02).

@@ -13,18 +13,34 @@ afterAll(async () => {
 const auth = (role: 'tech' | 'admin') => ({ Authorization: `Bearer ${t.tokenFor(role)}` });
 
 // R-410A: dew 118.4 psig at 40 °F, bubble 318.5 psig at 100 °F (values.json PT-02). 100 − 92 = 8 °F subcooling.
-const READINGS = { refrigerant: 'R-410A', meteringType: 'txv', suctionPsig: 118.4, suctionLineF: 50, liquidPsig: 318.5, liquidLineF: 92, outdoorDbF: 95 };
+const READINGS = {
+  refrigerant: 'R-410A',
+  meteringType: 'txv',
+  suctionPsig: 118.4,
+  suctionLineF: 50,
+  liquidPsig: 318.5,
+  liquidLineF: 92,
+  outdoorDbF: 95,
+};
 
 describe('commissioning settings on Admin → Rules', () => {
   it('when nothing was saved, then the rules settings carry the start-up defaults', async () => {
     const res = await request(t.app).get('/api/settings/rules').set(auth('tech')).expect(200);
     // ±5 °F superheat, ±3 °F subcooling, 500 microns, under 1,000 microns in 10 minutes (values.json EV-01; common practice, no source)
-    expect(res.body.settings).toMatchObject({ superheatToleranceF: 5, subcoolingToleranceF: 3, evacuationTargetMicrons: 500, decayLimitMicrons: 1000, decayHoldMinutes: 10 });
+    expect(res.body.settings).toMatchObject({
+      superheatToleranceF: 5,
+      subcoolingToleranceF: 3,
+      evacuationTargetMicrons: 500,
+      decayLimitMicrons: 1000,
+      decayHoldMinutes: 10,
+    });
   });
 
   it('when an admin narrows the subcooling margin to 1 °F, then 8 °F against a 10 °F target turns off target', async () => {
     // 8 °F is inside 10 ± 3 °F (the default margin)
-    expect((await request(t.app).post('/api/commissioning/evaluate').set(auth('tech')).send(READINGS).expect(200)).body.verdict).toBe('on-target');
+    expect((await request(t.app).post('/api/commissioning/evaluate').set(auth('tech')).send(READINGS).expect(200)).body.verdict).toBe(
+      'on-target',
+    );
     const current = (await request(t.app).get('/api/settings/rules').set(auth('admin')).expect(200)).body;
     await request(t.app)
       .put('/api/settings/rules')
@@ -37,7 +53,11 @@ describe('commissioning settings on Admin → Rules', () => {
 
   it('when a margin or limit is out of bounds, then 422 names it', async () => {
     const current = (await request(t.app).get('/api/settings/rules').set(auth('admin')).expect(200)).body;
-    const put = (patch: object) => request(t.app).put('/api/settings/rules').set(auth('admin')).send({ settings: { ...current.settings, ...patch }, transitionRules: current.transitionRules });
+    const put = (patch: object) =>
+      request(t.app)
+        .put('/api/settings/rules')
+        .set(auth('admin'))
+        .send({ settings: { ...current.settings, ...patch }, transitionRules: current.transitionRules });
     const cases: [object, string][] = [
       [{ superheatToleranceF: 0 }, 'settings.superheatToleranceF'],
       [{ subcoolingToleranceF: 50 }, 'settings.subcoolingToleranceF'],
@@ -47,7 +67,10 @@ describe('commissioning settings on Admin → Rules', () => {
     ];
     for (const [patch, path] of cases) {
       const res = await put(patch).expect(422);
-      expect(res.body.error.details.map((d: { path: string }) => d.path), JSON.stringify(patch)).toContain(path);
+      expect(
+        res.body.error.details.map((d: { path: string }) => d.path),
+        JSON.stringify(patch),
+      ).toContain(path);
     }
   });
 });

@@ -11,7 +11,10 @@ afterAll(async () => {
 });
 
 const auth = () => ({ Authorization: `Bearer ${t.tokenFor('tech')}` });
-const saturation = (id: string, query: string) => request(t.app).get(`/api/refrigerants/${encodeURIComponent(id)}/saturation?${query}`).set(auth());
+const saturation = (id: string, query: string) =>
+  request(t.app)
+    .get(`/api/refrigerants/${encodeURIComponent(id)}/saturation?${query}`)
+    .set(auth());
 const paths = (res: request.Response) => (res.body.error.details as { path: string }[]).map((d) => d.path);
 
 describe('GET /api/refrigerants', () => {
@@ -28,7 +31,12 @@ describe('GET /api/refrigerants', () => {
     expect(byId['R-454B'].glideAtDewF).toBe(40);
     expect(Math.abs(byId['R-454B'].glideF - 2.7)).toBeLessThanOrEqual(0.5);
     for (const r of res.body.items) {
-      expect(r.validRange).toEqual({ minF: expect.any(Number), maxF: expect.any(Number), criticalF: expect.any(Number), criticalPsia: expect.any(Number) });
+      expect(r.validRange).toEqual({
+        minF: expect.any(Number),
+        maxF: expect.any(Number),
+        criticalF: expect.any(Number),
+        criticalPsia: expect.any(Number),
+      });
       // The issue asks for −40 to 150 °F where the fluid is still below its critical point.
       expect(r.validRange.minF).toBeLessThanOrEqual(-40);
       expect(r.validRange.maxF).toBeLessThanOrEqual(r.validRange.criticalF);
