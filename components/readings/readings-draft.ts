@@ -16,6 +16,8 @@ export interface ReadingsDraft {
   /** How the tech measured the indoor air: a wet bulb, or dry bulb and humidity. */
   indoorBy: 'wet-bulb' | 'humidity';
   values: Partial<Record<ReadingKey, string>>;
+  /** The catalog outdoor unit the refrigerant and target came from, if one was picked. */
+  unitLabel?: string;
 }
 
 export const READING_KEYS = [

@@ -6,6 +6,7 @@ import { ChoiceChips } from '@/components/check/choice-chips';
 import { SectionCard } from '@/components/ui/section-card';
 import type { LiveReadings, ReadingKey, ReadingsDraft } from './readings-draft';
 import { ReadingField } from './reading-field';
+import { UnitPicker } from './unit-picker';
 
 const REFRIGERANT_OPTIONS = REFRIGERANT_IDS.map((id) => ({ value: id, label: id }));
 const METERING_OPTIONS = [
@@ -45,11 +46,12 @@ export function ReadingsForm({ draft, live, onChange }: Props) {
   return (
     <View style={styles.stack}>
       <SectionCard title="System">
+        <UnitPicker draft={draft} onChange={onChange} />
         <ChoiceChips
           label="Refrigerant"
           options={REFRIGERANT_OPTIONS}
           value={draft.refrigerant}
-          onChange={(v) => v && set({ refrigerant: v })}
+          onChange={(v) => v && set({ refrigerant: v, unitLabel: undefined })}
           error={live.errors.refrigerant}
           testID="refrigerant"
         />

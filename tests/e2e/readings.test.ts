@@ -1,6 +1,13 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { adminToken, importCsv } from './api-setup';
 import { account, launchBrowser, openPage, screenshot, signIn } from './browser';
+
+// An invented outdoor unit unique to this file: R-454B with its own 12 °F target subcooling.
+const UNIT = 'E2RD-AC30-454';
+const UNIT_CSV = ['model,system_type,refrigerant,nominal_tons,metering_required,target_subcooling_f', `${UNIT},ac,R-454B,2.5,txv,12`].join(
+  '\n',
+);
 
 /** The number shown in a test id's text ("10.0 °F", "−2.3 °F"); NaN when it shows a dash. */
 async function shown(page: Page, testId: string): Promise<number> {
@@ -27,6 +34,7 @@ async function openReadings(page: Page): Promise<void> {
 let browser: Browser;
 beforeAll(async () => {
   browser = await launchBrowser();
+  await importCsv(await adminToken(), 'outdoor-units', UNIT_CSV);
 });
 afterAll(async () => {
   await browser?.close();
@@ -123,6 +131,14 @@ describe('the Readings screen on a wide screen (1440×900)', () => {
     const answer = await page.getByTestId('readings-result').boundingBox();
     expect(answer && form && answer.x > form.x + form.width).toBe(true);
     await screenshot(page, 'readings-wide');
+
+    // The refrigerant and target subcooling can come from a catalog outdoor unit.
+    await page.getByTestId('readings-pick-unit').click();
+    await page.getByTestId('outdoor-search').fill(UNIT);
+    await page.getByTestId(`outdoor-result-${UNIT}`).click({ timeout: 15_000 });
+    await expect.poll(() => page.getByTestId('readings-unit').textContent()).toContain(UNIT);
+    expect(await page.getByTestId('reading-targetSubcoolingF').inputValue()).toBe('12');
+    await expect.poll(() => page.getByTestId('pt-lookup').textContent()).toContain('R-454B');
     await page.context().close();
   });
 });
