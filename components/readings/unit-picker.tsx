@@ -2,22 +2,9 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
-import { normalizeRefrigerantName } from '@/shared/schemas/fields';
 import { CatalogSearch } from '@/components/check/catalog-search';
-import type { PickedPart } from '@/components/check/check-store';
+import { applyUnit } from './apply-unit';
 import type { ReadingsDraft } from './readings-draft';
-
-/** What a catalog outdoor unit brings to the readings: its refrigerant and its own target subcooling. */
-export function applyUnit(draft: ReadingsDraft, unit: PickedPart): ReadingsDraft {
-  const refrigerant = normalizeRefrigerantName(unit.spec.refrigerant);
-  const target = unit.spec.targetSubcoolingF;
-  return {
-    ...draft,
-    unitLabel: unit.label,
-    refrigerant: typeof refrigerant === 'string' && refrigerant ? refrigerant : draft.refrigerant,
-    values: typeof target === 'number' ? { ...draft.values, targetSubcoolingF: String(target) } : draft.values,
-  };
-}
 
 /** Optional: take the refrigerant and target subcooling from an outdoor unit in the catalog. */
 export function UnitPicker({ draft, onChange }: { draft: ReadingsDraft; onChange(next: ReadingsDraft): void }) {

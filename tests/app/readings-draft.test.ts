@@ -4,6 +4,7 @@ import { chartModel } from '../../components/readings/chart-geometry';
 import { initialReadingsDraft, liveReadings, type ReadingsDraft } from '../../components/readings/readings-draft';
 import { lookupByPressure, lookupByTemperature } from '../../components/readings/pt-lookup';
 import { readNumber } from '../../components/readings/number-text';
+import { applyUnit } from '../../components/readings/apply-unit';
 
 const draftWith = (patch: Partial<ReadingsDraft>, values: ReadingsDraft['values'] = {}): ReadingsDraft => ({
   ...initialReadingsDraft(),
@@ -116,5 +117,15 @@ describe('chartModel', () => {
       expect(m.sat.x).toBeGreaterThanOrEqual(model.plot.left);
       expect(m.sat.x).toBeLessThanOrEqual(model.plot.left + model.plot.width);
     }
+  });
+});
+
+describe('applyUnit', () => {
+  it('when a catalog outdoor unit is picked, then its refrigerant and target subcooling fill the readings', () => {
+    // An invented unit: "R454B" as a price list might spell it, 12 °F target from its data plate
+    const next = applyUnit(initialReadingsDraft(), { id: 7, label: 'OU-1', spec: { refrigerant: 'R454B', targetSubcoolingF: 12 } });
+    expect(next).toMatchObject({ refrigerant: 'R-454B', unitLabel: 'OU-1', values: { targetSubcoolingF: '12' } });
+    const plain = applyUnit(draftWith({ refrigerant: 'R-22' }, { targetSubcoolingF: '8' }), { id: 8, label: 'OU-2', spec: {} });
+    expect(plain).toMatchObject({ refrigerant: 'R-22', values: { targetSubcoolingF: '8' } });
   });
 });
