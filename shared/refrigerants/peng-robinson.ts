@@ -119,12 +119,29 @@ function phaseLnPhi(a: number[], b: number[], kij: PrMixture['kij'], z: readonly
   return { lnPhi };
 }
 
-function componentTerms(mix: PrMixture, tempK: number) {
-  const a = mix.components.map((c) => matchedAttraction(c, tempK));
-  const b = mix.components.map(coVolume);
-  const psat = mix.components.map((c) => c.vaporPressureKpa(tempK));
-  return { a, b, psat };
+interface ComponentTerms {
+  tempK: number;
+  a: number[];
+  b: number[];
+  psat: number[];
 }
+
+/** Pure-component terms at one temperature; the last set is kept since bubble and dew ask for the same T in turn. */
+let lastTerms: { mix: PrMixture; terms: ComponentTerms } | undefined;
+function componentTerms(mix: PrMixture, tempK: number): ComponentTerms {
+  if (lastTerms && lastTerms.mix === mix && lastTerms.terms.tempK === tempK) return lastTerms.terms;
+  const terms = {
+    tempK,
+    a: mix.components.map((c) => matchedAttraction(c, tempK)),
+    b: mix.components.map(coVolume),
+    psat: mix.components.map((c) => c.vaporPressureKpa(tempK)),
+  };
+  lastTerms = { mix, terms };
+  return terms;
+}
+
+/** Successive substitution stops when Σ x·K (or Σ y/K) is this close to 1 (pressure to ~1e-12 relative). */
+const FLASH_TOLERANCE = 1e-12;
 
 /** Bubble-point pressure in kPa (absolute) of the mixture's liquid at a temperature in K. */
 export function prBubblePressureKpa(mix: PrMixture, tempK: number): number {
@@ -139,7 +156,7 @@ export function prBubblePressureKpa(mix: PrMixture, tempK: number): number {
     const s = kx.reduce((t, v) => t + v, 0);
     y = kx.map((v) => v / s);
     p *= s;
-    if (Math.abs(s - 1) < 1e-13) break;
+    if (Math.abs(s - 1) < FLASH_TOLERANCE) break;
   }
   return p;
 }
@@ -157,7 +174,7 @@ export function prDewPressureKpa(mix: PrMixture, tempK: number): number {
     const s = yk.reduce((t, v) => t + v, 0);
     x = yk.map((v) => v / s);
     p /= s;
-    if (Math.abs(s - 1) < 1e-13) break;
+    if (Math.abs(s - 1) < FLASH_TOLERANCE) break;
   }
   return p;
 }

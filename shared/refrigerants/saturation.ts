@@ -71,10 +71,12 @@ function curvesFor(refrigerant: string): Curves {
   const maxF = Math.min(SATURATION_MAX_F, kelvinToF(model.criticalTempK) - 5);
   const minK = fToKelvin(SATURATION_MIN_F);
   const maxK = fToKelvin(maxF);
+  // 2 K between nodes, closer when the padding nodes would otherwise reach the critical point.
+  const stepK = Math.min(2, (model.criticalTempK - maxK) / (SaturationCurve.PAD_NODES + 1));
   const curves: Curves = {
     model,
-    bubble: new SaturationCurve((t) => model.bubblePressureKpa(t), minK, maxK),
-    dew: new SaturationCurve((t) => model.dewPressureKpa(t), minK, maxK),
+    bubble: new SaturationCurve((t) => model.bubblePressureKpa(t), minK, maxK, stepK),
+    dew: new SaturationCurve((t) => model.dewPressureKpa(t), minK, maxK, stepK),
     maxF,
   };
   CURVES.set(model.id, curves);

@@ -10,6 +10,7 @@ import {
   SaturationRangeError,
 } from '../../../shared/refrigerants';
 import { fToKelvin, KPA_PER_PSI } from '../../../shared/refrigerants/atmosphere';
+import { SATURATION_MODELS } from '../../../shared/refrigerants/saturation-models';
 import { referenceSaturationKpa } from './reference-eos';
 import { referenceValue } from './reference-values';
 
@@ -231,6 +232,25 @@ describe('range errors', () => {
       expect(range.maxF).toBe(150);
       expect(range.criticalF).toBeGreaterThan(150);
       expect(range.maxDewPsig).toBeCloseTo(dewPressurePsig(150, r), 6);
+    }
+  });
+});
+
+describe('sampled curves against their models', () => {
+  it('when the curves are read between their nodes, then they match the model evaluated directly', () => {
+    // Interpolation check: the sampled curve adds no error that matters (0.005 °F ≈ 0.01 psi)
+    for (const [id, model] of Object.entries(SATURATION_MODELS)) {
+      for (let tempF = -39.3; tempF < 150; tempF += 3.7) {
+        const tempK = fToKelvin(tempF);
+        for (const [side, direct] of [
+          ['bubble', model.bubblePressureKpa(tempK)],
+          ['dew', model.dewPressureKpa(tempK)],
+        ] as const) {
+          const psig = direct / KPA_PER_PSI - SEA_LEVEL_PSIA;
+          const backF = side === 'bubble' ? bubblePointF(psig, id) : dewPointF(psig, id);
+          expect(Math.abs(backF - tempF), `${id} ${side} at ${tempF} °F`).toBeLessThan(0.005);
+        }
+      }
     }
   });
 });
