@@ -63,6 +63,37 @@ function pureLnPhi(Z: number, A: number, B: number): number {
   return Z - 1 - Math.log(Z - B) - (A / (2 * SQRT2 * B)) * attractionLog(Z, B);
 }
 
+/** Attraction parameter a in kPa·L²/mol² of the 1976 paper's generalized α(T) (Soave form in ω) at tempK. */
+export function standardAttraction(c: PrComponent, tempK: number): number {
+  const m = 0.37464 + 1.54226 * c.acentric - 0.26992 * c.acentric ** 2;
+  const alpha = (1 + m * (1 - Math.sqrt(tempK / c.criticalTempK))) ** 2;
+  return ((0.45724 * (R * c.criticalTempK) ** 2) / c.criticalPressureKpa) * alpha;
+}
+
+/**
+ * Saturation pressure in kPa of a pure fluid in PR for a given attraction a (kPa·L²/mol²) at tempK:
+ * the pressure where liquid and vapor fugacities are equal (Newton on ln p, d ln(φL/φV)/d ln p = ZL − ZV).
+ */
+export function prPureSaturationKpa(c: PrComponent, tempK: number, attraction: number, estimateKpa: number): number {
+  const rt = R * tempK;
+  let lnP = Math.log(estimateKpa);
+  for (let iter = 0; iter < 100; iter++) {
+    const p = Math.exp(lnP);
+    const A = (attraction * p) / (rt * rt);
+    const B = (coVolume(c) * p) / rt;
+    const [zl, zv] = prRoots(A, B);
+    if (zv - zl < 1e-9) {
+      lnP += zl > 0.3 ? 0.05 : -0.05;
+      continue;
+    }
+    const g = pureLnPhi(zl, A, B) - pureLnPhi(zv, A, B);
+    const step = g / (zl - zv);
+    lnP -= step;
+    if (Math.abs(step) < 1e-13) break;
+  }
+  return Math.exp(lnP);
+}
+
 /**
  * The attraction parameter a in kPa·L²/mol² that makes PR's liquid and vapor fugacities equal at the
  * component's reference vapor pressure at tempK (Newton on A; dg/dA is exact because Z is stationary).
@@ -71,9 +102,7 @@ export function matchedAttraction(c: PrComponent, tempK: number): number {
   const pKpa = c.vaporPressureKpa(tempK);
   const rt = R * tempK;
   const B = (coVolume(c) * pKpa) / rt;
-  const m = 0.37464 + 1.54226 * c.acentric - 0.26992 * c.acentric ** 2;
-  const alpha = (1 + m * (1 - Math.sqrt(tempK / c.criticalTempK))) ** 2;
-  let A = ((0.45724 * (R * c.criticalTempK) ** 2) / c.criticalPressureKpa) * alpha * (pKpa / (rt * rt));
+  let A = standardAttraction(c, tempK) * (pKpa / (rt * rt));
   for (let iter = 0; iter < 100; iter++) {
     const [zl, zv] = prRoots(A, B);
     if (zv - zl < 1e-9) {

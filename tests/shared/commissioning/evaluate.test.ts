@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { evaluateReadings, ReadingInputError } from '../../../shared/commissioning';
+import { A2L_CAUTION, CHARGING_CAUTION, evaluateReadings, ReadingInputError } from '../../../shared/commissioning';
 import type { CommissioningEvaluateInput } from '../../../shared/schemas/commissioning';
 
 // Pressures are taken from values.json PT-02 / PT-04 (CoolProp 8.0.0 implementing the reference EOS,
@@ -148,6 +148,14 @@ describe('fixed orifice: target superheat', () => {
     const r = evaluateReadings(piston({ indoorWbF: undefined }));
     expect(r.verdict).toBe('not-evaluated');
     expect(r.advice).toMatch(/wet bulb/);
+  });
+});
+
+describe('cautions', () => {
+  it('when any readings are judged, then the certified-technician caution comes with them, and the A2L one for an A2L', () => {
+    // ASHRAE 34: R-32 and R-454B are A2L, R-410A is A1 (values.json RP-02..RP-04)
+    expect(evaluateReadings(readings({})).cautions).toEqual([CHARGING_CAUTION]);
+    expect(evaluateReadings(readings({ refrigerant: 'R-454B', suctionPsig: 107.5, liquidPsig: 303.3 })).cautions).toEqual([CHARGING_CAUTION, A2L_CAUTION]);
   });
 });
 

@@ -212,7 +212,8 @@ describe('range errors', () => {
     expect(fieldOf(() => dewPointF(-12, 'R-32', 5000)).field).toBe('psig');
     expect(fieldOf(() => bubblePointF(900, 'R-410A')).field).toBe('psig');
     expect(fieldOf(() => bubblePointF(900, 'R-410A')).message).toMatch(/critical pressure/);
-    expect(fieldOf(() => bubblePointF(650, 'R-410A')).message).toMatch(/outside/);
+    expect(fieldOf(() => bubblePointF(650, 'R-410A')).message).toMatch(/above the R-410A chart, which ends at .* psig \(150 °F\)/);
+    expect(fieldOf(() => dewPointF(2, 'R-32')).message).toMatch(/below the R-32 chart, which starts at .* psig \(-40 °F\)/);
   });
 
   it('when the refrigerant is unknown, then the refrigerant field is named', () => {
