@@ -50,6 +50,12 @@ export async function run(): Promise<Measure[]> {
   if (!Number.isFinite(sink)) throw new Error('saturation bench produced a non-finite temperature');
   return [
     {
+      id: 'refrigerants.saturation-build-ms',
+      value: round(buildMs, 1),
+      unit: 'ms',
+      note: `first use: sampling every refrigerant's bubble and dew curves from its model (R-454B by Peng–Robinson flash), one core`,
+    },
+    {
       id: 'refrigerants.saturation-per-s',
       value: Math.round(best),
       unit: 'solves/s',

@@ -89,7 +89,7 @@ export function prPureSaturationKpa(c: PrComponent, tempK: number, attraction: n
     const g = pureLnPhi(zl, A, B) - pureLnPhi(zv, A, B);
     const step = g / (zl - zv);
     lnP -= step;
-    if (Math.abs(step) < 1e-13) break;
+    if (Math.abs(step) < 1e-12) break;
   }
   return Math.exp(lnP);
 }
@@ -114,7 +114,7 @@ export function matchedAttraction(c: PrComponent, tempK: number): number {
     const dg = -(attractionLog(zl, B) - attractionLog(zv, B)) / (2 * SQRT2 * B);
     const step = g / dg;
     A -= step;
-    if (Math.abs(step) < 1e-13 * A) break;
+    if (Math.abs(step) < 1e-11 * A) break;
   }
   return (A * rt * rt) / pKpa;
 }
@@ -169,8 +169,8 @@ function componentTerms(mix: PrMixture, tempK: number): ComponentTerms {
   return terms;
 }
 
-/** Successive substitution stops when Σ x·K (or Σ y/K) is this close to 1 (pressure to ~1e-12 relative). */
-const FLASH_TOLERANCE = 1e-12;
+/** Successive substitution stops when Σ x·K (or Σ y/K) is this close to 1 (pressure to ~1e-11 relative). */
+const FLASH_TOLERANCE = 1e-11;
 
 /** Bubble-point pressure in kPa (absolute) of the mixture's liquid at a temperature in K. */
 export function prBubblePressureKpa(mix: PrMixture, tempK: number): number {

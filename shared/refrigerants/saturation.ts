@@ -145,6 +145,11 @@ export function glideF(psig: number, refrigerant: string, altitudeFt = 0): numbe
   return dewPointF(psig, refrigerant, altitudeFt) - bubblePointF(psig, refrigerant, altitudeFt);
 }
 
+/** Glide in °F (dew − bubble) at the pressure whose dew point is dewF (°F), e.g. 40 °F for an evaporator; sea level. */
+export function glideAtDewF(dewF: number, refrigerant: string): number {
+  return glideF(dewPressurePsig(dewF, refrigerant), refrigerant);
+}
+
 /** The range the lookups accept for a refrigerant (°F, psia, psig at sea level). */
 export function saturationRange(refrigerant: string): SaturationRange {
   const c = curvesFor(refrigerant);
