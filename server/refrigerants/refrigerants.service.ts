@@ -4,6 +4,7 @@ import {
   dewPointF,
   dewPressurePsig,
   getRefrigerant,
+  glideAtDewF,
   listRefrigerants,
   saturationRange,
   type Refrigerant,
@@ -58,8 +59,7 @@ export function saturation(refrigerant: Refrigerant, query: SaturationQuery): Sa
 
 function summarize(r: Refrigerant): RefrigerantSummary {
   const range = saturationRange(r.id);
-  const psig = dewPressurePsig(GLIDE_AT_DEW_F, r.id);
-  const glideF = r.zeotropic ? dewPointF(psig, r.id) - bubblePointF(psig, r.id) : 0;
+  const glideF = r.zeotropic ? glideAtDewF(GLIDE_AT_DEW_F, r.id) : 0;
   return {
     id: r.id,
     kind: r.kind,
