@@ -3,7 +3,7 @@ import { Icon, Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
 import type { LiveReadings } from './readings-draft';
-import { formatNumber } from './number-text';
+import { asSentence, formatNumber } from './number-text';
 import { listInWords, readingVerdictWords } from './reading-verdict';
 
 function Tile({ label, value, note, testID }: { label: string; value: string; note?: string; testID: string }) {
@@ -29,7 +29,12 @@ export function ReadingsResult({ live, zeotropic }: { live: LiveReadings; zeotro
   const bg = { ok: theme.status.okContainer, caution: theme.status.cautionContainer, info: theme.status.infoContainer }[tone];
   const fg = { ok: theme.status.ok, caution: theme.status.caution, info: theme.status.info }[tone];
   const fixErrors = Object.keys(live.errors).length > 0;
-  const advice = result?.advice ?? (fixErrors ? 'Fix the readings marked in red.' : `Still needed: ${listInWords(live.missing)}.`);
+  // The banner already says the verdict: drop a leading "On target:" from the advice.
+  const advice = result
+    ? asSentence(result.advice.replace(new RegExp(`^${word}:\\s*`, 'i'), ''))
+    : fixErrors
+      ? 'Fix the readings marked in red.'
+      : `Still needed: ${listInWords(live.missing)}.`;
   const target = (v: number | undefined) => (v === undefined ? undefined : `Target ${formatNumber(v)} °F`);
   return (
     <View style={styles.stack} testID="readings-result">

@@ -112,6 +112,19 @@ describe('the Readings screen on a phone (390×844)', () => {
     await page.getByTestId('pt-lookup').scrollIntoViewIfNeeded();
     await screenshot(page, 'readings-phone-offline');
     await expect.poll(() => page.getByTestId('safety-note').textContent()).toContain('Section 608');
+
+    // Evacuation, still offline: 450 microns, 800 after the 10-minute hold passes the shop's 500 / 1,000 limits
+    // (values.json EV-01, common practice); a 20 psi drop over the nitrogen hold fails.
+    await page.getByTestId('evac-finalMicrons').fill('450');
+    await page.getByTestId('evac-decayMicrons').fill('800');
+    await page.getByTestId('evac-decayHoldMinutes').fill('10');
+    await expect.poll(() => page.getByTestId('evacuation-verdict-word').textContent()).toBe('Passed');
+    await page.getByTestId('evac-testPsig').fill('300');
+    await page.getByTestId('evac-nitrogenHoldMinutes').fill('30');
+    await page.getByTestId('evac-dropPsig').fill('20');
+    await expect.poll(() => page.getByTestId('pressure-test-verdict-word').textContent()).toBe('Failed');
+    await page.getByTestId('evacuation-verdict').scrollIntoViewIfNeeded();
+    await screenshot(page, 'readings-phone-evacuation');
     await page.context().close();
   });
 });
