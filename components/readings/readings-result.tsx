@@ -33,7 +33,7 @@ export function ReadingsResult({ live, zeotropic }: { live: LiveReadings; zeotro
   const advice = result
     ? asSentence(result.advice.replace(new RegExp(`^${word}:\\s*`, 'i'), ''))
     : fixErrors
-      ? 'Fix the readings marked in red.'
+      ? 'Fix the readings that have a message under them.'
       : `Still needed: ${listInWords(live.missing)}.`;
   const target = (v: number | undefined) => (v === undefined ? undefined : `Target ${formatNumber(v)} °F`);
   return (
