@@ -21,12 +21,7 @@ const verdict = (page: Page) => expect.poll(() => page.getByTestId('reading-verd
 
 async function openReadings(page: Page): Promise<void> {
   await signIn(page, account('tech'));
-  await page
-    .getByRole('link', { name: 'Readings' })
-    .or(page.getByRole('tab', { name: 'Readings' }))
-    .or(page.getByText('Readings', { exact: true }))
-    .first()
-    .click();
+  await page.getByTestId('nav-readings').first().click();
   await expect.poll(() => page.url(), { timeout: 15_000 }).toContain('/readings');
   await expect.poll(() => page.getByTestId('reading-verdict').textContent(), { timeout: 15_000 }).toBe('Waiting for readings');
 }
