@@ -6,6 +6,7 @@ import type { RuleSettings } from '@/shared/rules/types';
 import type { TestVerdict } from '@/shared/commissioning';
 import { SectionCard } from '@/components/ui/section-card';
 import { evacuationOutcome, type EvacuationDraft, type EvacuationKey } from './evacuation-draft';
+import { asSentence } from './number-text';
 import { ReadingField } from './reading-field';
 
 interface Props {
@@ -32,7 +33,7 @@ function VerdictLine({ verdict, testID }: { verdict?: TestVerdict; testID: strin
         <Text variant="titleMedium" testID={`${testID}-word`}>
           {look.word}
         </Text>
-        <Text variant="bodyMedium">{verdict.reason}</Text>
+        <Text variant="bodyMedium">{asSentence(verdict.reason.replace(/^passed:\s*/i, ''))}</Text>
       </View>
     </View>
   );
@@ -57,19 +58,19 @@ export function EvacuationSection({ draft, settings, altitudeFt, onChange }: Pro
         Vacuum
       </Text>
       <View style={styles.row}>
-        {field('finalMicrons', 'Deepest vacuum (microns)', `Shop target: ${settings.evacuationTargetMicrons ?? 500} or lower.`)}
-        {field('decayMicrons', 'After the hold, pump isolated (microns)', `Shop limit: under ${settings.decayLimitMicrons ?? 1000}.`)}
-        {field('decayHoldMinutes', 'Hold (minutes)', `Shop hold: ${settings.decayHoldMinutes ?? 10} minutes.`)}
+        {field('finalMicrons', 'Vacuum (microns)', `Deepest reached; shop target ${settings.evacuationTargetMicrons ?? 500} or lower.`)}
+        {field('decayMicrons', 'After hold (microns)', `Pump isolated; shop limit under ${settings.decayLimitMicrons ?? 1000}.`)}
+        {field('decayHoldMinutes', 'Hold (min)', `Shop hold: ${settings.decayHoldMinutes ?? 10} minutes.`)}
       </View>
       <VerdictLine verdict={outcome.evacuation} testID="evacuation-verdict" />
       <Text variant="titleSmall" accessibilityRole="header">
         Nitrogen pressure test
       </Text>
       <View style={styles.row}>
-        {field('testPsig', 'Test pressure (psig)')}
-        {field('maxTestPsig', 'Highest the instructions allow (psig)', 'From the unit’s installation instructions.')}
-        {field('nitrogenHoldMinutes', 'Hold (minutes)')}
-        {field('dropPsig', 'Drop over the hold (psi)', '0 when it held steady.')}
+        {field('testPsig', 'Nitrogen (psig)', 'Test pressure.')}
+        {field('maxTestPsig', 'Allowed (psig)', 'Highest the unit’s installation instructions allow.')}
+        {field('nitrogenHoldMinutes', 'Hold (min)')}
+        {field('dropPsig', 'Drop (psi)', 'Over the hold; 0 when it held steady.')}
       </View>
       <VerdictLine verdict={outcome.pressureTest} testID="pressure-test-verdict" />
     </SectionCard>

@@ -29,6 +29,7 @@ export function ReadingField({ label, value, onChangeText, error, hint, testID }
 }
 
 const styles = StyleSheet.create({
-  field: { flexGrow: 1, flexBasis: 150 },
+  // One per row on a phone (labels read in full), two per row in a wide column.
+  field: { flexGrow: 1, flexBasis: 200 },
   input: { fontSize: 22, minHeight: 56 },
 });
