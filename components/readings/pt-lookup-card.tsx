@@ -29,11 +29,25 @@ export function PtLookupCard({ refrigerant, altitudeFt, zeotropic }: { refrigera
     <SectionCard title={`Pressure–temperature, ${refrigerant}`} testID="pt-lookup">
       <View style={styles.row}>
         <View style={styles.cell}>
-          <ReadingField label="Pressure (psig)" value={psig} onChangeText={setPsig} error={byPressure.error} testID="pt-psig" />
+          <ReadingField
+            label="Pressure (psig)"
+            value={psig}
+            onChangeText={setPsig}
+            error={byPressure.error}
+            testID="pt-psig"
+            style={styles.inColumn}
+          />
           <Answer answer={byPressure} unit="°F" zeotropic={zeotropic} testID="pt-psig-answer" />
         </View>
         <View style={styles.cell}>
-          <ReadingField label="Temperature (°F)" value={tempF} onChangeText={setTempF} error={byTemp.error} testID="pt-temp" />
+          <ReadingField
+            label="Temperature (°F)"
+            value={tempF}
+            onChangeText={setTempF}
+            error={byTemp.error}
+            testID="pt-temp"
+            style={styles.inColumn}
+          />
           <Answer answer={byTemp} unit="psig" zeotropic={zeotropic} testID="pt-temp-answer" />
         </View>
       </View>
@@ -44,4 +58,5 @@ export function PtLookupCard({ refrigerant, altitudeFt, zeotropic }: { refrigera
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
   cell: { flexGrow: 1, flexBasis: 150, gap: spacing.xs },
+  inColumn: { flexBasis: 'auto', flexGrow: 0 },
 });

@@ -1,4 +1,4 @@
-import { StyleSheet } from 'react-native';
+import { StyleSheet, type StyleProp, type ViewStyle } from 'react-native';
 import { FormField } from '@/components/ui/form-field';
 
 interface Props {
@@ -8,10 +8,12 @@ interface Props {
   error?: string;
   hint?: string;
   testID?: string;
+  /** In a column (not a row of fields) pass { flexBasis: 'auto' }: the basis would set its height. */
+  style?: StyleProp<ViewStyle>;
 }
 
 /** A big numeric field for a gauge or thermometer reading (decimal keypad on a phone). */
-export function ReadingField({ label, value, onChangeText, error, hint, testID }: Props) {
+export function ReadingField({ label, value, onChangeText, error, hint, testID, style }: Props) {
   return (
     <FormField
       label={label}
@@ -21,7 +23,7 @@ export function ReadingField({ label, value, onChangeText, error, hint, testID }
       hint={hint}
       keyboardType="decimal-pad"
       inputMode="decimal"
-      style={styles.field}
+      style={[styles.field, style]}
       contentStyle={styles.input}
       testID={testID}
     />

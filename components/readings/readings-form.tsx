@@ -108,7 +108,7 @@ export function ReadingsForm({ draft, live, onChange }: Props) {
           Optional. The unit’s own target subcooling comes from its data plate or instructions; altitude corrects the gauges.
         </Text>
         <View style={styles.row}>
-          {field('targetSubcoolingF', 'Target subcooling (°F)', 'Blank: the unit’s or the shop’s default.')}
+          {field('targetSubcoolingF', 'Target subcooling (°F)', 'Blank: the shop’s default.')}
           {field('altitudeFt', 'Altitude (ft)', 'Blank: sea level.')}
         </View>
       </SectionCard>
