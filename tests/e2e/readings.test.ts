@@ -147,6 +147,8 @@ describe('the Readings screen on a wide screen (1440×900)', () => {
     await expect.poll(() => page.getByTestId('readings-unit').textContent()).toContain(UNIT);
     expect(await page.getByTestId('reading-targetSubcoolingF').inputValue()).toBe('12');
     await expect.poll(() => page.getByTestId('pt-lookup').textContent()).toContain('R-454B');
+    await page.getByTestId('chart-card').scrollIntoViewIfNeeded();
+    await screenshot(page, 'readings-wide-r454b');
     await page.context().close();
   });
 });
