@@ -127,9 +127,6 @@ function evaluateFixedOrifice(input: CommissioningEvaluateInput, base: Base, tol
   const band = `the ${fmt(targetSuperheatF)} °F target`;
   const tol = `±${fmt(toleranceF)} °F`;
   const common = { ...base, ...wb, targetSuperheatF, toleranceF, marginF: diffF };
-  if (Math.abs(diffF) <= toleranceF) {
-    return { ...common, verdict: 'on-target', advice: `On target: superheat ${fmt(base.superheatF)} °F is within ${tol} of ${band}; leave the charge as it is.`, reasons: ['superheat within tolerance'] };
-  }
   if (base.superheatF < 0) {
     return {
       ...common,
@@ -137,6 +134,9 @@ function evaluateFixedOrifice(input: CommissioningEvaluateInput, base: Base, tol
       advice: `Liquid is reaching the suction line: the suction line at ${fmt(input.suctionLineF)} °F is below its ${fmt(base.suctionSatF)} °F saturation. Check indoor airflow (filter, blower, coil) and recover charge if airflow is right.`,
       reasons: ['negative superheat'],
     };
+  }
+  if (Math.abs(diffF) <= toleranceF) {
+    return { ...common, verdict: 'on-target', advice: `On target: superheat ${fmt(base.superheatF)} °F is within ${tol} of ${band}; leave the charge as it is.`, reasons: ['superheat within tolerance'] };
   }
   if (diffF > 0) {
     // High superheat: too little refrigerant reaches the coil — low charge, or a restriction when the liquid line is backed up (high subcooling).

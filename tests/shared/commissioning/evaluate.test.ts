@@ -124,6 +124,13 @@ describe('fixed orifice: target superheat', () => {
     expect(r.advice).toMatch(/airflow.*recover charge/);
   });
 
+  it('when the suction line is colder than its saturation, then liquid floodback is called even with a wide tolerance', () => {
+    // SH = 38 − 40 = −2 °F: liquid in the suction line (definition of superheat); a shop tolerance of ±20 °F does not hide it
+    const r = evaluateReadings(piston({ suctionLineF: 38 }), { superheatToleranceF: 20 });
+    expect(r.verdict).toBe('off-target');
+    expect(r.advice).toMatch(/Liquid is reaching the suction line/);
+  });
+
   it('when the tech has dry bulb and humidity instead of wet bulb, then the wet bulb comes from psychrolib', () => {
     // 80 °F / 50 % → 66.66 °F WB (values.json PS-02) → target (3×66.7 − 80 − 95)/2 = 12.55 → 12.6 °F (WB rounded to 0.1 first)
     const r = evaluateReadings(piston({ indoorWbF: undefined, indoorDbF: 80, indoorRhPct: 50 }));
