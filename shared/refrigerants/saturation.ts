@@ -57,16 +57,13 @@ function modelFor(refrigerant: string): SaturationModel {
   return model;
 }
 
-/** The sampled curves of a refrigerant, built from its model on first use and kept. */
+/** The sampled curves of a refrigerant, built from its model on first use and kept (one set per refrigerant id). */
 function curvesFor(refrigerant: string): Curves {
   const cached = CURVES.get(refrigerant);
   if (cached) return cached;
   const model = modelFor(refrigerant);
   const byId = CURVES.get(model.id);
-  if (byId) {
-    CURVES.set(refrigerant, byId);
-    return byId;
-  }
+  if (byId) return byId;
   // Stay at least 5 °F under the critical point, where the equations lose accuracy.
   const maxF = Math.min(SATURATION_MAX_F, kelvinToF(model.criticalTempK) - 5);
   const minK = fToKelvin(SATURATION_MIN_F);
@@ -80,7 +77,6 @@ function curvesFor(refrigerant: string): Curves {
     maxF,
   };
   CURVES.set(model.id, curves);
-  CURVES.set(refrigerant, curves);
   return curves;
 }
 
