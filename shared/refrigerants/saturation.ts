@@ -83,7 +83,10 @@ function curvesFor(refrigerant: string): Curves {
 function checkTemp(tempF: number, curves: Curves): number {
   if (!Number.isFinite(tempF)) throw new SaturationRangeError('tempF', 'enter the temperature in °F');
   if (tempF < SATURATION_MIN_F - EDGE_F || tempF > curves.maxF + EDGE_F) {
-    const why = tempF > kelvinToF(curves.model.criticalTempK) ? `above the critical point of ${curves.model.id}` : `outside ${SATURATION_MIN_F} °F to ${round1(curves.maxF)} °F`;
+    const why =
+      tempF > kelvinToF(curves.model.criticalTempK)
+        ? `above the critical point of ${curves.model.id}`
+        : `outside ${SATURATION_MIN_F} °F to ${round1(curves.maxF)} °F`;
     throw new SaturationRangeError('tempF', `${round1(tempF)} °F is ${why}, where the saturation chart does not apply`);
   }
   return fToKelvin(tempF);
@@ -99,11 +102,17 @@ function absoluteKpa(psig: number, altitudeFt: number, side: 'bubble' | 'dew', c
   const slack = 1e-9 * kpa;
   if (kpa < curve.minPressureKpa - slack) {
     const lowPsig = curve.minPressureKpa / KPA_PER_PSI - atm;
-    throw new SaturationRangeError('psig', `${round1(psig)} psig is below the ${c.model.id} chart, which starts at ${round2(lowPsig)} psig (${SATURATION_MIN_F} °F)`);
+    throw new SaturationRangeError(
+      'psig',
+      `${round1(psig)} psig is below the ${c.model.id} chart, which starts at ${round2(lowPsig)} psig (${SATURATION_MIN_F} °F)`,
+    );
   }
   if (kpa > curve.maxPressureKpa + slack) {
     const highPsig = curve.maxPressureKpa / KPA_PER_PSI - atm;
-    const why = kpa >= c.model.criticalPressureKpa ? `above the critical pressure of ${c.model.id}` : `above the ${c.model.id} chart, which ends at ${round2(highPsig)} psig (${round1(c.maxF)} °F)`;
+    const why =
+      kpa >= c.model.criticalPressureKpa
+        ? `above the critical pressure of ${c.model.id}`
+        : `above the ${c.model.id} chart, which ends at ${round2(highPsig)} psig (${round1(c.maxF)} °F)`;
     throw new SaturationRangeError('psig', `${round1(psig)} psig is ${why}`);
   }
   return kpa;

@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { fToKelvin, KPA_PER_PSI } from '../../../shared/refrigerants/atmosphere';
-import { matchedAttraction, prBubblePressureKpa, prDewPressureKpa, prPureSaturationKpa, standardAttraction, type PrComponent } from '../../../shared/refrigerants/peng-robinson';
+import {
+  matchedAttraction,
+  prBubblePressureKpa,
+  prDewPressureKpa,
+  prPureSaturationKpa,
+  standardAttraction,
+  type PrComponent,
+} from '../../../shared/refrigerants/peng-robinson';
 import { R454B_COMPONENTS, r454bMixture, R454B_KIJ } from '../../../shared/refrigerants/saturation-models';
 import { referenceSaturationKpa } from './reference-eos';
 import { referenceValue } from './reference-values';
