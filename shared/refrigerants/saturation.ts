@@ -52,7 +52,7 @@ const EDGE_F = 1e-6;
 
 function modelFor(refrigerant: string): SaturationModel {
   const id = normalizeRefrigerantName(refrigerant);
-  const model = typeof id === 'string' ? SATURATION_MODELS[id] : undefined;
+  const model = typeof id === 'string' && Object.hasOwn(SATURATION_MODELS, id) ? SATURATION_MODELS[id] : undefined;
   if (!model) throw new SaturationRangeError('refrigerant', `${String(refrigerant)} is not a refrigerant Tandem has saturation data for`);
   return model;
 }

@@ -245,6 +245,8 @@ describe('range errors', () => {
   it('when the refrigerant is unknown, then the refrigerant field is named', () => {
     expect(fieldOf(() => dewPointF(100, 'R-12')).field).toBe('refrigerant');
     expect(fieldOf(() => dewPressurePsig(40, '')).field).toBe('refrigerant');
+    expect(fieldOf(() => dewPressurePsig(40, 'constructor')).field).toBe('refrigerant');
+    expect(fieldOf(() => bubblePointF(100, '__proto__')).field).toBe('refrigerant');
   });
 
   it('when a refrigerant is written the trade ways, then the same curve answers', () => {
