@@ -146,8 +146,11 @@ describe('glide of the blends', () => {
     const pt05 = referenceValue('PT-05').expected as Record<string, number>;
     const glideAtDew = (refrigerant: string, dewF: number) => glideAtDewF(dewF, refrigerant);
     const cases: [string, number, number][] = [
+      // PT-05 gives one glide for R-410A and R-454B at both dew temperatures (40 °F and 100 °F)
       ['R-410A', 40, pt05['R-410A_F']],
+      ['R-410A', 100, pt05['R-410A_F']],
       ['R-454B', 40, pt05['R-454B_F']],
+      ['R-454B', 100, pt05['R-454B_F']],
       ['R-407C', 40, pt05['R-407C_F_at_40']],
       ['R-407C', 100, pt05['R-407C_F_at_100']],
     ];
