@@ -13,7 +13,10 @@ const atm = atmosphericPsia(0);
 
 function residuals(kij: number): number[] {
   const mix = r454bMixture(kij);
-  return points.flatMap((p) => [prBubblePressureKpa(mix, p.tempK) / KPA_PER_PSI - atm - p.bubblePsig, prDewPressureKpa(mix, p.tempK) / KPA_PER_PSI - atm - p.dewPsig]);
+  return points.flatMap((p) => [
+    prBubblePressureKpa(mix, p.tempK) / KPA_PER_PSI - atm - p.bubblePsig,
+    prDewPressureKpa(mix, p.tempK) / KPA_PER_PSI - atm - p.dewPsig,
+  ]);
 }
 
 const sse = (kij: number) => residuals(kij).reduce((s, r) => s + r * r, 0);
@@ -30,4 +33,9 @@ for (let i = 0; i < 60; i++) {
 }
 const kij = (lo + hi) / 2;
 console.log(`k_ij = ${kij.toFixed(5)}; rms ${Math.sqrt(sse(kij) / (2 * points.length)).toFixed(3)} psi`);
-console.log('residuals psi (bubble, dew per point):', residuals(kij).map((r) => r.toFixed(2)).join(' '));
+console.log(
+  'residuals psi (bubble, dew per point):',
+  residuals(kij)
+    .map((r) => r.toFixed(2))
+    .join(' '),
+);

@@ -30,12 +30,19 @@ const int = (v: number) => Math.round(v).toLocaleString('en-US');
 /** Pass/fail of an evacuation (microns, minutes) against the shop's targets. */
 export function evaluateEvacuation(input: EvacuationInput, settingsInput: CommissioningSettingsInput = {}): TestVerdict {
   const s = resolveCommissioningSettings(settingsInput);
-  if (!Number.isFinite(input.finalMicrons) || input.finalMicrons < 0) return { pass: undefined, reason: 'Enter the final vacuum in microns.' };
+  if (!Number.isFinite(input.finalMicrons) || input.finalMicrons < 0)
+    return { pass: undefined, reason: 'Enter the final vacuum in microns.' };
   if (input.finalMicrons > s.evacuationTargetMicrons) {
-    return { pass: false, reason: `The vacuum reached ${int(input.finalMicrons)} microns, above the ${int(s.evacuationTargetMicrons)}-micron target: keep evacuating and look for a leak or moisture.` };
+    return {
+      pass: false,
+      reason: `The vacuum reached ${int(input.finalMicrons)} microns, above the ${int(s.evacuationTargetMicrons)}-micron target: keep evacuating and look for a leak or moisture.`,
+    };
   }
   if (input.decayMicrons === undefined || !Number.isFinite(input.decayMicrons)) {
-    return { pass: undefined, reason: `The vacuum reached ${int(input.finalMicrons)} microns; isolate the pump and record the decay test (${int(s.decayHoldMinutes)} minutes, under ${int(s.decayLimitMicrons)} microns).` };
+    return {
+      pass: undefined,
+      reason: `The vacuum reached ${int(input.finalMicrons)} microns; isolate the pump and record the decay test (${int(s.decayHoldMinutes)} minutes, under ${int(s.decayLimitMicrons)} microns).`,
+    };
   }
   if (input.decayMicrons > s.decayLimitMicrons) {
     return {
@@ -45,7 +52,10 @@ export function evaluateEvacuation(input: EvacuationInput, settingsInput: Commis
   }
   if (input.holdMinutes === undefined || !Number.isFinite(input.holdMinutes) || input.holdMinutes < s.decayHoldMinutes) {
     const held = input.holdMinutes === undefined ? 'the hold time is not recorded' : `it was held ${int(input.holdMinutes)} minutes`;
-    return { pass: undefined, reason: `The decay test stayed at ${int(input.decayMicrons)} microns, but ${held}; hold it at least ${int(s.decayHoldMinutes)} minutes.` };
+    return {
+      pass: undefined,
+      reason: `The decay test stayed at ${int(input.decayMicrons)} microns, but ${held}; hold it at least ${int(s.decayHoldMinutes)} minutes.`,
+    };
   }
   return {
     pass: true,
@@ -76,20 +86,34 @@ export const GAUGE_ALLOWANCE_PSI = 1;
 
 /** Pass/fail of a standing nitrogen pressure test (psig, minutes, °F) against the unit's limit. */
 export function evaluatePressureTest(input: PressureTestInput, _settingsInput: CommissioningSettingsInput = {}): TestVerdict {
-  if (!Number.isFinite(input.testPsig) || input.testPsig <= 0) return { pass: undefined, reason: 'Enter the nitrogen test pressure in psig.' };
+  if (!Number.isFinite(input.testPsig) || input.testPsig <= 0)
+    return { pass: undefined, reason: 'Enter the nitrogen test pressure in psig.' };
   if (input.maxTestPsig !== undefined && input.testPsig > input.maxTestPsig) {
-    return { pass: false, reason: `The test pressure ${int(input.testPsig)} psig is above the ${int(input.maxTestPsig)} psig the unit's instructions allow: release to that pressure or below and test again.` };
+    return {
+      pass: false,
+      reason: `The test pressure ${int(input.testPsig)} psig is above the ${int(input.maxTestPsig)} psig the unit's instructions allow: release to that pressure or below and test again.`,
+    };
   }
   if (!Number.isFinite(input.holdMinutes) || input.holdMinutes < MIN_NITROGEN_HOLD_MINUTES) {
-    return { pass: undefined, reason: `Hold the nitrogen at least ${MIN_NITROGEN_HOLD_MINUTES} minutes (held ${Number.isFinite(input.holdMinutes) ? int(input.holdMinutes) : 'an unknown time'}).` };
+    return {
+      pass: undefined,
+      reason: `Hold the nitrogen at least ${MIN_NITROGEN_HOLD_MINUTES} minutes (held ${Number.isFinite(input.holdMinutes) ? int(input.holdMinutes) : 'an unknown time'}).`,
+    };
   }
-  if (input.dropPsig === undefined || !Number.isFinite(input.dropPsig)) return { pass: undefined, reason: 'Record the pressure after the hold to finish the test.' };
+  if (input.dropPsig === undefined || !Number.isFinite(input.dropPsig))
+    return { pass: undefined, reason: 'Record the pressure after the hold to finish the test.' };
   const allowancePsi = GAUGE_ALLOWANCE_PSI + temperatureDropPsi(input);
-  const limitNote = input.maxTestPsig === undefined ? ' Confirm the test pressure against the unit\'s installation instructions.' : '';
+  const limitNote = input.maxTestPsig === undefined ? " Confirm the test pressure against the unit's installation instructions." : '';
   if (input.dropPsig > allowancePsi) {
-    return { pass: false, reason: `The pressure fell ${fmtPsi(input.dropPsig)} psi in ${int(input.holdMinutes)} minutes, more than the ${fmtPsi(allowancePsi)} psi a temperature change and the gauge explain: find the leak and test again.${limitNote}` };
+    return {
+      pass: false,
+      reason: `The pressure fell ${fmtPsi(input.dropPsig)} psi in ${int(input.holdMinutes)} minutes, more than the ${fmtPsi(allowancePsi)} psi a temperature change and the gauge explain: find the leak and test again.${limitNote}`,
+    };
   }
-  return { pass: true, reason: `Passed: ${int(input.testPsig)} psig held ${int(input.holdMinutes)} minutes with a ${fmtPsi(input.dropPsig)} psi drop (allowed ${fmtPsi(allowancePsi)} psi).${limitNote}` };
+  return {
+    pass: true,
+    reason: `Passed: ${int(input.testPsig)} psig held ${int(input.holdMinutes)} minutes with a ${fmtPsi(input.dropPsig)} psi drop (allowed ${fmtPsi(allowancePsi)} psi).${limitNote}`,
+  };
 }
 
 /** Pressure drop in psi that cooling from startTempF to endTempF explains (ideal gas at the test pressure); 0 when not given or warming. */

@@ -50,7 +50,11 @@ function indoorWetBulb(input: CommissioningEvaluateInput, altitudeFt: number): {
     try {
       return { wbF: wetBulbF(input.indoorDbF, input.indoorRhPct, altitudeFt), source: 'from-humidity' };
     } catch (err) {
-      if (err instanceof PsychrometricInputError) throw new ReadingInputError(err.field === 'rhPct' ? 'indoorRhPct' : err.field === 'dryBulbF' ? 'indoorDbF' : 'altitudeFt', err.message);
+      if (err instanceof PsychrometricInputError)
+        throw new ReadingInputError(
+          err.field === 'rhPct' ? 'indoorRhPct' : err.field === 'dryBulbF' ? 'indoorDbF' : 'altitudeFt',
+          err.message,
+        );
       throw err;
     }
   }
@@ -64,7 +68,10 @@ export const A2L_CAUTION =
   'A2L refrigerant (mildly flammable): keep ignition sources away, ventilate the area, and use recovery equipment and cylinders rated for A2L refrigerants.';
 
 /** Superheat, subcooling, targets and verdict in °F for one set of start-up readings. */
-export function evaluateReadings(input: CommissioningEvaluateInput, settingsInput: CommissioningSettingsInput = {}): CommissioningEvaluateResult {
+export function evaluateReadings(
+  input: CommissioningEvaluateInput,
+  settingsInput: CommissioningSettingsInput = {},
+): CommissioningEvaluateResult {
   const result = judgeReadings(input, settingsInput);
   return { ...result, cautions: isA2L(input.refrigerant) ? [CHARGING_CAUTION, A2L_CAUTION] : [CHARGING_CAUTION] };
 }
@@ -95,12 +102,19 @@ function judgeReadings(input: CommissioningEvaluateInput, settingsInput: Commiss
       reasons: ['liquid pressure not above suction pressure'],
     };
   }
-  return input.meteringType === 'piston' ? evaluateFixedOrifice(input, base, settings.superheatToleranceF, altitudeFt) : evaluateValve(input, base, settings);
+  return input.meteringType === 'piston'
+    ? evaluateFixedOrifice(input, base, settings.superheatToleranceF, altitudeFt)
+    : evaluateValve(input, base, settings);
 }
 
 type Base = Pick<CommissioningEvaluateResult, 'superheatF' | 'subcoolingF' | 'suctionSatF' | 'liquidSatF'>;
 
-function evaluateFixedOrifice(input: CommissioningEvaluateInput, base: Base, toleranceF: number, altitudeFt: number): CommissioningEvaluateResult {
+function evaluateFixedOrifice(
+  input: CommissioningEvaluateInput,
+  base: Base,
+  toleranceF: number,
+  altitudeFt: number,
+): CommissioningEvaluateResult {
   const { wbF, source } = indoorWetBulb(input, altitudeFt);
   const wb = wbF === undefined ? {} : { indoorWbF: round1(wbF), wetBulbSource: source };
   if (wbF === undefined) {
@@ -127,15 +141,20 @@ function evaluateFixedOrifice(input: CommissioningEvaluateInput, base: Base, tol
   const band = `the ${fmt(targetSuperheatF)} °F target`;
   const tol = `±${fmt(toleranceF)} °F`;
   const common = { ...base, ...wb, targetSuperheatF, toleranceF, marginF: diffF };
-  if (Math.abs(diffF) <= toleranceF) {
-    return { ...common, verdict: 'on-target', advice: `On target: superheat ${fmt(base.superheatF)} °F is within ${tol} of ${band}; leave the charge as it is.`, reasons: ['superheat within tolerance'] };
-  }
   if (base.superheatF < 0) {
     return {
       ...common,
       verdict: 'off-target',
       advice: `Liquid is reaching the suction line: the suction line at ${fmt(input.suctionLineF)} °F is below its ${fmt(base.suctionSatF)} °F saturation. Check indoor airflow (filter, blower, coil) and recover charge if airflow is right.`,
       reasons: ['negative superheat'],
+    };
+  }
+  if (Math.abs(diffF) <= toleranceF) {
+    return {
+      ...common,
+      verdict: 'on-target',
+      advice: `On target: superheat ${fmt(base.superheatF)} °F is within ${tol} of ${band}; leave the charge as it is.`,
+      reasons: ['superheat within tolerance'],
     };
   }
   if (diffF > 0) {
@@ -164,7 +183,11 @@ function evaluateFixedOrifice(input: CommissioningEvaluateInput, base: Base, tol
   };
 }
 
-function evaluateValve(input: CommissioningEvaluateInput, base: Base, settings: ReturnType<typeof resolveCommissioningSettings>): CommissioningEvaluateResult {
+function evaluateValve(
+  input: CommissioningEvaluateInput,
+  base: Base,
+  settings: ReturnType<typeof resolveCommissioningSettings>,
+): CommissioningEvaluateResult {
   const targetSubcoolingF = round1(input.targetSubcoolingF ?? settings.defaultTargetSubcoolingF);
   const toleranceF = settings.subcoolingToleranceF;
   const diffF = round1(base.subcoolingF - targetSubcoolingF);
@@ -185,7 +208,12 @@ function evaluateValve(input: CommissioningEvaluateInput, base: Base, settings: 
         reasons: ['subcooling within tolerance', valveLow ? 'valve superheat low' : 'valve superheat high'],
       };
     }
-    return { ...common, verdict: 'on-target', advice: `On target: subcooling ${fmt(base.subcoolingF)} °F is within ${tol} of ${band} and ${valveNote} shows the valve in control; leave the charge as it is.`, reasons: ['subcooling within tolerance'] };
+    return {
+      ...common,
+      verdict: 'on-target',
+      advice: `On target: subcooling ${fmt(base.subcoolingF)} °F is within ${tol} of ${band} and ${valveNote} shows the valve in control; leave the charge as it is.`,
+      reasons: ['subcooling within tolerance'],
+    };
   }
   if (diffF < 0) {
     return {

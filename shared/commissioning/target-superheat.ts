@@ -13,7 +13,8 @@ export const TARGET_SUPERHEAT_LIMITS = {
   minTargetF: 5,
 } as const;
 
-export const TARGET_SUPERHEAT_RELATION = 'target superheat = (3 × indoor wet bulb − 80 − outdoor dry bulb) ÷ 2, the common field formula for fixed-orifice charging';
+export const TARGET_SUPERHEAT_RELATION =
+  'target superheat = (3 × indoor wet bulb − 80 − outdoor dry bulb) ÷ 2, the common field formula for fixed-orifice charging';
 
 /** Target superheat in °F for a fixed orifice from indoor wet bulb (°F) and outdoor dry bulb (°F); no range check. */
 export function targetSuperheatF(indoorWbF: number, outdoorDbF: number): number {
@@ -26,14 +27,24 @@ export type TargetSuperheatCheck = { usable: true; targetF: number } | { usable:
 export function checkTargetSuperheat(indoorWbF: number, outdoorDbF: number): TargetSuperheatCheck {
   const L = TARGET_SUPERHEAT_LIMITS;
   if (indoorWbF < L.indoorWbMinF || indoorWbF > L.indoorWbMaxF) {
-    return { usable: false, reason: `indoor wet bulb ${fmt(indoorWbF)} °F is outside ${L.indoorWbMinF}–${L.indoorWbMaxF} °F, where the superheat chart applies` };
+    return {
+      usable: false,
+      reason: `indoor wet bulb ${fmt(indoorWbF)} °F is outside ${L.indoorWbMinF}–${L.indoorWbMaxF} °F, where the superheat chart applies`,
+    };
   }
   if (outdoorDbF < L.outdoorDbMinF || outdoorDbF > L.outdoorDbMaxF) {
-    return { usable: false, reason: `outdoor temperature ${fmt(outdoorDbF)} °F is outside ${L.outdoorDbMinF}–${L.outdoorDbMaxF} °F, where the superheat chart applies` };
+    return {
+      usable: false,
+      reason: `outdoor temperature ${fmt(outdoorDbF)} °F is outside ${L.outdoorDbMinF}–${L.outdoorDbMaxF} °F, where the superheat chart applies`,
+    };
   }
   const targetF = targetSuperheatF(indoorWbF, outdoorDbF);
   if (targetF < L.minTargetF) {
-    return { usable: false, targetF, reason: `the target superheat would be ${fmt(targetF)} °F, under ${L.minTargetF} °F, too small to charge by` };
+    return {
+      usable: false,
+      targetF,
+      reason: `the target superheat would be ${fmt(targetF)} °F, under ${L.minTargetF} °F, too small to charge by`,
+    };
   }
   return { usable: true, targetF };
 }

@@ -124,7 +124,15 @@ interface PhaseTerms {
 }
 
 /** ln φ_i of every component in one phase of composition z at T, P (roots: 'liquid' smallest, 'vapor' largest). */
-function phaseLnPhi(a: number[], b: number[], kij: PrMixture['kij'], z: readonly number[], tempK: number, pKpa: number, phase: 'liquid' | 'vapor'): PhaseTerms {
+function phaseLnPhi(
+  a: number[],
+  b: number[],
+  kij: PrMixture['kij'],
+  z: readonly number[],
+  tempK: number,
+  pKpa: number,
+  phase: 'liquid' | 'vapor',
+): PhaseTerms {
   const n = z.length;
   const rt = R * tempK;
   let am = 0;

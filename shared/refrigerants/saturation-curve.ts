@@ -24,7 +24,12 @@ export class SaturationCurve {
    * Samples pressureKpaAt (K → kPa absolute) from minK to maxK (K) every stepK, with three extra nodes
    * each side so the fourth-order slopes at the ends stay accurate (the model must hold there too).
    */
-  constructor(pressureKpaAt: (tempK: number) => number, readonly minK: number, readonly maxK: number, stepK = 2) {
+  constructor(
+    pressureKpaAt: (tempK: number) => number,
+    readonly minK: number,
+    readonly maxK: number,
+    stepK = 2,
+  ) {
     const pad = SaturationCurve.PAD_NODES;
     const count = Math.ceil((maxK - minK) / stepK) + 1 + 2 * pad;
     this.t0K = minK - pad * stepK;

@@ -23,19 +23,28 @@ function ancillary(reducingTempK: number, reducingPressureKpa: number, n: number
 
 function pureModel(id: string, source: string, eq: AncillaryEquation): SaturationModel {
   const p = (tempK: number) => ancillaryPressureKpa(eq, tempK);
-  return { id, source, criticalTempK: eq.reducingTempK, criticalPressureKpa: eq.reducingPressureKpa, bubblePressureKpa: p, dewPressureKpa: p };
+  return {
+    id,
+    source,
+    criticalTempK: eq.reducingTempK,
+    criticalPressureKpa: eq.reducingPressureKpa,
+    bubblePressureKpa: p,
+    dewPressureKpa: p,
+  };
 }
 
 // R-22: critical point of Kamei, Beyerlein & Jacobsen, Int. J. Thermophys. 16 (1995) (369.295 K,
-// 4.990 MPa); the vapor-pressure ancillary distributed with that reference EOS in NIST REFPROP.
+// 4.990 MPa) and a published Wagner-type vapor-pressure ancillary fitted to that reference EOS (the
+// form NIST REFPROP ships with it). The tests check it against the EOS itself (within 0.05 °F).
 const R22_VAPOR = ancillary(369.295, 4990, [-7.078, 1.7211, -1.6379, -3.7952, 0.86937], [1, 1.5, 2.2, 4.8, 6.2]);
 
 // R-32: critical point of Tillner-Roth & Yokozeki, J. Phys. Chem. Ref. Data 26 (1997) 1273 (351.255 K,
-// 5.782 MPa); the vapor-pressure ancillary distributed with that reference EOS in NIST REFPROP.
+// 5.782 MPa) and a published Wagner-type vapor-pressure ancillary fitted to that reference EOS (as
+// NIST REFPROP ships it). The tests check it against the EOS itself (within 0.05 °F).
 const R32_VAPOR = ancillary(351.255, 5782, [-7.4883, 1.9697, -1.7496, -4.0224, 1.5209], [1, 1.5, 2.2, 4.8, 6.2]);
 
 // R-1234yf: Richter, McLinden & Lemmon, J. Chem. Eng. Data 56 (2011) 3254 — critical point (367.85 K,
-// 3.3822 MPa) and the vapor-pressure ancillary published with the EOS.
+// 3.3822 MPa) and the Wagner-type vapor-pressure ancillary that accompanies that EOS.
 const R1234YF_VAPOR = ancillary(367.85, 3382.2, [-7.4697, 2.7915, -2.1312, -2.9531], [1, 1.5, 1.8, 3.8]);
 
 // R-410A and R-407C: Lemmon, "Pseudo-pure fluid equations of state for the refrigerant blends R-410A,
@@ -48,8 +57,20 @@ const R407C_DEW = ancillary(359.345, 4631.7, [-0.086077, -6.6364, -2.4648, -3.47
 
 // R-454B = R-32/R-1234yf 68.9/31.1 % by mass (ANSI/ASHRAE 34). Critical constants and acentric factors:
 // values.json RP-11/RP-13 (the reference EOS papers above); molar masses 52.024 and 114.0416 g/mol.
-const R32_PR: PrComponent = { id: 'R-32', criticalTempK: 351.255, criticalPressureKpa: 5782, acentric: 0.2769, vaporPressureKpa: (t) => ancillaryPressureKpa(R32_VAPOR, t) };
-const R1234YF_PR: PrComponent = { id: 'R-1234yf', criticalTempK: 367.85, criticalPressureKpa: 3382.2, acentric: 0.276, vaporPressureKpa: (t) => ancillaryPressureKpa(R1234YF_VAPOR, t) };
+const R32_PR: PrComponent = {
+  id: 'R-32',
+  criticalTempK: 351.255,
+  criticalPressureKpa: 5782,
+  acentric: 0.2769,
+  vaporPressureKpa: (t) => ancillaryPressureKpa(R32_VAPOR, t),
+};
+const R1234YF_PR: PrComponent = {
+  id: 'R-1234yf',
+  criticalTempK: 367.85,
+  criticalPressureKpa: 3382.2,
+  acentric: 0.276,
+  vaporPressureKpa: (t) => ancillaryPressureKpa(R1234YF_VAPOR, t),
+};
 const R454B_X = moleFractionsFromMass([0.689, 0.311], [52.024, 114.0416]);
 /**
  * k_ij of R-32/R-1234yf for this Peng–Robinson model: no published value was at hand, so it was FITTED
@@ -58,7 +79,14 @@ const R454B_X = moleFractionsFromMass([0.689, 0.311], [52.024, 114.0416]);
  * library; R-32/R-1234yf mixture model with the 'Bell-JPCRD-2023' binary parameters).
  */
 export const R454B_KIJ = 0.0386;
-const R454B_MIX: PrMixture = { components: [R32_PR, R1234YF_PR], moleFractions: R454B_X, kij: [[0, R454B_KIJ], [R454B_KIJ, 0]] };
+const R454B_MIX: PrMixture = {
+  components: [R32_PR, R1234YF_PR],
+  moleFractions: R454B_X,
+  kij: [
+    [0, R454B_KIJ],
+    [R454B_KIJ, 0],
+  ],
+};
 
 export const SATURATION_MODELS: Record<string, SaturationModel> = {
   'R-22': pureModel('R-22', 'Kamei et al. (1995) reference EOS: critical point and vapor-pressure ancillary', R22_VAPOR),
@@ -81,7 +109,8 @@ export const SATURATION_MODELS: Record<string, SaturationModel> = {
   },
   'R-454B': {
     id: 'R-454B',
-    source: 'Peng–Robinson (1976) mixture of R-32 and R-1234yf, each matched to its reference vapor pressure, van der Waals mixing with a fitted k_ij',
+    source:
+      'Peng–Robinson (1976) mixture of R-32 and R-1234yf, each matched to its reference vapor pressure, van der Waals mixing with a fitted k_ij',
     // Pseudo-critical point by Kay's rule (mole-fraction average of the components): an estimate only
     // used to bound the range; the blend's true critical point differs by a few kelvin.
     criticalTempK: R454B_X[0] * R32_PR.criticalTempK + R454B_X[1] * R1234YF_PR.criticalTempK,
@@ -96,5 +125,11 @@ export const R454B_COMPONENTS: readonly PrComponent[] = [R32_PR, R1234YF_PR];
 
 /** The R-454B mixture with another k_ij (for the fitting script and its test). */
 export function r454bMixture(kij: number): PrMixture {
-  return { ...R454B_MIX, kij: [[0, kij], [kij, 0]] };
+  return {
+    ...R454B_MIX,
+    kij: [
+      [0, kij],
+      [kij, 0],
+    ],
+  };
 }

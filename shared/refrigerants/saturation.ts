@@ -52,21 +52,18 @@ const EDGE_F = 1e-6;
 
 function modelFor(refrigerant: string): SaturationModel {
   const id = normalizeRefrigerantName(refrigerant);
-  const model = typeof id === 'string' ? SATURATION_MODELS[id] : undefined;
+  const model = typeof id === 'string' && Object.hasOwn(SATURATION_MODELS, id) ? SATURATION_MODELS[id] : undefined;
   if (!model) throw new SaturationRangeError('refrigerant', `${String(refrigerant)} is not a refrigerant Tandem has saturation data for`);
   return model;
 }
 
-/** The sampled curves of a refrigerant, built from its model on first use and kept. */
+/** The sampled curves of a refrigerant, built from its model on first use and kept (one set per refrigerant id). */
 function curvesFor(refrigerant: string): Curves {
   const cached = CURVES.get(refrigerant);
   if (cached) return cached;
   const model = modelFor(refrigerant);
   const byId = CURVES.get(model.id);
-  if (byId) {
-    CURVES.set(refrigerant, byId);
-    return byId;
-  }
+  if (byId) return byId;
   // Stay at least 5 °F under the critical point, where the equations lose accuracy.
   const maxF = Math.min(SATURATION_MAX_F, kelvinToF(model.criticalTempK) - 5);
   const minK = fToKelvin(SATURATION_MIN_F);
@@ -80,14 +77,16 @@ function curvesFor(refrigerant: string): Curves {
     maxF,
   };
   CURVES.set(model.id, curves);
-  CURVES.set(refrigerant, curves);
   return curves;
 }
 
 function checkTemp(tempF: number, curves: Curves): number {
   if (!Number.isFinite(tempF)) throw new SaturationRangeError('tempF', 'enter the temperature in °F');
   if (tempF < SATURATION_MIN_F - EDGE_F || tempF > curves.maxF + EDGE_F) {
-    const why = tempF > kelvinToF(curves.model.criticalTempK) ? `above the critical point of ${curves.model.id}` : `outside ${SATURATION_MIN_F} °F to ${round1(curves.maxF)} °F`;
+    const why =
+      tempF > kelvinToF(curves.model.criticalTempK)
+        ? `above the critical point of ${curves.model.id}`
+        : `outside ${SATURATION_MIN_F} °F to ${round1(curves.maxF)} °F`;
     throw new SaturationRangeError('tempF', `${round1(tempF)} °F is ${why}, where the saturation chart does not apply`);
   }
   return fToKelvin(tempF);
@@ -103,11 +102,17 @@ function absoluteKpa(psig: number, altitudeFt: number, side: 'bubble' | 'dew', c
   const slack = 1e-9 * kpa;
   if (kpa < curve.minPressureKpa - slack) {
     const lowPsig = curve.minPressureKpa / KPA_PER_PSI - atm;
-    throw new SaturationRangeError('psig', `${round1(psig)} psig is below the ${c.model.id} chart, which starts at ${round2(lowPsig)} psig (${SATURATION_MIN_F} °F)`);
+    throw new SaturationRangeError(
+      'psig',
+      `${round1(psig)} psig is below the ${c.model.id} chart, which starts at ${round2(lowPsig)} psig (${SATURATION_MIN_F} °F)`,
+    );
   }
   if (kpa > curve.maxPressureKpa + slack) {
     const highPsig = curve.maxPressureKpa / KPA_PER_PSI - atm;
-    const why = kpa >= c.model.criticalPressureKpa ? `above the critical pressure of ${c.model.id}` : `above the ${c.model.id} chart, which ends at ${round2(highPsig)} psig (${round1(c.maxF)} °F)`;
+    const why =
+      kpa >= c.model.criticalPressureKpa
+        ? `above the critical pressure of ${c.model.id}`
+        : `above the ${c.model.id} chart, which ends at ${round2(highPsig)} psig (${round1(c.maxF)} °F)`;
     throw new SaturationRangeError('psig', `${round1(psig)} psig is ${why}`);
   }
   return kpa;

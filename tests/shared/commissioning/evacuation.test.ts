@@ -26,7 +26,9 @@ describe('evacuation', () => {
 
   it('when the shop asks for 300 microns, then 400 microns fails', () => {
     // UFGS refrigerant-piping example: evacuate to 300 microns (values.json EV-01)
-    expect(evaluateEvacuation({ finalMicrons: 400, decayMicrons: 450, holdMinutes: 60 }, { evacuationTargetMicrons: 300 }).pass).toBe(false);
+    expect(evaluateEvacuation({ finalMicrons: 400, decayMicrons: 450, holdMinutes: 60 }, { evacuationTargetMicrons: 300 }).pass).toBe(
+      false,
+    );
   });
 });
 

@@ -24,7 +24,9 @@ describe('superheat and subcooling from the definitions', () => {
 
   it('when R-454B is read, then superheat uses the dew point and subcooling the bubble point', () => {
     // values.json PT-04: dew 107.5 psig at 40 °F (bubble would be ~2.7 °F colder), bubble 303.3 psig at 100 °F
-    const r = evaluateReadings(readings({ refrigerant: 'R-454B', suctionPsig: 107.5, liquidPsig: 303.3, suctionLineF: 50, liquidLineF: 91 }));
+    const r = evaluateReadings(
+      readings({ refrigerant: 'R-454B', suctionPsig: 107.5, liquidPsig: 303.3, suctionLineF: 50, liquidLineF: 91 }),
+    );
     expect(Math.abs(r.suctionSatF - 40)).toBeLessThanOrEqual(0.5);
     expect(Math.abs(r.superheatF - 10)).toBeLessThanOrEqual(0.5);
     expect(Math.abs(r.liquidSatF - 100)).toBeLessThanOrEqual(0.5);
@@ -95,7 +97,8 @@ describe('expansion valve: target subcooling', () => {
 });
 
 describe('fixed orifice: target superheat', () => {
-  const piston = (over: Partial<CommissioningEvaluateInput>) => readings({ meteringType: 'piston', indoorWbF: 67, outdoorDbF: 95, ...over });
+  const piston = (over: Partial<CommissioningEvaluateInput>) =>
+    readings({ meteringType: 'piston', indoorWbF: 67, outdoorDbF: 95, ...over });
 
   it('when superheat is near the target from 67 °F WB and 95 °F outdoor, then on target', () => {
     // Target (3×67 − 80 − 95)/2 = 13 °F (common practice, values.json CM-05); SH 12 °F; ±5 °F default
@@ -122,6 +125,13 @@ describe('fixed orifice: target superheat', () => {
     const r = evaluateReadings(piston({ suctionLineF: 44 }));
     expect(r.verdict).toBe('off-target');
     expect(r.advice).toMatch(/airflow.*recover charge/);
+  });
+
+  it('when the suction line is colder than its saturation, then liquid floodback is called even with a wide tolerance', () => {
+    // SH = 38 − 40 = −2 °F: liquid in the suction line (definition of superheat); a shop tolerance of ±20 °F does not hide it
+    const r = evaluateReadings(piston({ suctionLineF: 38 }), { superheatToleranceF: 20 });
+    expect(r.verdict).toBe('off-target');
+    expect(r.advice).toMatch(/Liquid is reaching the suction line/);
   });
 
   it('when the tech has dry bulb and humidity instead of wet bulb, then the wet bulb comes from psychrolib', () => {
@@ -155,7 +165,10 @@ describe('cautions', () => {
   it('when any readings are judged, then the certified-technician caution comes with them, and the A2L one for an A2L', () => {
     // ASHRAE 34: R-32 and R-454B are A2L, R-410A is A1 (values.json RP-02..RP-04)
     expect(evaluateReadings(readings({})).cautions).toEqual([CHARGING_CAUTION]);
-    expect(evaluateReadings(readings({ refrigerant: 'R-454B', suctionPsig: 107.5, liquidPsig: 303.3 })).cautions).toEqual([CHARGING_CAUTION, A2L_CAUTION]);
+    expect(evaluateReadings(readings({ refrigerant: 'R-454B', suctionPsig: 107.5, liquidPsig: 303.3 })).cautions).toEqual([
+      CHARGING_CAUTION,
+      A2L_CAUTION,
+    ]);
   });
 });
 

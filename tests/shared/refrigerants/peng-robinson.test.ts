@@ -1,7 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { fToKelvin } from '../../../shared/refrigerants/atmosphere';
-import { matchedAttraction, prBubblePressureKpa, prDewPressureKpa, prPureSaturationKpa, standardAttraction, type PrComponent } from '../../../shared/refrigerants/peng-robinson';
+import { fToKelvin, KPA_PER_PSI } from '../../../shared/refrigerants/atmosphere';
+import {
+  matchedAttraction,
+  prBubblePressureKpa,
+  prDewPressureKpa,
+  prPureSaturationKpa,
+  standardAttraction,
+  type PrComponent,
+} from '../../../shared/refrigerants/peng-robinson';
 import { R454B_COMPONENTS, r454bMixture, R454B_KIJ } from '../../../shared/refrigerants/saturation-models';
+import { referenceSaturationKpa } from './reference-eos';
 import { referenceValue } from './reference-values';
 
 // Critical constants and acentric factors: values.json RP-10..RP-13 (the reference EOS papers).
@@ -61,5 +69,40 @@ describe('Peng–Robinson core', () => {
     const tempK = fToKelvin(40);
     expect(prBubblePressureKpa(r454bMixture(0.05), tempK)).toBeGreaterThan(prBubblePressureKpa(r454bMixture(0), tempK));
     expect(prDewPressureKpa(r454bMixture(0.05), tempK)).toBeGreaterThan(prDewPressureKpa(r454bMixture(0), tempK));
+  });
+});
+
+describe('R-454B model inputs', () => {
+  it('when the components’ vapor pressures are compared with their reference EOS from 0 to 130 °F, then within 0.05 %', () => {
+    // Reference EOS from published coefficients (reference-eos.ts): Tillner-Roth & Yokozeki 1997 (R-32),
+    // Richter, McLinden & Lemmon 2011 (R-1234yf); 0.05 % of pressure is about 0.02 °F
+    const ids = ['R-32', 'R-1234yf'] as const;
+    R454B_COMPONENTS.forEach((c, i) => {
+      for (let tempF = 0; tempF <= 130; tempF += 10) {
+        const tempK = fToKelvin(tempF);
+        const mine = c.vaporPressureKpa(tempK);
+        expect(Math.abs(mine / referenceSaturationKpa(ids[i], tempK, mine) - 1), `${c.id} at ${tempF} °F`).toBeLessThan(5e-4);
+      }
+    });
+  });
+
+  it('when R-1234yf’s reference EOS is evaluated at its normal boiling point, then it gives one atmosphere', () => {
+    // Richter et al. 2011: normal boiling point 243.665 K at 101.325 kPa — guards the reference code itself
+    expect(referenceSaturationKpa('R-1234yf', 243.665, 100)).toBeCloseTo(101.325, 1);
+  });
+
+  it('when k_ij moves off the fitted value, then the misfit to the library points grows', () => {
+    // The constant must be the least-squares fit to values.json PT-04 (CoolProp 8.0.0) that scripts/fit-r454b-kij.ts finds
+    const expected = referenceValue('PT-04').expected as Record<string, { bubble_psig: number; dew_psig: number }>;
+    const sse = (kij: number) =>
+      Object.entries(expected).reduce((sum, [tempF, v]) => {
+        const tempK = fToKelvin(Number(tempF));
+        const mix = r454bMixture(kij);
+        const bubble = prBubblePressureKpa(mix, tempK) / KPA_PER_PSI - 14.696 - v.bubble_psig;
+        const dew = prDewPressureKpa(mix, tempK) / KPA_PER_PSI - 14.696 - v.dew_psig;
+        return sum + bubble * bubble + dew * dew;
+      }, 0);
+    expect(sse(R454B_KIJ)).toBeLessThan(sse(R454B_KIJ - 0.001));
+    expect(sse(R454B_KIJ)).toBeLessThan(sse(R454B_KIJ + 0.001));
   });
 });

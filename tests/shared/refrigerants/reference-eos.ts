@@ -5,7 +5,19 @@
  * in both phases (Akasaka's J/K formulation). Coefficients as published:
  * - R-22: Kamei, Beyerlein & Jacobsen, Int. J. Thermophys. 16 (1995) 1155.
  * - R-32: Tillner-Roth & Yokozeki, J. Phys. Chem. Ref. Data 26 (1997) 1273.
+ * - R-1234yf: Richter, McLinden & Lemmon, J. Chem. Eng. Data 56 (2011) 3254 (with Gaussian terms).
  */
+/** Gaussian bell-shaped terms n δ^d τ^t exp(−η(δ − ε)² − β(τ − γ)²). */
+interface GaussianTerms {
+  n: number[];
+  d: number[];
+  t: number[];
+  eta: number[];
+  beta: number[];
+  gamma: number[];
+  epsilon: number[];
+}
+
 interface HelmholtzEos {
   criticalTempK: number;
   /** Critical molar density in mol/L. */
@@ -14,25 +26,30 @@ interface HelmholtzEos {
   gasConstant: number;
   poly: { n: number[]; d: number[]; t: number[] };
   exp: { n: number[]; d: number[]; t: number[]; c: number[] };
+  gauss?: GaussianTerms;
 }
 
-export const REFERENCE_EOS: Record<'R-22' | 'R-32', HelmholtzEos> = {
+export type ReferenceFluid = 'R-22' | 'R-32' | 'R-1234yf';
+
+export const REFERENCE_EOS: Record<ReferenceFluid, HelmholtzEos> = {
   'R-22': {
     criticalTempK: 369.295,
     criticalDensityMolL: 523.8422 / 86.468,
     gasConstant: 8.31451,
     poly: {
       n: [
-        0.695645445236e-1, 0.252275419999e2, -0.202351148311e3, 0.350063090302e3, -0.223134648863e3, 0.488345904592e2, 0.108874958556e-1, 0.590315073614, -0.689043767432, 0.284224445844,
-        0.125436457897, -0.113338666416e-1, -0.63138895917e-1, 0.974021015232e-2, -0.408406844722e-3, 0.74194877357e-3, 0.315912525922e-3, 0.876009723338e-5, -0.110343340301e-3, -0.705323356879e-4,
+        0.695645445236e-1, 0.252275419999e2, -0.202351148311e3, 0.350063090302e3, -0.223134648863e3, 0.488345904592e2, 0.108874958556e-1,
+        0.590315073614, -0.689043767432, 0.284224445844, 0.125436457897, -0.113338666416e-1, -0.63138895917e-1, 0.974021015232e-2,
+        -0.408406844722e-3, 0.74194877357e-3, 0.315912525922e-3, 0.876009723338e-5, -0.110343340301e-3, -0.705323356879e-4,
       ],
       d: [1, 1, 1, 1, 1, 1, 1, 2, 2, 2, 3, 3, 4, 5, 6, 7, 7, 7, 8, 8],
       t: [-1, 1.75, 2.25, 2.5, 2.75, 3, 5.5, 1.5, 1.75, 3.5, 1, 4.5, 1.5, 0.5, 4.5, 1, 4, 5, -0.5, 3.5],
     },
     exp: {
       n: [
-        0.23585073151, -0.192640494729, 0.375218008557e-2, -0.448926036678e-4, 0.198120520635e-1, -0.356958425255e-1, 0.319594161562e-1, 0.260284291078e-5, -0.897629021967e-2, 0.345482791645e-1,
-        -0.411831711251e-2, 0.567428536529e-2, -0.563368989908e-2, 0.191384919423e-2, -0.178930036389e-2,
+        0.23585073151, -0.192640494729, 0.375218008557e-2, -0.448926036678e-4, 0.198120520635e-1, -0.356958425255e-1, 0.319594161562e-1,
+        0.260284291078e-5, -0.897629021967e-2, 0.345482791645e-1, -0.411831711251e-2, 0.567428536529e-2, -0.563368989908e-2,
+        0.191384919423e-2, -0.178930036389e-2,
       ],
       d: [2, 2, 2, 2, 3, 4, 4, 4, 4, 6, 6, 6, 8, 8, 8],
       t: [5, 7, 12, 15, 3.5, 3.5, 8, 15, 25, 3, 9, 19, 2, 7, 13],
@@ -49,10 +66,34 @@ export const REFERENCE_EOS: Record<'R-22' | 'R-32', HelmholtzEos> = {
       t: [0.25, 1, -0.25, -1, 2, 2, 0.75, 0.25],
     },
     exp: {
-      n: [0.3386203e-2, -0.4202444e-2, 0.4782025e-3, -0.5504323e-2, -0.2418396e-1, 0.4209034, -0.4616537, -0.1200513e1, -0.259155e1, -0.1400145e1, 0.8263017],
+      n: [
+        0.3386203e-2, -0.4202444e-2, 0.4782025e-3, -0.5504323e-2, -0.2418396e-1, 0.4209034, -0.4616537, -0.1200513e1, -0.259155e1,
+        -0.1400145e1, 0.8263017,
+      ],
       d: [4, 4, 8, 3, 5, 1, 1, 3, 1, 2, 3],
       t: [18, 26, -1, 25, 1.75, 4, 5, 1, 1.5, 1, 0.5],
       c: [4, 3, 1, 4, 1, 2, 2, 1, 1, 1, 1],
+    },
+  },
+  'R-1234yf': {
+    criticalTempK: 367.85,
+    criticalDensityMolL: 4.17,
+    gasConstant: 8.314472,
+    poly: { n: [0.04592563, 1.546958, -2.355237, -0.4827835, 0.1758022], d: [4, 1, 1, 2, 3], t: [1, 0.32, 0.929, 0.94, 0.38] },
+    exp: {
+      n: [-1.210006, -0.6177084, 0.6805262, -0.6968555, -0.02695779],
+      d: [1, 3, 2, 2, 7],
+      t: [2.28, 1.76, 0.97, 2.44, 1.05],
+      c: [2, 2, 1, 2, 1],
+    },
+    gauss: {
+      n: [1.389966, -0.4777136, -0.1975184, -1.147646, 0.0003428541],
+      d: [1, 1, 3, 3, 2],
+      t: [1.4, 3, 3.5, 1, 3.5],
+      eta: [1.02, 1.336, 1.055, 5.84, 16.2],
+      beta: [1.42, 2.31, 0.89, 80, 108],
+      gamma: [1.13, 0.67, 0.46, 1.28, 1.2],
+      epsilon: [0.712, 0.91, 0.677, 0.718, 1.64],
     },
   },
 };
@@ -76,6 +117,21 @@ function residual(eos: HelmholtzEos, delta: number, tau: number): [number, numbe
     a += term;
     ad += (term * g) / delta;
     add += (term * (g * (g - 1) - exp.c[k] * exp.c[k] * dc)) / (delta * delta);
+  }
+  const gauss = eos.gauss;
+  if (gauss) {
+    for (let k = 0; k < gauss.n.length; k++) {
+      const dd = delta - gauss.epsilon[k];
+      const term =
+        gauss.n[k] *
+        delta ** gauss.d[k] *
+        tau ** gauss.t[k] *
+        Math.exp(-gauss.eta[k] * dd * dd - gauss.beta[k] * (tau - gauss.gamma[k]) ** 2);
+      const g = gauss.d[k] / delta - 2 * gauss.eta[k] * dd; // ∂/∂δ of the log of the term
+      a += term;
+      ad += term * g;
+      add += term * (g * g - gauss.d[k] / (delta * delta) - 2 * gauss.eta[k]);
+    }
   }
   return [a, ad, add];
 }
@@ -102,7 +158,7 @@ function densityAt(eos: HelmholtzEos, pKpa: number, tempK: number, startMolL: nu
 }
 
 /** Saturation pressure in kPa of the reference EOS at a temperature in K, starting from an estimate in kPa. */
-export function referenceSaturationKpa(id: 'R-22' | 'R-32', tempK: number, estimateKpa: number): number {
+export function referenceSaturationKpa(id: ReferenceFluid, tempK: number, estimateKpa: number): number {
   const eos = REFERENCE_EOS[id];
   const tau = eos.criticalTempK / tempK;
   const rt = eos.gasConstant * tempK;

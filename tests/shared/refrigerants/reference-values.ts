@@ -12,7 +12,10 @@ const REPO_ROOT = path.resolve(__dirname, '../../..');
 
 /** The shared reference values: beside the checkout (CI) or beside the worktrees folder (a developer's worktree). */
 export function loadReferenceValues(): ReferenceValue[] {
-  const candidates = [path.resolve(REPO_ROOT, '../shared/reference/values.json'), path.resolve(REPO_ROOT, '../../shared/reference/values.json')];
+  const candidates = [
+    path.resolve(REPO_ROOT, '../shared/reference/values.json'),
+    path.resolve(REPO_ROOT, '../../shared/reference/values.json'),
+  ];
   const file = candidates.find((c) => existsSync(c));
   if (!file) throw new Error(`values.json not found; looked in ${candidates.join(', ')}`);
   return JSON.parse(readFileSync(file, 'utf8')) as ReferenceValue[];

@@ -36,7 +36,8 @@ function checkPoint(refrigerant: string, side: 'bubble' | 'dew', tempF: number, 
   const errPsi = computedPsig - psig;
   record(refrigerant, errF, errPsi);
   expect(Math.abs(errF), `${refrigerant} ${side} at ${tempF} °F / ${psig} psig`).toBeLessThanOrEqual(toleranceF);
-  if (refrigerant === 'R-454B') expect(Math.abs(errPsi), `${refrigerant} ${side} psi at ${tempF} °F`).toBeLessThanOrEqual(R454B_TOLERANCE_PSI);
+  if (refrigerant === 'R-454B')
+    expect(Math.abs(errPsi), `${refrigerant} ${side} psi at ${tempF} °F`).toBeLessThanOrEqual(R454B_TOLERANCE_PSI);
 }
 
 const psigFromKpa = (kpa: number) => kpa / KPA_PER_PSI - SEA_LEVEL_PSIA;
@@ -44,7 +45,9 @@ const ZERO_TO_130_F = [0, 10, 20, 30, 40, 50, 60, 70, 80, 90, 100, 110, 120, 130
 
 afterAll(() => {
   for (const [refrigerant, w] of worst) {
-    console.log(`saturation worst error ${refrigerant}: ${w.errF.toFixed(3)} °F, ${w.errPsi.toFixed(2)} psi over ${w.count} reference points`);
+    console.log(
+      `saturation worst error ${refrigerant}: ${w.errF.toFixed(3)} °F, ${w.errPsi.toFixed(2)} psi over ${w.count} reference points`,
+    );
   }
 });
 
@@ -64,16 +67,19 @@ describe('saturation against published and library reference values', () => {
     }
   });
 
-  it.each(['R-22', 'R-32'] as const)('when %s is compared with its reference Helmholtz EOS every 10 °F from 0 to 130 °F, then bubble and dew are within 1 °F', (refrigerant) => {
-    // Reference EOS evaluated from its published coefficients (tests/shared/refrigerants/reference-eos.ts):
-    // Kamei et al. 1995 (R-22), Tillner-Roth & Yokozeki 1997 (R-32).
-    for (const tempF of ZERO_TO_130_F) {
-      const estimateKpa = (dewPressurePsig(tempF, refrigerant) + SEA_LEVEL_PSIA) * KPA_PER_PSI;
-      const psig = psigFromKpa(referenceSaturationKpa(refrigerant, fToKelvin(tempF), estimateKpa));
-      checkPoint(refrigerant, 'bubble', tempF, psig);
-      checkPoint(refrigerant, 'dew', tempF, psig);
-    }
-  });
+  it.each(['R-22', 'R-32'] as const)(
+    'when %s is compared with its reference Helmholtz EOS every 10 °F from 0 to 130 °F, then bubble and dew are within 1 °F',
+    (refrigerant) => {
+      // Reference EOS evaluated from its published coefficients (tests/shared/refrigerants/reference-eos.ts):
+      // Kamei et al. 1995 (R-22), Tillner-Roth & Yokozeki 1997 (R-32).
+      for (const tempF of ZERO_TO_130_F) {
+        const estimateKpa = (dewPressurePsig(tempF, refrigerant) + SEA_LEVEL_PSIA) * KPA_PER_PSI;
+        const psig = psigFromKpa(referenceSaturationKpa(refrigerant, fToKelvin(tempF), estimateKpa));
+        checkPoint(refrigerant, 'bubble', tempF, psig);
+        checkPoint(refrigerant, 'dew', tempF, psig);
+      }
+    },
+  );
 
   it('when R-32 is looked up at points of the reference EOS paper table, then it agrees', () => {
     // Tillner-Roth & Yokozeki, J. Phys. Chem. Ref. Data 26 (1997) Table 12: 0 °C → 813.10 kPa, 50 °C → 3141.2 kPa
@@ -101,18 +107,37 @@ describe('saturation against published and library reference values', () => {
   it.each([
     // The pseudo-pure EOS of Lemmon (2003) define the blends' bubble and dew lines by these published
     // ancillaries: ln(p/pj) = (Tj/T) Σ n θ^t — typed here independently of the implementation.
-    ['R-410A', 344.494, 4901.2, [-7.2818, 2.5093, -3.2695, -2.8022], [1, 1.8, 2.4, 4.9], [-7.4411, 1.9883, -2.4925, -3.2633], [1, 1.6, 2.4, 5]],
-    ['R-407C', 359.345, 4631.7, [0.48722, -6.6959, -1.4165, -2.5109], [0.54, 0.925, 2.7, 4.7], [-0.086077, -6.6364, -2.4648, -3.4776], [0.4, 0.965, 3.1, 5]],
-  ] as const)('when %s is compared with its reference bubble and dew lines every 10 °F from 0 to 130 °F, then within 1 °F', (refrigerant, tj, pj, nb, tb, nd, td) => {
-    const line = (n: readonly number[], t: readonly number[], tempK: number) => {
-      const theta = 1 - tempK / tj;
-      return pj * Math.exp((tj / tempK) * n.reduce((s, ni, i) => s + ni * theta ** t[i], 0));
-    };
-    for (const tempF of ZERO_TO_130_F) {
-      checkPoint(refrigerant, 'bubble', tempF, psigFromKpa(line(nb, tb, fToKelvin(tempF))));
-      checkPoint(refrigerant, 'dew', tempF, psigFromKpa(line(nd, td, fToKelvin(tempF))));
-    }
-  });
+    [
+      'R-410A',
+      344.494,
+      4901.2,
+      [-7.2818, 2.5093, -3.2695, -2.8022],
+      [1, 1.8, 2.4, 4.9],
+      [-7.4411, 1.9883, -2.4925, -3.2633],
+      [1, 1.6, 2.4, 5],
+    ],
+    [
+      'R-407C',
+      359.345,
+      4631.7,
+      [0.48722, -6.6959, -1.4165, -2.5109],
+      [0.54, 0.925, 2.7, 4.7],
+      [-0.086077, -6.6364, -2.4648, -3.4776],
+      [0.4, 0.965, 3.1, 5],
+    ],
+  ] as const)(
+    'when %s is compared with its reference bubble and dew lines every 10 °F from 0 to 130 °F, then within 1 °F',
+    (refrigerant, tj, pj, nb, tb, nd, td) => {
+      const line = (n: readonly number[], t: readonly number[], tempK: number) => {
+        const theta = 1 - tempK / tj;
+        return pj * Math.exp((tj / tempK) * n.reduce((s, ni, i) => s + ni * theta ** t[i], 0));
+      };
+      for (const tempF of ZERO_TO_130_F) {
+        checkPoint(refrigerant, 'bubble', tempF, psigFromKpa(line(nb, tb, fToKelvin(tempF))));
+        checkPoint(refrigerant, 'dew', tempF, psigFromKpa(line(nd, td, fToKelvin(tempF))));
+      }
+    },
+  );
 });
 
 describe('glide of the blends', () => {
@@ -121,8 +146,11 @@ describe('glide of the blends', () => {
     const pt05 = referenceValue('PT-05').expected as Record<string, number>;
     const glideAtDew = (refrigerant: string, dewF: number) => glideAtDewF(dewF, refrigerant);
     const cases: [string, number, number][] = [
+      // PT-05 gives one glide for R-410A and R-454B at both dew temperatures (40 °F and 100 °F)
       ['R-410A', 40, pt05['R-410A_F']],
+      ['R-410A', 100, pt05['R-410A_F']],
       ['R-454B', 40, pt05['R-454B_F']],
+      ['R-454B', 100, pt05['R-454B_F']],
       ['R-407C', 40, pt05['R-407C_F_at_40']],
       ['R-407C', 100, pt05['R-407C_F_at_100']],
     ];
@@ -220,6 +248,8 @@ describe('range errors', () => {
   it('when the refrigerant is unknown, then the refrigerant field is named', () => {
     expect(fieldOf(() => dewPointF(100, 'R-12')).field).toBe('refrigerant');
     expect(fieldOf(() => dewPressurePsig(40, '')).field).toBe('refrigerant');
+    expect(fieldOf(() => dewPressurePsig(40, 'constructor')).field).toBe('refrigerant');
+    expect(fieldOf(() => bubblePointF(100, '__proto__')).field).toBe('refrigerant');
   });
 
   it('when a refrigerant is written the trade ways, then the same curve answers', () => {
