@@ -152,3 +152,39 @@ describe('the Readings screen on a wide screen (1440×900)', () => {
     await page.context().close();
   });
 });
+
+describe('the shop’s start-up settings (Admin → Rules, wide)', () => {
+  it('when an admin narrows the subcooling margin to 1 °F, then 8 °F against a 10 °F target reads off target on the Readings screen', async () => {
+    const page = await openPage(browser, 'wide');
+    await signIn(page, account('admin'));
+    await page.goto('/admin/rules');
+    const margin = page.getByTestId('setting-subcoolingToleranceF');
+    // 3 °F: the shared default margin (common practice, no source)
+    await expect.poll(() => margin.inputValue(), { timeout: 15_000 }).toBe('3');
+    await margin.fill('1');
+    await page.getByTestId('save-rules').click();
+    await expect.poll(() => page.getByText('Saved. New checks use these settings.').count(), { timeout: 15_000 }).toBe(1);
+    await page.getByTestId('commissioning-settings').scrollIntoViewIfNeeded();
+    await screenshot(page, 'rules-commissioning-wide');
+
+    try {
+      await page.getByTestId('nav-readings').first().click();
+      await page.getByTestId('metering-txv').click();
+      // R-410A, values.json PT-02: dew 118.4 psig at 40 °F, bubble 318.5 psig at 100 °F; 100 − 92 = 8 °F subcooling
+      await page.getByTestId('reading-suctionPsig').fill('118.4');
+      await page.getByTestId('reading-suctionLineF').fill('50');
+      await page.getByTestId('reading-liquidPsig').fill('318.5');
+      await page.getByTestId('reading-liquidLineF').fill('92');
+      await page.getByTestId('reading-outdoorDbF').fill('95');
+      await verdict(page).toBe('Off target');
+    } finally {
+      // Other browser tests share this server: put the default back.
+      await page.goto('/admin/rules');
+      await expect.poll(() => margin.inputValue(), { timeout: 15_000 }).toBe('1');
+      await margin.fill('3');
+      await page.getByTestId('save-rules').click();
+      await expect.poll(() => page.getByText('Saved. New checks use these settings.').count(), { timeout: 15_000 }).toBe(1);
+      await page.context().close();
+    }
+  });
+});
