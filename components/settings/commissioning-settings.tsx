@@ -20,7 +20,7 @@ export function CommissioningSettings({ values, defaults, errors, onChange }: Pr
         Start-up readings
       </Text>
       <Text variant="bodySmall">
-        How far superheat and subcooling may sit from their targets and still read as on target, and what a finished evacuation must show.
+        How far superheat and subcooling may sit from their targets and still read as on target, and what a finished evacuation must show: the deepest vacuum, and the highest reading the decay test may rise to over its hold.
       </Text>
       <View style={styles.grid}>
         {COMMISSIONING_SETTING_FIELDS.map((f) => (

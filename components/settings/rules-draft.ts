@@ -21,7 +21,7 @@ export const COMMISSIONING_SETTING_FIELDS: typeof SETTING_FIELDS = [
   { key: 'superheatToleranceF', label: 'Superheat margin, ± (°F)' },
   { key: 'subcoolingToleranceF', label: 'Subcooling margin, ± (°F)' },
   { key: 'evacuationTargetMicrons', label: 'Evacuation target (microns)' },
-  { key: 'decayLimitMicrons', label: 'Decay test: highest reading after the hold (microns)' },
+  { key: 'decayLimitMicrons', label: 'Decay test limit (microns)' },
   { key: 'decayHoldMinutes', label: 'Decay test hold (minutes)' },
 ];
 
