@@ -5,7 +5,7 @@ import { normalizeRefrigerantName, REFRIGERANT_IDS } from '../../shared/schemas/
 import { requireAuth } from '../auth/auth.middleware';
 import type { AppContext } from '../context';
 import { notFound } from '../lib/errors';
-import { parseParams } from '../lib/validate';
+import { IdParamSchema, parseParams } from '../lib/validate';
 import { getCatalogDetail, listCatalog } from './catalog.service';
 
 const KindSchema = z.enum(CATALOG_KINDS);
@@ -16,7 +16,6 @@ const ListQuerySchema = z.object({
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(20),
 });
-const IdSchema = z.object({ id: z.coerce.number().int().positive() });
 
 /** Parses :kind; an unknown kind is a 404 (there is no such collection). */
 function kindOf(raw: string) {
@@ -35,7 +34,7 @@ export function catalogRouter(ctx: AppContext): Router {
   });
   router.get('/:kind/:id', async (req, res) => {
     const kind = kindOf(req.params.kind);
-    const { id } = parseParams(IdSchema, { id: req.params.id });
+    const { id } = parseParams(IdParamSchema, { id: req.params.id });
     res.json(await getCatalogDetail(ctx, kind, id));
   });
   return router;
