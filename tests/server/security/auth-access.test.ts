@@ -183,6 +183,12 @@ describe('hostile query parameters on catalog search', () => {
     expect(text).not.toMatch(/@test\.invalid|passwordHash|root:/);
   });
 
+  it.each(PARAMS)('when %s is repeated (an array), then 400, not a 500', async (param) => {
+    const res = await request(t.app).get(`/api/catalog/outdoor-units?${param}=1&${param}=2`).set(as('tech'));
+    expect(res.status).toBe(400);
+    expect(JSON.stringify(res.body)).not.toMatch(LEAK);
+  });
+
   it('when all of that has run, then the users table is intact', async () => {
     expect(await t.ctx.dataSource.getRepository(User).countBy({ role: 'admin' })).toBeGreaterThan(0);
   });
