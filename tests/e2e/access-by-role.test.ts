@@ -26,7 +26,11 @@ beforeAll(async () => {
   form.append('kind', 'prices');
   form.append('distributor', DISTRIBUTOR);
   form.append('dryRun', 'false');
-  const res = await fetch(`${inject('baseUrl')}/api/imports`, { method: 'POST', headers: { Authorization: `Bearer ${token}` }, body: form });
+  const res = await fetch(`${inject('baseUrl')}/api/imports`, {
+    method: 'POST',
+    headers: { Authorization: `Bearer ${token}` },
+    body: form,
+  });
   expect(res.status, await res.clone().text()).toBe(201);
 });
 afterAll(async () => {
@@ -34,23 +38,26 @@ afterAll(async () => {
 });
 
 describe('access by role in the browser', () => {
-  it.each(['phone', 'wide'] as const)('when an admin opens Users on a %s, then their own role and active controls are disabled with the reason, and others stay enabled', async (viewport) => {
-    const page = await openPage(browser, viewport);
-    const me = account('admin');
-    const other = account('tech');
-    await signIn(page, me);
-    await page.goto('/admin/users');
-    const own = page.getByTestId(`user-row-${me.email}`);
-    await expect.poll(() => own.isVisible(), { timeout: 15_000 }).toBe(true);
-    expect(await own.getByTestId('own-row-reason').textContent()).toMatch(/can not change your own role or deactivate yourself/);
-    expect(await page.getByTestId(`role-${me.email}`).isDisabled()).toBe(true);
-    expect(await page.getByTestId(`toggle-active-${me.email}`).isDisabled()).toBe(true);
-    expect(await page.getByTestId(`reset-password-${me.email}`).isDisabled()).toBe(false);
-    expect(await page.getByTestId(`role-${other.email}`).isDisabled()).toBe(false);
-    expect(await page.getByTestId(`toggle-active-${other.email}`).isDisabled()).toBe(false);
-    await screenshot(page, `access-own-row-${viewport}`);
-    await page.context().close();
-  });
+  it.each(['phone', 'wide'] as const)(
+    'when an admin opens Users on a %s, then their own role and active controls are disabled with the reason, and others stay enabled',
+    async (viewport) => {
+      const page = await openPage(browser, viewport);
+      const me = account('admin');
+      const other = account('tech');
+      await signIn(page, me);
+      await page.goto('/admin/users');
+      const own = page.getByTestId(`user-row-${me.email}`);
+      await expect.poll(() => own.isVisible(), { timeout: 15_000 }).toBe(true);
+      expect(await own.getByTestId('own-row-reason').textContent()).toMatch(/can not change your own role or deactivate yourself/);
+      expect(await page.getByTestId(`role-${me.email}`).isDisabled()).toBe(true);
+      expect(await page.getByTestId(`toggle-active-${me.email}`).isDisabled()).toBe(true);
+      expect(await page.getByTestId(`reset-password-${me.email}`).isDisabled()).toBe(false);
+      expect(await page.getByTestId(`role-${other.email}`).isDisabled()).toBe(false);
+      expect(await page.getByTestId(`toggle-active-${other.email}`).isDisabled()).toBe(false);
+      await screenshot(page, `access-own-row-${viewport}`);
+      await page.context().close();
+    },
+  );
 
   it('when a tech on a phone opens a part a distributor stocks, then it says where it is in stock and shows no price', async () => {
     const page = await openPage(browser, 'phone');

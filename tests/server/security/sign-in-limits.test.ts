@@ -80,7 +80,10 @@ describe('sign-in limits', () => {
 
 describe('wrong current passwords on POST /api/auth/password', () => {
   const change = (app: TestApp, currentPassword: string, newPassword = 'a-new-password-77') =>
-    request(app.app).post('/api/auth/password').set('Authorization', `Bearer ${app.tokenFor('tech')}`).send({ currentPassword, newPassword });
+    request(app.app)
+      .post('/api/auth/password')
+      .set('Authorization', `Bearer ${app.tokenFor('tech')}`)
+      .send({ currentPassword, newPassword });
 
   it('when the current password is wrong the limit of times, then the next change is 429 even with the right one', async () => {
     const app = await appWith();
@@ -114,9 +117,12 @@ describe('TANDEM_TRUST_PROXY', () => {
     expect(parseTrustProxy(raw)).toEqual(expected);
   });
 
-  it.each(['true', 'everything', '10.0.0.0/33', '300.1.1.1', '10.0.0.1/8/2'])('when set to "%s", then the server refuses to start', (raw) => {
-    expect(() => parseTrustProxy(raw)).toThrow(/TANDEM_TRUST_PROXY/);
-  });
+  it.each(['true', 'everything', '10.0.0.0/33', '300.1.1.1', '10.0.0.1/8/2'])(
+    'when set to "%s", then the server refuses to start',
+    (raw) => {
+      expect(() => parseTrustProxy(raw)).toThrow(/TANDEM_TRUST_PROXY/);
+    },
+  );
 
   it('when it is not set, then no proxy is trusted', () => {
     expect(loadConfig({ TANDEM_JWT_SECRET: 'a-secret-of-enough-length', TANDEM_DATA_DIR: '/tmp' }).trustProxy).toBe(false);
