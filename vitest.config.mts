@@ -31,6 +31,8 @@ export default defineConfig({
           testTimeout: 120000,
           hookTimeout: 240000,
           fileParallelism: false,
+          // A cold page on a busy 2-core machine can take seconds to settle: polls wait up to 15 s.
+          expect: { poll: { timeout: 15000 } },
         },
       },
     ],
