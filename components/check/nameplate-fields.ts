@@ -92,6 +92,8 @@ const AIR_HANDLER = {
   refrigerants: { label: 'Listed refrigerants', type: 'multi', options: refrigerants },
   a2lListed: bool('Listed for A2L refrigerants'),
   heatKitKw: num('Heat kit (kW)'),
+  heatKitRatedVoltage: num('Heat kit rated at (V)'),
+  leakSensor: bool('Refrigerant leak sensor fitted'),
   mcaAmps: num('MCA (A)'),
   mocpAmps: num('MOCP (A)'),
   voltage: { label: 'Voltage (V)', type: 'text' },

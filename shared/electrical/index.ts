@@ -3,4 +3,4 @@
 export { STANDARD_BREAKER_AMPS, ADDITIONAL_FUSE_AMPS, isStandardBreaker, standardBreakersBetween, standardBreakerAtOrAbove, standardBreakerAtOrBelow } from './standard-ratings';
 export { conductorAmpacity, terminalColumnC, SMALL_CONDUCTOR_MAX_OCPD_AMPS, ARTICLE_440_NOTE, type ConductorMaterial, type TemperatureColumnC } from './ampacity';
 export { minimumCircuitAmpacity, maximumOvercurrentProtection, mocpRawAmps, type MotorLoads } from './circuit';
-export { nameplateVoltageRange, heaterOutputKw, VOLTAGE_TOLERANCE, type VoltageRange } from './voltage';
+export { DEFAULT_HEAT_KIT_RATED_V, nameplateVoltageRange, heaterOutputKw, VOLTAGE_TOLERANCE, type VoltageRange } from './voltage';

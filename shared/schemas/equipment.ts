@@ -92,6 +92,10 @@ export const AirHandlerSpecSchema = z.object({
   refrigerants: opt(refrigerantList),
   a2lListed: opt(yesNo),
   heatKitKw: opt(numberIn(0, 50)),
+  /** Voltage the heat kit's kW is rated at (default 240 V when not given). */
+  heatKitRatedVoltage: opt(numberIn(100, 600)),
+  /** An air handler with its own coil may carry the A2L leak sensor itself. */
+  leakSensor: opt(yesNo),
   mcaAmps: opt(amps),
   mocpAmps: opt(amps),
   voltage: opt(voltage),

@@ -1,6 +1,7 @@
 import { AIRFLOW_BLOCKER_MARGIN_CFM_PER_TON, cfmPerTon } from '../../airflow/airflow';
 import { defineRule } from '../define-rule';
 import { fmt, fmtTons } from '../facts';
+import { withArticle } from '../text';
 
 /**
  * Blower airflow per outdoor ton against the shop's band (settings, default 350–450 CFM/ton).
@@ -27,7 +28,8 @@ export const perTon = defineRule({
     return [
       tools.finding({
         severity: far ? 'blocker' : 'caution',
-        detail: `Blower moves ${fmt(ah.airflowCfm, 0)} CFM for a ${fmtTons(tons)}-ton outdoor unit: ${fmt(perTonCfm, 0)} CFM/ton, outside the ${min}–${max} CFM/ton band.`,
+        title: `Airflow ${fmt(perTonCfm, 0)} CFM per ton is ${low ? `below ${min}` : `above ${max}`}`,
+        detail: `Blower moves ${fmt(ah.airflowCfm, 0)} CFM for ${withArticle(`${fmtTons(tons)}-ton`)} outdoor unit: ${fmt(perTonCfm, 0)} CFM/ton, outside the ${min}–${max} CFM/ton band.`,
         fix: low
           ? `Aim for ${targetLow}–${targetHigh} CFM: set a higher blower speed and check duct static pressure${far ? ', or use a larger air handler' : ''}.`
           : `Aim for ${targetLow}–${targetHigh} CFM: set a lower blower speed${far ? ', or use an air handler sized for this tonnage' : ''}.`,

@@ -11,16 +11,22 @@ export const wireAmpacity = defineRule({
   evaluate(pairing, _context, tools) {
     const e = pairing.electrical;
     if (!e) return [];
+    const { wireAwg, wireMaterial } = e;
+    if (wireAwg === undefined || wireMaterial === undefined) {
+      if (wireAwg === undefined && wireMaterial === undefined) return [tools.missing('wire size and material', 'wire ampacity not checked')];
+      return [tools.missing(wireAwg === undefined ? 'wire size' : 'wire material (copper or aluminum)', 'wire ampacity not checked')];
+    }
     const mca = pairing.outdoor.spec.mcaAmps;
     if (mca === undefined) return [tools.missing("outdoor unit's MCA", 'wire size not checked')];
     const column = terminalColumnC(e.terminalRatingC);
-    const wire = `${e.wireAwg} AWG ${e.wireMaterial}`;
-    const ampacity = conductorAmpacity(e.wireAwg, e.wireMaterial, column);
-    const values = { wireAwg: String(e.wireAwg), wireMaterial: e.wireMaterial, columnC: column, ampacityAmps: ampacity ?? null, mcaAmps: mca };
+    const wire = `${wireAwg} AWG ${wireMaterial}`;
+    const ampacity = conductorAmpacity(wireAwg, wireMaterial, column);
+    const values = { wireAwg: String(wireAwg), wireMaterial, columnC: column, ampacityAmps: ampacity ?? null, mcaAmps: mca };
     if (ampacity === undefined) {
       return [
         tools.finding({
           severity: 'blocker',
+          title: `${wire} has no listed ampacity for this circuit`,
           detail: `NEC Table 310.16 gives no ampacity for ${wire}; it may not be used for this ${mca} A circuit.`,
           fix: `Run a conductor whose ampacity at the ${column} °C column is at least ${mca} A. ${ELECTRICAL_SAFETY}`,
           values,
@@ -32,6 +38,7 @@ export const wireAmpacity = defineRule({
       return [
         tools.finding({
           severity: 'blocker',
+          title: `${wire} carries ${ampacity} A; the unit needs ${mca} A`,
           detail: `${wire} carries ${ampacity} A at the ${columnWhy}, below the outdoor unit's ${mca} A MCA.`,
           fix: `Run a larger conductor (ampacity at least ${mca} A at the ${column} °C column), or confirm both terminations are marked 75 °C. ${ELECTRICAL_SAFETY}`,
           values,
@@ -39,11 +46,12 @@ export const wireAmpacity = defineRule({
       ];
     }
     const findings: Finding[] = [];
-    const smallLimit = SMALL_CONDUCTOR_MAX_OCPD_AMPS[e.wireMaterial][String(e.wireAwg)];
-    if (smallLimit !== undefined && e.breakerAmps > smallLimit) {
+    const smallLimit = SMALL_CONDUCTOR_MAX_OCPD_AMPS[wireMaterial][String(wireAwg)];
+    if (smallLimit !== undefined && e.breakerAmps !== undefined && e.breakerAmps > smallLimit) {
       findings.push(
         tools.finding({
           severity: 'info',
+          title: `${wire} on a ${e.breakerAmps} A breaker is allowed for this unit`,
           detail: `${wire} on a ${e.breakerAmps} A breaker exceeds the general ${smallLimit} A limit of NEC 240.4(D), which does not apply here. ${ARTICLE_440_NOTE}`,
           fix: '',
           values: { ...values, breakerAmps: e.breakerAmps, smallConductorLimitAmps: smallLimit },

@@ -9,6 +9,7 @@ export const length = defineRule({
   evaluate(pairing, context, tools) {
     const line = pairing.lineSet;
     if (!line) return [tools.missing('line set (sizes and length)', 'line set not checked')];
+    if (line.lengthFt === undefined) return [tools.missing('line set length', 'line length not checked')];
     const own = pairing.outdoor.spec.maxLineLengthFt;
     const max = own ?? context.settings.defaultMaxLineLengthFt;
     if (line.lengthFt <= max) return [];
@@ -17,6 +18,7 @@ export const length = defineRule({
       return [
         tools.finding({
           severity: 'blocker',
+          title: `Line set ${fmt(line.lengthFt)} ft is over the unit's ${fmt(own)} ft maximum`,
           detail: `Line set is ${fmt(line.lengthFt)} ft; the outdoor unit allows ${fmt(own)} ft (${fmt(over)} ft over).`,
           fix: `Shorten the run to ${fmt(own)} ft or less (relocate a unit), or use equipment rated for this length.`,
           values: { lengthFt: line.lengthFt, maxLengthFt: own, limitSource: 'unit' },
@@ -26,6 +28,7 @@ export const length = defineRule({
     return [
       tools.finding({
         severity: 'caution',
+        title: `Line set ${fmt(line.lengthFt)} ft is over the shop's ${fmt(max)} ft default limit`,
         detail: `Line set is ${fmt(line.lengthFt)} ft; the outdoor unit gives no maximum, and the shop default of ${fmt(max)} ft was used (${fmt(over)} ft over).`,
         fix: "Check the unit's long-line instructions: line sizes, crankcase heater, oil traps on risers, and the charge adjustment.",
         values: { lengthFt: line.lengthFt, maxLengthFt: max, limitSource: 'default' },

@@ -19,6 +19,7 @@ export const lift = defineRule({
       return [
         tools.finding({
           severity: 'blocker',
+          title: `Lift ${fmt(rise)} ft is over the unit's ${fmt(own)} ft limit`,
           detail: `Units are ${fmt(rise)} ft apart vertically; the outdoor unit allows ${fmt(own)} ft.`,
           fix: `Bring the vertical separation within ${fmt(own)} ft, or use equipment rated for it.`,
           values,
@@ -28,6 +29,7 @@ export const lift = defineRule({
     return [
       tools.finding({
         severity: 'caution',
+        title: `Lift ${fmt(rise)} ft is over the shop's ${fmt(max)} ft default limit`,
         detail: `Units are ${fmt(rise)} ft apart vertically; the outdoor unit gives no limit, and the shop default of ${fmt(max)} ft was used.`,
         fix: "Check the unit's instructions for lift: liquid head eats subcooling on a rise, and suction risers need oil traps.",
         values,

@@ -15,6 +15,7 @@ export const noRatedCombination = defineRule({
     return [
       tools.finding({
         severity: 'caution',
+        title: 'No certified rating found for these models',
         detail: `No certified rating found for ${pairing.outdoor.spec.model} with ${pairing.indoorCoil?.spec.model ?? pairing.airHandler?.spec.model}${ah ? ` on ${ah}` : ''}: its SEER2/EER2/HSPF2 are not established.`,
         fix: 'Do not quote efficiency figures or promise a rebate for this combination; pick a coil (and air handler) with a certified rating, or confirm one with the manufacturer.',
         values: { outdoorModel: pairing.outdoor.spec.model ?? null, indoorModel: pairing.indoorCoil?.spec.model ?? pairing.airHandler?.spec.model ?? null, airHandlerModel: ah ?? null },

@@ -17,6 +17,7 @@ export const ratedCombination = defineRule({
     return [
       tools.finding({
         severity: 'info',
+        title: parts.length ? `Certified rating: ${parts.join(', ')}` : 'Certified combination found',
         detail: `Certified combination${combo.reference ? ` ${combo.reference}` : ''}: ${parts.length ? parts.join(', ') : 'no figures given'}.`,
         fix: '',
         values: {
