@@ -88,6 +88,7 @@ const AIR_HANDLER = {
   minTons: tons('Min tons'),
   maxTons: tons('Max tons'),
   airflowCfm: num('Airflow (CFM)', true),
+  blowerTable: { label: 'Blower table (tap:static=CFM, e.g. low:0.3=900/0.5=820;high:0.3=1300)', type: 'text' },
   widthIn: num('Width (in)'),
   refrigerants: { label: 'Listed refrigerants', type: 'multi', options: refrigerants },
   a2lListed: bool('Listed for A2L refrigerants'),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { parseBlowerTable } from '../airflow/blower-table';
 import { blankToUndefined, enumOf, isoDate, numberIn, numberListIn, refrigerant, refrigerantList, text, tons, tubeOdIn, yesNo } from './fields';
 
 /**
@@ -82,12 +83,34 @@ export const IndoorCoilSpecSchema = z.object({
 });
 export type IndoorCoilSpec = z.infer<typeof IndoorCoilSpecSchema>;
 
+/** A blower table: compact text (`low:0.3=900/0.5=820;med:…`) or the parsed list of taps. */
+const blowerTable = z.preprocess(
+  (v, ctx) => {
+    if (typeof v !== 'string') return v;
+    const parsed = parseBlowerTable(v);
+    if ('error' in parsed) {
+      ctx.addIssue({ code: 'custom', message: parsed.error });
+      return z.NEVER;
+    }
+    return parsed.table;
+  },
+  z.array(
+    z.object({
+      tap: z.string().trim().min(1).max(20),
+      points: z.array(z.object({ staticInWc: z.number().min(0).max(2), cfm: z.number().min(100).max(10000) })).min(1).max(12),
+    }),
+    { error: 'Blower table must list taps with static=CFM points, e.g. low:0.3=900/0.5=820' },
+  ).min(1).max(10),
+);
+
 export const AirHandlerSpecSchema = z.object({
   ...identity,
   kind: enumOf(AIR_HANDLER_KINDS),
   minTons: opt(tons),
   maxTons: opt(tons),
   airflowCfm: opt(numberIn(200, 10000)),
+  /** CFM by speed tap at external static pressures (optional; picks taps at the measured static). */
+  blowerTable: opt(blowerTable),
   widthIn: opt(numberIn(8, 40)),
   refrigerants: opt(refrigerantList),
   a2lListed: opt(yesNo),

@@ -189,8 +189,22 @@ const CASES: TextCase[] = [
     ruleId: 'airflow.per-ton',
     severity: 'caution',
     pairing: () => edit((p) => (p.airHandler!.spec.airflowCfm = 1500)),
-    title: 'Airflow 500 CFM per ton is above 450',
-    detail: ['1500 CFM for a 3-ton outdoor unit', '500 CFM/ton'],
+    // Target (350 + 450) / 2 × 3 = 1200 CFM (band midpoint)
+    title: 'Airflow 500 CFM per ton is above 450: set the blower to about 1200 CFM',
+    detail: ['rated 1500 CFM for a 3-ton outdoor unit', '500 CFM/ton'],
+  },
+  {
+    // High tap 1520 CFM at 0.8 in. w.c. (interpolated 1650 → 1430 between 0.5 and 1.0) < 1750 CFM for 5 tons (350 × 5)
+    ruleId: 'airflow.per-ton',
+    severity: 'blocker',
+    pairing: () =>
+      edit((p) => {
+        p.outdoor.spec.nominalTons = 5;
+        p.airHandler!.spec.blowerTable = [{ tap: 'high', points: [{ staticInWc: 0.5, cfm: 1650 }, { staticInWc: 1, cfm: 1430 }] }];
+        p.site!.externalStaticInWc = 0.8;
+      }),
+    title: 'No blower tap reaches 1750–2250 CFM at 0.8 in. w.c.',
+    detail: ['high 1518 CFM', 'a 5-ton outdoor unit needs 1750–2250 CFM'],
   },
   {
     ruleId: 'fit.coil-orientation',

@@ -1,0 +1,105 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Finding } from '../../../shared/rules/types';
+import { uploadImport } from '../../../server/imports/imports.service';
+import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { coil410a, heatPump410a, inline } from './check-bodies';
+
+let t: TestApp;
+let airHandlerId = 0;
+
+const auth = () => ({ Authorization: `Bearer ${t.tokenFor('tech')}` });
+const post = (body: object) => request(t.app).post('/api/checks').set(auth()).send(body);
+
+/**
+ * An air handler imported with a blower table in the catalog CSV's compact column (invented figures,
+ * shaped like published fan data), its heat kit's rated voltage and a leak sensor (Issue 12).
+ */
+beforeAll(async () => {
+  t = await createTestApp();
+  const csv =
+    'model,kind,min_tons,max_tons,airflow_cfm,blower_table,refrigerants,heat_kit_kw,heat_kit_rated_voltage,leak_sensor\n' +
+    'ZK-AH36,air-handler,2,3.5,1400,low:0.3=950/0.7=800;med:0.3=1150/0.7=1000;high:0.3=1400/0.7=1230,R-410A,10,230,yes\n';
+  const result = await uploadImport(t.ctx, {
+    buffer: Buffer.from(csv),
+    fileName: 'air-handlers.csv',
+    kind: 'air-handlers',
+    dryRun: false,
+    userId: t.users.admin.id,
+  });
+  expect(result).toBeDefined();
+  const res = await request(t.app).get('/api/catalog/air-handlers').set(auth()).expect(200);
+  airHandlerId = res.body.items[0].id;
+});
+afterAll(async () => {
+  await t.close();
+});
+
+describe('catalog air handler with a blower table (Issue 12 correction 1)', () => {
+  it('when imported, then the catalog item carries the parsed table, the kit voltage and the sensor', async () => {
+    const res = await request(t.app).get('/api/catalog/air-handlers').set(auth()).expect(200);
+    expect(res.body.items[0]).toMatchObject({
+      heatKitRatedVoltage: 230,
+      leakSensor: true,
+      blowerTable: [
+        {
+          tap: 'low',
+          points: [
+            { staticInWc: 0.3, cfm: 950 },
+            { staticInWc: 0.7, cfm: 800 },
+          ],
+        },
+        {
+          tap: 'med',
+          points: [
+            { staticInWc: 0.3, cfm: 1150 },
+            { staticInWc: 0.7, cfm: 1000 },
+          ],
+        },
+        {
+          tap: 'high',
+          points: [
+            { staticInWc: 0.3, cfm: 1400 },
+            { staticInWc: 0.7, cfm: 1230 },
+          ],
+        },
+      ],
+    });
+  });
+
+  it('when the static is measured at 0.7 in. w.c., then the check names the high tap as the one inside the band', async () => {
+    // 3 tons needs 1050–1350 CFM (350–450 CFM/ton, common practice (no source)); at 0.7: med 1000 (below), high 1230 (inside)
+    const res = await post({
+      scope: 'new-system',
+      outdoor: inline(heatPump410a),
+      indoorCoil: inline(coil410a),
+      airHandler: { id: airHandlerId },
+      site: { externalStaticInWc: 0.7 },
+    }).expect(200);
+    const [f] = res.body.findings.filter((x: Finding) => x.ruleId === 'airflow.per-ton');
+    expect(f).toMatchObject({ severity: 'info', values: { tapsInBand: 'high' } });
+  });
+
+  it('when no static is given, then the rated 1400 CFM (467 CFM/ton) is a caution, not a blocker', async () => {
+    const res = await post({
+      scope: 'new-system',
+      outdoor: inline(heatPump410a),
+      indoorCoil: inline(coil410a),
+      airHandler: { id: airHandlerId },
+    }).expect(200);
+    const severities = res.body.findings.filter((x: Finding) => x.ruleId === 'airflow.per-ton').map((x: Finding) => x.severity);
+    expect(severities).toEqual(['caution', 'info']);
+  });
+
+  it('when the blower table text is malformed in a typed nameplate, then 422 says how it should read', async () => {
+    const res = await post({
+      scope: 'new-system',
+      outdoor: inline(heatPump410a),
+      airHandler: inline({ kind: 'air-handler', blowerTable: 'low 900' }),
+    }).expect(422);
+    expect(res.body.error.details[0]).toMatchObject({
+      path: 'airHandler.spec.blowerTable',
+      message: expect.stringContaining('tap:static=CFM'),
+    });
+  });
+});
