@@ -52,6 +52,7 @@ export const wireAmpacity = defineRule({
         tools.finding({
           severity: 'info',
           title: `${wire} on a ${e.breakerAmps} A breaker is allowed for this unit`,
+          basis: { kind: 'standard', citation: 'NEC 240.4(G) and Article 440 Part III: motor-compressor circuits are protected per the nameplate MOCP, not 240.4(D)' },
           detail: `${wire} on a ${e.breakerAmps} A breaker exceeds the general ${smallLimit} A limit of NEC 240.4(D), which does not apply here. ${ARTICLE_440_NOTE}`,
           fix: '',
           values: { ...values, breakerAmps: e.breakerAmps, smallConductorLimitAmps: smallLimit },

@@ -10,6 +10,8 @@ const SAFETY =
   'A2L refrigerants are mildly flammable: work by certified technicians, keep ignition sources away, and follow the equipment instructions and local codes (the AHJ decides).';
 
 const DETECTION_BASIS = { kind: 'standard' as const, citation: DETECTION_CITATION };
+/** An indoor part's A2L listing: the listing standard and the EPA use conditions that require it. */
+const LISTING_BASIS = { kind: 'standard' as const, citation: 'UL 60335-2-40, 3rd ed. (2019) listing for A2L refrigerants; EPA SNAP Rule 23 use conditions (86 FR 24444)' };
 
 /** A2L systems need A2L-listed indoor parts and, above m1, a refrigerant detection system (DESIGN §3). */
 export const a2lListing = defineRule({
@@ -33,6 +35,7 @@ export const a2lListing = defineRule({
           severity: 'blocker',
           title: `${capitalize(label)} is not listed for A2L refrigerants; the unit runs ${system}`,
           detail: `The ${label}${spec.model ? ` ${spec.model}` : ''} is ${listed === false ? 'marked not listed' : 'not shown as listed'} for A2L refrigerants, and the system runs ${system} (class A2L).`,
+          basis: LISTING_BASIS,
           fix: `Use ${withArticle(label)} listed for ${system}${label === 'indoor coil' ? '' : ' (or the listed mitigation control kit its maker names) that runs the blower on a leak signal'}. ${SAFETY}`,
           values: { part: label, systemRefrigerant: system, a2lListed: listed ?? null },
         }),
