@@ -30,6 +30,15 @@ beforeAll(async () => {
   expect(result).toBeDefined();
   const res = await request(t.app).get('/api/catalog/air-handlers').set(auth()).expect(200);
   airHandlerId = res.body.items[0].id;
+  // A certificate directory row naming a model family (Issue 12 item 9)
+  const combos = 'outdoor_model,indoor_model,seer2,eer2,hspf2,reference\nZT-HP3?-*,ZT-COIL-3*,15.1,12,7.9,FAMILY-ROW\n';
+  await uploadImport(t.ctx, {
+    buffer: Buffer.from(combos),
+    fileName: 'rated.csv',
+    kind: 'rated-combinations',
+    dryRun: false,
+    userId: t.users.admin.id,
+  });
 });
 afterAll(async () => {
   await t.close();
@@ -101,5 +110,28 @@ describe('catalog air handler with a blower table (Issue 12 correction 1)', () =
       path: 'airHandler.spec.blowerTable',
       message: expect.stringContaining('tap:static=CFM'),
     });
+  });
+});
+
+describe('rated combinations by model family (Issue 12 item 9)', () => {
+  it('when a family row is imported, then a check of a member pairing finds it and names the row', async () => {
+    const res = await post({
+      scope: 'new-system',
+      site: { state: 'FL' },
+      outdoor: inline(heatPump410a),
+      indoorCoil: inline(coil410a),
+    }).expect(200);
+    const rated = res.body.findings.find((f: Finding) => f.ruleId === 'rating.rated-combination');
+    expect(rated.detail).toContain('(row ZT-HP3?-* with ZT-COIL-3*)');
+    expect(res.body.findings.map((f: Finding) => f.ruleId)).not.toContain('rating.no-rated-combination');
+  });
+
+  it('when the models fall outside the family, then no rating is claimed', async () => {
+    const res = await post({
+      scope: 'new-system',
+      outdoor: inline({ ...heatPump410a, model: 'ZT-HP48-T1' }),
+      indoorCoil: inline(coil410a),
+    }).expect(200);
+    expect(res.body.findings.map((f: Finding) => f.ruleId)).toContain('rating.no-rated-combination');
   });
 });
