@@ -1,3 +1,4 @@
+import { elbowEquivalentFt } from '../lineset/fittings';
 import { a2lListingOf } from '../refrigerants/a2l-detection';
 import { isA2L } from '../refrigerants/index';
 import type { AirHandlerSpec } from '../schemas/equipment';
@@ -88,4 +89,25 @@ export function hasDetectionAndMitigation(pairing: Pairing): boolean {
   const ah = pairing.airHandler?.spec;
   const sensor = part?.leakSensor === true || (part?.label === 'indoor coil' && ah?.leakSensor === true);
   return sensor && !!ah && a2lListingOf(ah, isA2L) === true;
+}
+
+/** The run length the line-set rules share (measured, plus elbows' equivalent length). */
+export interface RunLength {
+  /** Measured plus elbows' equivalent length, ft; undefined when elbows are given but no suction size is known. */
+  equivalentFt?: number;
+  elbowsCounted: boolean;
+  /** Words for a sentence: "80 ft measured plus 6 elbows at 2 ft (7/8 in)". */
+  words: string;
+}
+
+/** Equivalent length of the pairing's line set: measured length + elbows × ft per elbow at the suction size. */
+export function runLength(pairing: Pairing): RunLength {
+  const line = pairing.lineSet;
+  const lengthFt = line?.lengthFt ?? 0;
+  const elbows = line?.elbows;
+  if (!elbows) return { equivalentFt: lengthFt, elbowsCounted: false, words: `${fmt(lengthFt)} ft measured${elbows === undefined ? ' (elbows not given)' : ''}` };
+  const sizeIn = line?.suctionOdIn ?? pairing.outdoor.spec.suctionLineOdIn;
+  const per = sizeIn === undefined ? undefined : elbowEquivalentFt(sizeIn);
+  if (per === undefined) return { equivalentFt: undefined, elbowsCounted: false, words: `${fmt(lengthFt)} ft measured` };
+  return { equivalentFt: lengthFt + elbows * per, elbowsCounted: true, words: `${fmt(lengthFt)} ft measured plus ${elbows} ${elbows === 1 ? 'elbow' : 'elbows'} at ${fmt(per)} ft each` };
 }

@@ -6,6 +6,9 @@ import type { RuleSettings } from './types';
  * 10 °F subcooling when the unit gives none: common practice (no source).
  * 50 ft / 20 ft line-length and lift limits when a unit gives none: common practice (no source),
  * conservative figures typical of residential installation instructions.
+ * No default standard line length: long-line practice runs on the unit's own figure, or on one the
+ * shop sets (50 ft is a common conservative choice, no source); without either it is a coverage note,
+ * so a check without the new facts reads as before.
  */
 export const DEFAULT_RULE_SETTINGS: RuleSettings = {
   cfmPerTonMin: 350,
@@ -13,6 +16,7 @@ export const DEFAULT_RULE_SETTINGS: RuleSettings = {
   defaultTargetSubcoolingF: 10,
   defaultMaxLineLengthFt: 50,
   defaultMaxLiftFt: 20,
+  defaultStandardLineLengthFt: undefined,
   rebateTier: undefined,
 };
 

@@ -11,6 +11,8 @@ export const FILTER_DRIERS = ['bi-flow', 'one-way', 'none'] as const;
 export const WIRE_AWG = [14, 12, 10, 8, 6, 4, 3, 2, 1, '1/0', '2/0', '3/0', '4/0'] as const;
 export const WIRE_MATERIALS = ['copper', 'aluminum'] as const;
 export const TERMINAL_RATINGS_C = [60, 75, 90] as const;
+export const CONDUCTOR_TYPES = ['nm-b', 'uf-b', 'thhn-conduit', 'se'] as const;
+export const OVERCURRENT_TYPES = ['breaker', 'hacr-breaker', 'fuse'] as const;
 
 /** A part is a catalog id or a spec typed from a nameplate; `kept` marks a part staying from the old system. */
 export function partRef<T extends z.ZodType>(spec: T) {
@@ -71,6 +73,10 @@ export const LineSetSchema = z.object({
   burnoutHistory: z.boolean({ error: 'Answer yes or no: did the old system have a compressor burnout?' }).optional(),
   indoorFlareJoints: z.boolean({ error: 'Answer yes or no: are there flare joints indoors?' }).optional(),
   filterDrier: choice(FILTER_DRIERS, 'Choose the filter-drier: bi-flow, one-way or none').optional(),
+  /** 90° elbows in the run: each adds equivalent length by tube size. */
+  elbows: z.number({ error: 'Elbows must be a whole number from 0 to 50' }).int({ error: 'Elbows must be a whole number from 0 to 50' }).min(0, { error: 'Elbows must be a whole number from 0 to 50' }).max(50, { error: 'Elbows must be a whole number from 0 to 50' }).optional(),
+  /** True when the outdoor unit sits above the indoor coil. */
+  outdoorAbove: z.boolean({ error: 'Answer yes or no: does the outdoor unit sit above the indoor coil?' }).optional(),
 });
 
 /** Every electrical fact is optional: a breaker alone runs the breaker rules. */
@@ -81,6 +87,18 @@ export const ElectricalSchema = z.object({
   terminalRatingC: z.union([z.literal(60), z.literal(75), z.literal(90)], { error: 'Terminal rating must be 60, 75 or 90 °C' }).optional(),
   supplyVoltage: z.number({ error: 'Supply voltage must be a whole number from 100 to 600 V' }).int({ error: 'Supply voltage must be a whole number from 100 to 600 V' }).min(100, { error: 'Supply voltage must be a whole number from 100 to 600 V' }).max(600, { error: 'Supply voltage must be a whole number from 100 to 600 V' }).optional(),
   supplyPhase: z.union([z.literal(1), z.literal(3)], { error: 'Supply phase must be 1 or 3' }).optional(),
+  /** Cable or wire type: NM-B and UF-B are held to the 60 °C column (NEC 334.80, 340.80). */
+  conductorType: choice(CONDUCTOR_TYPES, 'Choose the wire type: NM-B cable, UF-B cable, THHN in conduit or SE cable').optional(),
+  /** The disconnecting means at the outdoor unit (NEC 440.14). */
+  disconnect: z
+    .object({
+      withinSight: z.boolean({ error: 'Answer yes or no: is the disconnect within sight of the outdoor unit?' }),
+      ratingAmps: amount('Disconnect rating', 1, 1000, 'A').optional(),
+      fused: z.boolean({ error: 'Answer yes or no: is the disconnect fused?' }).optional(),
+    })
+    .optional(),
+  /** What protects the circuit: a plain breaker, an HACR-marked breaker or fuses. */
+  overcurrentType: choice(OVERCURRENT_TYPES, 'Choose the protection: breaker, HACR breaker or fuses').optional(),
 });
 
 export const CheckRequestSchema = z.object({

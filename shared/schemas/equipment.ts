@@ -15,6 +15,7 @@ export const COIL_MATERIALS = ['copper', 'aluminum'] as const;
 export const METERING_TYPES = ['txv', 'piston', 'eev', 'none'] as const;
 export const AIR_HANDLER_KINDS = ['air-handler', 'furnace'] as const;
 export const KIT_TYPES = ['txv', 'piston', 'eev'] as const;
+export const OVERCURRENT_REQUIRED = ['fuse', 'fuse-or-hacr'] as const;
 
 /** Optional fields treat a blank CSV cell or a JSON null as absent. */
 const opt = <T extends z.ZodType>(schema: T) => z.preprocess(blankToUndefined, schema.optional());
@@ -48,12 +49,21 @@ export const OutdoorUnitSpecSchema = z.object({
   allowedSuctionOdIn: opt(numberListIn(0.125, 2.125)),
   maxLineLengthFt: opt(numberIn(5, 500)),
   maxLiftFt: opt(numberIn(0, 300)),
+  /** Lift limits when the instructions give two: outdoor unit above the coil, and below it. */
+  maxLiftOutdoorAboveFt: opt(numberIn(0, 300)),
+  maxLiftOutdoorBelowFt: opt(numberIn(0, 300)),
+  /** Line length beyond which the unit's long-line instructions apply (shop default when blank). */
+  standardLineLengthFt: opt(numberIn(5, 500)),
   factoryChargeOz: opt(numberIn(0, 2000)),
   chargedLineLengthFt: opt(numberIn(0, 100)),
   chargePerFtOz: opt(numberIn(0, 5)),
   mcaAmps: opt(amps),
   mocpAmps: opt(amps),
   voltage: opt(voltage),
+  /** The nameplate says "use copper conductors only". */
+  copperOnly: opt(yesNo),
+  /** The nameplate calls for fuses only, or fuses or HACR-type breakers. */
+  overcurrentRequired: opt(enumOf(OVERCURRENT_REQUIRED)),
   phase: opt(z.preprocess((v) => (typeof v === 'string' && v.trim() !== '' ? Number(v) : v === '' ? undefined : v), z.union([z.literal(1), z.literal(3)], { error: 'phase must be 1 or 3' }))),
   startAssist: opt(yesNo),
   manufactureDate: opt(isoDate),

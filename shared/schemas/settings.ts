@@ -28,6 +28,7 @@ export const RuleSettingsSchema = z
     defaultTargetSubcoolingF: z.number().min(0).max(30),
     defaultMaxLineLengthFt: z.number().min(5).max(500),
     defaultMaxLiftFt: z.number().min(0).max(300),
+    defaultStandardLineLengthFt: z.number().min(5).max(500).optional(),
     rebateTier: RebateTierSchema.optional(),
   })
   .refine((s) => s.cfmPerTonMax > s.cfmPerTonMin, { error: 'cfmPerTonMax must be above cfmPerTonMin', path: ['cfmPerTonMax'] });

@@ -1,4 +1,4 @@
-import { conductorAmpacity, DEFAULT_HEAT_KIT_RATED_V, heaterOutputKw, nameplateVoltageRange, terminalColumnC } from '../../electrical';
+import { conductorAmpacity, conductorColumnC, DEFAULT_HEAT_KIT_RATED_V, heaterOutputKw, nameplateVoltageRange } from '../../electrical';
 import { defineRule } from '../define-rule';
 import type { Finding } from '../types';
 import { ELECTRICAL_SAFETY } from '../../electrical/safety-text';
@@ -54,7 +54,7 @@ export const heatKitCircuit = defineRule({
         );
       }
       if (e.wireAwg !== undefined && e.wireMaterial !== undefined) {
-        const column = terminalColumnC(e.terminalRatingC);
+        const column = conductorColumnC(e.terminalRatingC, e.conductorType);
         const ampacity = conductorAmpacity(e.wireAwg, e.wireMaterial, column);
         if (ampacity === undefined || ampacity < ah.mcaAmps) {
           findings.push(

@@ -1,4 +1,4 @@
-import { ARTICLE_440_NOTE, conductorAmpacity, SMALL_CONDUCTOR_MAX_OCPD_AMPS, terminalColumnC } from '../../electrical';
+import { ARTICLE_440_NOTE, conductorAmpacity, conductorColumnC, SMALL_CONDUCTOR_MAX_OCPD_AMPS } from '../../electrical';
 import { defineRule } from '../define-rule';
 import type { Finding } from '../types';
 import { ELECTRICAL_SAFETY } from '../../electrical/safety-text';
@@ -16,9 +16,22 @@ export const wireAmpacity = defineRule({
       if (wireAwg === undefined && wireMaterial === undefined) return [tools.missing('wire size and material', 'wire ampacity not checked')];
       return [tools.missing(wireAwg === undefined ? 'wire size' : 'wire material (copper or aluminum)', 'wire ampacity not checked')];
     }
+    if (wireMaterial === 'aluminum' && pairing.outdoor.spec.copperOnly === true) {
+      return [
+        tools.finding({
+          severity: 'blocker',
+          title: 'Aluminum wire on a unit marked for copper conductors only',
+          detail: `The outdoor unit's nameplate calls for copper conductors only, and ${wireAwg} AWG aluminum is run to it.`,
+          fix: `Run copper conductors sized for the nameplate MCA to the unit's terminals. ${ELECTRICAL_SAFETY}`,
+          basis: { kind: 'standard', citation: 'NEC 110.3(B): install per the listing and labeling (nameplate "use copper conductors only")' },
+          values: { wireAwg: String(wireAwg), wireMaterial, copperOnly: true },
+        }),
+      ];
+    }
     const mca = pairing.outdoor.spec.mcaAmps;
     if (mca === undefined) return [tools.missing("outdoor unit's MCA", 'wire size not checked')];
-    const column = terminalColumnC(e.terminalRatingC);
+    const cable60 = e.conductorType === 'nm-b' || e.conductorType === 'uf-b';
+    const column = conductorColumnC(e.terminalRatingC, e.conductorType);
     const wire = `${wireAwg} AWG ${wireMaterial}`;
     const ampacity = conductorAmpacity(wireAwg, wireMaterial, column);
     const values = { wireAwg: String(wireAwg), wireMaterial, columnC: column, ampacityAmps: ampacity ?? null, mcaAmps: mca };
@@ -33,14 +46,18 @@ export const wireAmpacity = defineRule({
         }),
       ];
     }
-    const columnWhy = column === 60 ? '60 °C column, as both ends are not shown marked 75 °C' : '75 °C column, both ends marked 75 °C';
+    const columnWhy = cable60
+      ? `60 °C column, as ${e.conductorType === 'nm-b' ? 'NM-B cable is held to it (NEC 334.80)' : 'UF-B cable is held to it (NEC 340.80)'}`
+      : column === 60
+        ? '60 °C column, as both ends are not shown marked 75 °C'
+        : '75 °C column, both ends marked 75 °C';
     if (ampacity < mca) {
       return [
         tools.finding({
           severity: 'blocker',
           title: `${wire} carries ${ampacity} A; the unit needs ${mca} A`,
           detail: `${wire} carries ${ampacity} A at the ${columnWhy}, below the outdoor unit's ${mca} A MCA.`,
-          fix: `Run a larger conductor (ampacity at least ${mca} A at the ${column} °C column), or confirm both terminations are marked 75 °C. ${ELECTRICAL_SAFETY}`,
+          fix: `Run a larger conductor (ampacity at least ${mca} A at the ${column} °C column)${cable60 ? '' : ', or confirm both terminations are marked 75 °C'}. ${ELECTRICAL_SAFETY}`,
           values,
         }),
       ];

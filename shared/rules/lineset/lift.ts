@@ -1,3 +1,4 @@
+import type { OutdoorUnitSpec } from '../../schemas/equipment';
 import { defineRule } from '../define-rule';
 import { fmt } from '../facts';
 
@@ -11,7 +12,7 @@ export const lift = defineRule({
     if (!line) return [];
     if (line.liftFt === undefined) return [tools.missing('vertical separation (lift) between the units', 'lift not checked')];
     const rise = Math.abs(line.liftFt);
-    const own = pairing.outdoor.spec.maxLiftFt;
+    const own = liftLimit(pairing.outdoor.spec, line.outdoorAbove ?? (line.liftFt > 0 ? true : line.liftFt < 0 ? false : undefined));
     const max = own ?? context.settings.defaultMaxLiftFt;
     if (rise <= max) return [];
     const values = { liftFt: line.liftFt, maxLiftFt: max, limitSource: own !== undefined ? 'unit' : 'default' };
@@ -37,3 +38,16 @@ export const lift = defineRule({
     ];
   },
 });
+
+/**
+ * The unit's lift limit for the direction of the rise: its outdoor-above or outdoor-below figure when
+ * it gives two, else its single figure; with the direction unknown, the smaller of those given.
+ */
+function liftLimit(o: OutdoorUnitSpec, outdoorAbove: boolean | undefined): number | undefined {
+  const above = o.maxLiftOutdoorAboveFt ?? o.maxLiftFt;
+  const below = o.maxLiftOutdoorBelowFt ?? o.maxLiftFt;
+  if (outdoorAbove === true) return above;
+  if (outdoorAbove === false) return below;
+  const given = [above, below].filter((x): x is number => x !== undefined);
+  return given.length ? Math.min(...given) : undefined;
+}

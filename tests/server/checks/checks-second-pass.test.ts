@@ -135,3 +135,30 @@ describe('rated combinations by model family (Issue 12 item 9)', () => {
     expect(res.body.findings.map((f: Finding) => f.ruleId)).toContain('rating.no-rated-combination');
   });
 });
+
+describe('electrical second-pass facts through the API (Issue 12 item 11)', () => {
+  it('when the disconnect is not within sight and the cable is NM-B, then both findings come back', async () => {
+    // NEC 440.14 (within sight); NM-B held to 60 °C (NEC 334.80): 10 AWG copper = 30 A < 35 A MCA (NEC Table 310.16)
+    const res = await post({
+      scope: 'new-system',
+      outdoor: inline({ ...heatPump410a, mcaAmps: 35, mocpAmps: 50 }),
+      electrical: {
+        breakerAmps: 40,
+        wireAwg: 10,
+        wireMaterial: 'copper',
+        terminalRatingC: 75,
+        conductorType: 'nm-b',
+        disconnect: { withinSight: false, ratingAmps: 60 },
+      },
+    }).expect(200);
+    const blockers = res.body.findings.filter((f: Finding) => f.severity === 'blocker').map((f: Finding) => f.ruleId);
+    expect(blockers).toEqual(expect.arrayContaining(['electrical.disconnect', 'electrical.wire-ampacity']));
+  });
+
+  it('when the conductor type is not a choice, then 422 in plain words', async () => {
+    const res = await post({ scope: 'new-system', outdoor: inline(heatPump410a), electrical: { conductorType: 'romex' } }).expect(422);
+    expect(res.body.error.details).toEqual([
+      { path: 'electrical.conductorType', message: 'Choose the wire type: NM-B cable, UF-B cable, THHN in conduit or SE cable' },
+    ]);
+  });
+});

@@ -363,6 +363,35 @@ const CASES: TextCase[] = [
     detail: ['Line is 25 ft', 'add 5.5 oz'],
   },
   {
+    // 70 ft against the unit's 50 ft standard length (invented unit figure)
+    ruleId: 'lineset.long-line',
+    severity: 'caution',
+    pairing: () => edit((p) => { p.outdoor.spec.standardLineLengthFt = 50; p.lineSet!.lengthFt = 70; }),
+    title: 'Long line (70 ft): a crankcase heater is usually required',
+    detail: ['A crankcase heater is usually required', '70 ft measured', "the unit's standard length is 50 ft"],
+  },
+  {
+    ruleId: 'electrical.disconnect',
+    severity: 'blocker',
+    pairing: () => edit((p) => (p.electrical!.disconnect = { withinSight: true, ratingAmps: 15 })),
+    title: "Disconnect rated 15 A is below the unit's 18 A load",
+    detail: ['15 A disconnect', '18 A minimum circuit ampacity'],
+  },
+  {
+    ruleId: 'electrical.overcurrent-type',
+    severity: 'blocker',
+    pairing: () => edit((p) => { p.outdoor.spec.overcurrentRequired = 'fuse-or-hacr'; p.electrical!.overcurrentType = 'breaker'; }),
+    title: 'The nameplate calls for fuses or an HACR breaker; the circuit has a standard breaker (not HACR-marked)',
+    detail: ['fuses or an HACR breaker', 'a standard breaker (not HACR-marked)'],
+  },
+  {
+    ruleId: 'electrical.wire-ampacity',
+    severity: 'blocker',
+    pairing: () => edit((p) => { p.outdoor.spec.copperOnly = true; Object.assign(p.electrical!, { wireAwg: awg(8), wireMaterial: 'aluminum' }); }),
+    title: 'Aluminum wire on a unit marked for copper conductors only',
+    detail: ['8 AWG aluminum'],
+  },
+  {
     ruleId: 'lineset.lift',
     severity: 'blocker',
     pairing: () => edit((p) => (p.lineSet!.liftFt = -35)),
