@@ -48,3 +48,21 @@ describe('buildCheckRequest with partial groups (Issue 7 item 3)', () => {
     expect(built.ok && Object.keys(built.request).sort()).toEqual(['outdoor', 'scope']);
   });
 });
+
+describe('buildCheckRequest with the second-pass fields', () => {
+  it('when the wire type, elbows, register height and static are entered, then they go typed', () => {
+    const built = buildCheckRequest(
+      form({
+        electrical: { breakerAmps: '30', conductorType: 'nm-b', overcurrentType: 'hacr-breaker' },
+        lineSet: { lengthFt: '45', elbows: '4', outdoorAbove: 'no' },
+        site: { lowestRegisterHeightFt: '7.5', externalStaticInWc: '0.6' },
+      }),
+    );
+    expect(built.ok).toBe(true);
+    if (built.ok) {
+      expect(built.request.electrical).toEqual({ breakerAmps: 30, conductorType: 'nm-b', overcurrentType: 'hacr-breaker' });
+      expect(built.request.lineSet).toEqual({ lengthFt: 45, elbows: 4, outdoorAbove: false });
+      expect(built.request.site).toEqual({ lowestRegisterHeightFt: 7.5, externalStaticInWc: 0.6 });
+    }
+  });
+});
