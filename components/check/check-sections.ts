@@ -1,4 +1,4 @@
-import { AIRFLOW_DIRECTIONS, FILTER_DRIERS, INDOOR_LOCATIONS, WIRE_AWG, WIRE_MATERIALS } from '@/shared/schemas/check';
+import { AIRFLOW_DIRECTIONS, CONDUCTOR_TYPES, FILTER_DRIERS, INDOOR_LOCATIONS, OVERCURRENT_TYPES, WIRE_AWG, WIRE_MATERIALS } from '@/shared/schemas/check';
 import { REFRIGERANT_IDS } from '@/shared/schemas/fields';
 import { opts, TUBE_OPTIONS, type FieldDesc } from './field-types';
 
@@ -13,6 +13,8 @@ const electrical = (): FieldDesc[] => [
   { key: 'terminalRatingC', label: 'Terminal rating (°C)', type: 'choice', options: opts([60, 75, 90]), hint: '60 °C unless both ends are marked 75 °C' },
   { key: 'supplyVoltage', label: 'Supply voltage (V)', type: 'number' },
   { key: 'supplyPhase', label: 'Supply phase', type: 'choice', options: opts([1, 3]) },
+  { key: 'conductorType', label: 'Wire type', type: 'choice', options: opts(CONDUCTOR_TYPES, { 'nm-b': 'NM-B cable', 'uf-b': 'UF-B cable', 'thhn-conduit': 'THHN in conduit', se: 'SE cable' }) },
+  { key: 'overcurrentType', label: 'Protection', type: 'choice', options: opts(OVERCURRENT_TYPES, { breaker: 'Breaker', 'hacr-breaker': 'HACR breaker', fuse: 'Fuses' }) },
 ];
 
 export const SECTIONS: Record<SectionKey, { title: string; icon: string; fields: FieldDesc[] }> = {
@@ -29,6 +31,8 @@ export const SECTIONS: Record<SectionKey, { title: string; icon: string; fields:
       { key: 'burnoutHistory', label: 'Compressor burnout in its history', type: 'bool' },
       { key: 'indoorFlareJoints', label: 'Flare joints indoors', type: 'bool' },
       { key: 'filterDrier', label: 'Filter-drier', type: 'choice', options: opts(FILTER_DRIERS, { 'bi-flow': 'Bi-flow', 'one-way': 'One-way', none: 'None' }) },
+      { key: 'elbows', label: '90° elbows in the run', type: 'number' },
+      { key: 'outdoorAbove', label: 'Outdoor unit sits above the indoor coil', type: 'bool' },
     ],
   },
   electrical: { title: 'Electrical (outdoor unit)', icon: 'flash-outline', fields: electrical() },
@@ -43,6 +47,8 @@ export const SECTIONS: Record<SectionKey, { title: string; icon: string; fields:
       { key: 'conditionedAreaSqFt', label: 'Conditioned area (sq ft)', type: 'number' },
       { key: 'hasFloatSwitch', label: 'Float switch fitted', type: 'bool' },
       { key: 'hasSecondaryPan', label: 'Secondary drain pan', type: 'bool' },
+      { key: 'lowestRegisterHeightFt', label: 'Lowest supply register height (ft)', type: 'number' },
+      { key: 'externalStaticInWc', label: 'Measured external static (in. w.c.)', type: 'number' },
     ],
   },
   controls: {

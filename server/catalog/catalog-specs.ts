@@ -7,6 +7,7 @@ import type {
   OutdoorUnitSpec,
   RatedCombinationSpec,
 } from '../../shared/schemas/equipment';
+import { modelMatches } from '../../shared/rules/rated-match';
 import { normalizeModel } from '../../shared/schemas/fields';
 import type { AppContext } from '../context';
 import { kindIndex } from './catalog-index';
@@ -69,10 +70,22 @@ export async function findCatalogItem<K extends CatalogKind>(ctx: AppContext, ki
   return (index.byId.get(id) as EntityByKind[K] | undefined) ?? null;
 }
 
-/** Rated combinations whose outdoor model matches (normalised), as specs. */
+/** Rows whose outdoor model is a family pattern (`*`, `?`), found once per catalog index. */
+const familyRows = new WeakMap<object, RatedCombination[]>();
+
+/**
+ * Rated combinations whose outdoor model matches (normalised), as specs: rows for the exact model
+ * plus rows whose outdoor model is a family pattern that matches it (the engine picks the most specific).
+ */
 export async function findRatedCombinations(ctx: AppContext, outdoorModel: string): Promise<RatedCombinationSpec[]> {
   const key = normalizeModel(outdoorModel);
   const index = await kindIndex(ctx.dataSource, 'rated-combinations');
   const rows = (index.byOutdoorModel.get(key) ?? []) as unknown as RatedCombination[];
-  return rows.map((row) => toSpec('rated-combinations', row));
+  let families = familyRows.get(index);
+  if (!families) {
+    families = (index.rows as unknown as RatedCombination[]).filter((row) => /[*?]/.test(row.outdoorModel));
+    familyRows.set(index, families);
+  }
+  const matched = families.filter((row) => modelMatches(row.outdoorModel, key));
+  return [...rows, ...matched].map((row) => toSpec('rated-combinations', row));
 }

@@ -23,12 +23,17 @@ export class OutdoorUnit {
   @Column({ type: 'simple-json', nullable: true }) allowedSuctionOdIn: number[] | null;
   @Column({ type: 'double precision', nullable: true }) maxLineLengthFt: number | null;
   @Column({ type: 'double precision', nullable: true }) maxLiftFt: number | null;
+  @Column({ type: 'double precision', nullable: true }) maxLiftOutdoorAboveFt: number | null;
+  @Column({ type: 'double precision', nullable: true }) maxLiftOutdoorBelowFt: number | null;
+  @Column({ type: 'double precision', nullable: true }) standardLineLengthFt: number | null;
   @Column({ type: 'double precision', nullable: true }) factoryChargeOz: number | null;
   @Column({ type: 'double precision', nullable: true }) chargedLineLengthFt: number | null;
   @Column({ type: 'double precision', nullable: true }) chargePerFtOz: number | null;
   @Column({ type: 'double precision', nullable: true }) mcaAmps: number | null;
   @Column({ type: 'double precision', nullable: true }) mocpAmps: number | null;
   @Column({ type: 'varchar', length: 16, nullable: true }) voltage: string | null;
+  @Column({ type: 'boolean', nullable: true }) copperOnly: boolean | null;
+  @Column({ type: 'varchar', length: 16, nullable: true }) overcurrentRequired: string | null;
   @Column({ type: 'integer', nullable: true }) phase: number | null;
   @Column({ type: 'boolean', nullable: true }) startAssist: boolean | null;
   @Column({ type: 'varchar', length: 10, nullable: true }) manufactureDate: string | null;

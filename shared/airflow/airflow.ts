@@ -23,12 +23,3 @@ export function temperatureSplitF(sensibleBtuh: number, airflowCfm: number, fact
 export function airflowForSensibleCfm(sensibleBtuh: number, deltaTF: number, factor = SENSIBLE_FACTOR_STD_AIR): number {
   return sensibleBtuh / (factor * deltaTF);
 }
-
-/**
- * How far outside the shop's CFM/ton band airflow may fall before it stops being "works at a risk"
- * (caution) and becomes "will not work right" (blocker): 50 CFM/ton, i.e. below 300 or above 500
- * with the default 350–450 band. Common practice (no source): under ~300 CFM/ton the coil runs
- * near freezing and floods back; over ~500 it carries condensate off the coil and removes little
- * moisture (the DOE test procedure already caps rating airflow at 450 scfm/ton — from memory).
- */
-export const AIRFLOW_BLOCKER_MARGIN_CFM_PER_TON = 50;

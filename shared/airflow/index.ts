@@ -1,1 +1,2 @@
 export * from './airflow';
+export * from './blower-table';

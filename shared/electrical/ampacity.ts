@@ -68,3 +68,15 @@ export const ARTICLE_440_NOTE =
 export function terminalColumnC(terminalRatingC: number | undefined): TemperatureColumnC {
   return terminalRatingC !== undefined && terminalRatingC >= 75 ? 75 : 60;
 }
+
+/** Cable types held to the 60 °C column whatever their terminals: NM-B (NEC 334.80) and UF-B (NEC 340.80). */
+export const SIXTY_C_CABLES: readonly string[] = ['nm-b', 'uf-b'];
+
+/**
+ * The ampacity column (°C) for a run: 60 °C for NM-B and UF-B cable (NEC 334.80, 340.80), else the
+ * terminal rule of terminalColumnC (NEC 110.14(C)).
+ */
+export function conductorColumnC(terminalRatingC: number | undefined, conductorType: string | undefined): TemperatureColumnC {
+  if (conductorType !== undefined && SIXTY_C_CABLES.includes(conductorType)) return 60;
+  return terminalColumnC(terminalRatingC);
+}

@@ -31,3 +31,9 @@ export function nameplateVoltageRange(nameplate: string | number | undefined): V
 export function heaterOutputKw(ratedKw: number, supplyV: number, ratedV: number): number {
   return ratedKw * (supplyV / ratedV) ** 2;
 }
+
+/**
+ * Voltage a resistance heat kit's kW is rated at when the kit does not say: 240 V, the usual rating
+ * printed for residential strip heaters (common practice, no source).
+ */
+export const DEFAULT_HEAT_KIT_RATED_V = 240;

@@ -1,16 +1,22 @@
-// Source: UL 60335-2-40, 3rd edition (2019), Annex GG — appliances with an A2L charge above m1 need
-// a refrigerant detection system that starts the mitigation airflow. m1 = 4 m³ × LFL is from memory
-// (some readings give A2Ls a 1.5 factor, 6 m³ × LFL); we use the lower figure, which asks for a
-// sensor more often. Kept as data so the office can update it.
+// Source: UL 60335-2-40, 3rd edition (2019), Annex GG, clause GG.1 — m1 = 4 m³ × LFL, and for A2L
+// refrigerants the standard multiplies m1 by 1.5, i.e. 6 m³ × LFL. At or below m1 no refrigerant
+// detection system is required and the room-area limits of GG.2 do not apply; above it, a detection
+// system that starts the mitigation airflow is required. For R-454B (LFL 0.296 kg/m³) m1 = 1.776 kg
+// (3.91 lb), the figure commonly cited for it. Kept as data so the office can update it.
 
-/** m1 multiplier in m³: charges above m1 = this × LFL (kg) need a refrigerant detection system. */
-export const DETECTION_THRESHOLD_M3 = 4;
+/** m1 multiplier in m³ for A2L refrigerants: 4 m³ × 1.5 (UL 60335-2-40 3rd ed., GG.1). */
+export const DETECTION_THRESHOLD_M3 = 6;
 
-export const DETECTION_CITATION = 'UL 60335-2-40, 3rd ed. (2019), Annex GG refrigerant detection systems';
+export const DETECTION_CITATION = 'UL 60335-2-40, 3rd ed. (2019), Annex GG, clause GG.1: m1 = 6 m³ × LFL for A2L refrigerants (4 m³ × LFL × 1.5)';
 
-/** Charge in kg above which a refrigerant detection system is needed (LFL in kg/m³). */
+/** Charge in kg above which a refrigerant detection system is needed, m1 (LFL in kg/m³). */
 export function detectionThresholdKg(lflKgM3: number): number {
   return DETECTION_THRESHOLD_M3 * lflKgM3;
+}
+
+/** m1 in kg for an A2L: at or below it no detection system and no room-area limit apply (LFL in kg/m³). */
+export function a2lM1Kg(lflKgM3: number): number {
+  return detectionThresholdKg(lflKgM3);
 }
 
 /**

@@ -1,3 +1,4 @@
+import { capitalize } from './text';
 import type { Basis, Finding, Pairing, Rule, RuleContext, Severity } from './types';
 
 type FindingDraft = Omit<Finding, 'ruleId' | 'basis' | 'title'> & { title?: string; basis?: Basis };
@@ -33,8 +34,8 @@ export function defineRule(def: RuleDefinition): Rule {
     missing: (facts, consequence) => ({
       ruleId: def.id,
       severity: 'info' as Severity,
-      title: def.title,
-      detail: `${facts} not given: ${consequence}.`,
+      title: `${def.title}: not checked`,
+      detail: `${capitalize(facts)} not given: ${consequence}.`,
       fix: `Enter ${facts} to run this check.`,
       basis: def.basis,
       values: { missing: facts },

@@ -121,7 +121,7 @@ export function computedOf(pairing: Pairing): CheckResult['computed'] {
   const cfm = pairing.airHandler?.spec.airflowCfm;
   if (cfm !== undefined) computed.cfmPerTon = Math.round(cfmPerTon(cfm, outdoor.nominalTons));
   const line = pairing.lineSet;
-  if (line) {
+  if (line?.lengthFt !== undefined) {
     const adj = chargeAdjustment({
       refrigerant: outdoor.refrigerant,
       liquidOdIn: line.liquidOdIn,

@@ -47,6 +47,39 @@ function modelKey(model: string): string {
   return key;
 }
 
+/** A compiled model pattern: `*` any run of characters, `?` one character, on the normalised model. */
+interface ModelPattern {
+  test(key: string): boolean;
+  /** Literal characters: more literal characters is a more specific pattern. */
+  literal: number;
+  exact: boolean;
+}
+
+const patterns = new Map<string, ModelPattern>();
+const PATTERN_CACHE_MAX = 20000;
+
+/** Compiles a rated-combination model (possibly a family pattern) once, normalised like a model key. */
+function modelPattern(model: string): ModelPattern {
+  let p = patterns.get(model);
+  if (p === undefined) {
+    if (patterns.size >= PATTERN_CACHE_MAX) patterns.clear();
+    const key = normalizeModel(model);
+    if (!/[*?]/.test(key)) {
+      p = { test: (k) => k === key, literal: key.length, exact: true };
+    } else {
+      const re = new RegExp(`^${key.replace(/[.+^${}()|[\]\\]/g, '\\$&').replace(/\*/g, '.*').replace(/\?/g, '.')}$`);
+      p = { test: (k) => re.test(k), literal: key.replace(/[*?]/g, '').length, exact: false };
+    }
+    patterns.set(model, p);
+  }
+  return p;
+}
+
+/** True when a model (or family pattern with `*` and `?`) matches a normalised model key. */
+export function modelMatches(patternModel: string, key: string): boolean {
+  return modelPattern(patternModel).test(key);
+}
+
 function matchRatedCombination(pairing: Pairing): RatedCombinationSpec | undefined {
   const list = pairing.ratedCombinations;
   const outdoorModel = pairing.outdoor.spec.model;
@@ -56,16 +89,29 @@ function matchRatedCombination(pairing: Pairing): RatedCombinationSpec | undefin
   const indoorKey = modelKey(indoorModel);
   const ahModel = pairing.indoorCoil ? pairing.airHandler?.spec.model : undefined;
   const ahKey = ahModel ? modelKey(ahModel) : undefined;
-  let general: RatedCombinationSpec | undefined;
+  // Most specific wins: a row naming the air handler beats a coil-only row; then exact models beat
+  // family patterns; then the pattern with more literal characters; ties keep list order.
+  let best: RatedCombinationSpec | undefined;
+  let bestScore = -1;
   for (const combo of list) {
-    if (modelKey(combo.outdoorModel) !== outdoorKey || modelKey(combo.indoorModel) !== indoorKey) continue;
+    const o = modelPattern(combo.outdoorModel);
+    if (!o.test(outdoorKey)) continue;
+    const i = modelPattern(combo.indoorModel);
+    if (!i.test(indoorKey)) continue;
+    let score = 0;
     if (combo.airHandlerModel) {
-      if (ahKey !== undefined && modelKey(combo.airHandlerModel) === ahKey) return combo;
-    } else if (!general) {
-      general = combo;
+      if (ahKey === undefined) continue;
+      const a = modelPattern(combo.airHandlerModel);
+      if (!a.test(ahKey)) continue;
+      score += 1_000_000 + (a.exact ? 10_000 : 0) + a.literal;
+    }
+    score += (o.exact ? 100_000 : 0) + (i.exact ? 100_000 : 0) + o.literal + i.literal;
+    if (score > bestScore) {
+      best = combo;
+      bestScore = score;
     }
   }
-  return general;
+  return best;
 }
 
 /** Words naming the models a rated-combination lookup needs, for a missing-facts note. */

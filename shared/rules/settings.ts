@@ -8,6 +8,9 @@ import type { RuleSettings } from './types';
  * conservative figures typical of residential installation instructions.
  * Start-up readings: ±5 °F superheat (fixed orifice) and ±3 °F subcooling bands, a 500-micron
  * evacuation and a decay test that stays under 1,000 microns over 10 minutes: common practice (no source).
+ * No default standard line length: long-line practice runs on the unit's own figure, or on one the
+ * shop sets (50 ft is a common conservative choice, no source); without either it is a coverage note,
+ * so a check without the new facts reads as before.
  */
 export const DEFAULT_RULE_SETTINGS: RuleSettings = {
   cfmPerTonMin: 350,
@@ -15,6 +18,7 @@ export const DEFAULT_RULE_SETTINGS: RuleSettings = {
   defaultTargetSubcoolingF: 10,
   defaultMaxLineLengthFt: 50,
   defaultMaxLiftFt: 20,
+  defaultStandardLineLengthFt: undefined,
   rebateTier: undefined,
   superheatToleranceF: 5,
   subcoolingToleranceF: 3,

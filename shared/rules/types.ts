@@ -61,6 +61,8 @@ export interface RuleSettings {
   /** Used when an outdoor unit gives no maximum line length. */
   defaultMaxLineLengthFt: number;
   defaultMaxLiftFt: number;
+  /** Line length beyond which long-line practice applies when the unit gives none (optional for stored settings). */
+  defaultStandardLineLengthFt?: number;
   /** The rebate tier the shop works with; undefined thresholds are not checked. */
   rebateTier?: { name: string; seer2?: number; eer2?: number; hspf2?: number };
   // Start-up readings (shared/commissioning); optional so settings stored before them still load.

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { parseBlowerTable } from '../airflow/blower-table';
 import { blankToUndefined, enumOf, isoDate, numberIn, numberListIn, refrigerant, refrigerantList, text, tons, tubeOdIn, yesNo } from './fields';
 
 /**
@@ -14,6 +15,7 @@ export const COIL_MATERIALS = ['copper', 'aluminum'] as const;
 export const METERING_TYPES = ['txv', 'piston', 'eev', 'none'] as const;
 export const AIR_HANDLER_KINDS = ['air-handler', 'furnace'] as const;
 export const KIT_TYPES = ['txv', 'piston', 'eev'] as const;
+export const OVERCURRENT_REQUIRED = ['fuse', 'fuse-or-hacr'] as const;
 
 /** Optional fields treat a blank CSV cell or a JSON null as absent. */
 const opt = <T extends z.ZodType>(schema: T) => z.preprocess(blankToUndefined, schema.optional());
@@ -47,12 +49,21 @@ export const OutdoorUnitSpecSchema = z.object({
   allowedSuctionOdIn: opt(numberListIn(0.125, 2.125)),
   maxLineLengthFt: opt(numberIn(5, 500)),
   maxLiftFt: opt(numberIn(0, 300)),
+  /** Lift limits when the instructions give two: outdoor unit above the coil, and below it. */
+  maxLiftOutdoorAboveFt: opt(numberIn(0, 300)),
+  maxLiftOutdoorBelowFt: opt(numberIn(0, 300)),
+  /** Line length beyond which the unit's long-line instructions apply (shop default when blank). */
+  standardLineLengthFt: opt(numberIn(5, 500)),
   factoryChargeOz: opt(numberIn(0, 2000)),
   chargedLineLengthFt: opt(numberIn(0, 100)),
   chargePerFtOz: opt(numberIn(0, 5)),
   mcaAmps: opt(amps),
   mocpAmps: opt(amps),
   voltage: opt(voltage),
+  /** The nameplate says "use copper conductors only". */
+  copperOnly: opt(yesNo),
+  /** The nameplate calls for fuses only, or fuses or HACR-type breakers. */
+  overcurrentRequired: opt(enumOf(OVERCURRENT_REQUIRED)),
   phase: opt(z.preprocess((v) => (typeof v === 'string' && v.trim() !== '' ? Number(v) : v === '' ? undefined : v), z.union([z.literal(1), z.literal(3)], { error: 'phase must be 1 or 3' }))),
   startAssist: opt(yesNo),
   manufactureDate: opt(isoDate),
@@ -82,16 +93,42 @@ export const IndoorCoilSpecSchema = z.object({
 });
 export type IndoorCoilSpec = z.infer<typeof IndoorCoilSpecSchema>;
 
+/** A blower table: compact text (`low:0.3=900/0.5=820;med:…`) or the parsed list of taps. */
+const blowerTable = z.preprocess(
+  (v, ctx) => {
+    if (typeof v !== 'string') return v;
+    const parsed = parseBlowerTable(v);
+    if ('error' in parsed) {
+      ctx.addIssue({ code: 'custom', message: parsed.error });
+      return z.NEVER;
+    }
+    return parsed.table;
+  },
+  z.array(
+    z.object({
+      tap: z.string().trim().min(1).max(20),
+      points: z.array(z.object({ staticInWc: z.number().min(0).max(2), cfm: z.number().min(100).max(10000) })).min(1).max(12),
+    }),
+    { error: 'Blower table must list taps with static=CFM points, e.g. low:0.3=900/0.5=820' },
+  ).min(1).max(10),
+);
+
 export const AirHandlerSpecSchema = z.object({
   ...identity,
   kind: enumOf(AIR_HANDLER_KINDS),
   minTons: opt(tons),
   maxTons: opt(tons),
   airflowCfm: opt(numberIn(200, 10000)),
+  /** CFM by speed tap at external static pressures (optional; picks taps at the measured static). */
+  blowerTable: opt(blowerTable),
   widthIn: opt(numberIn(8, 40)),
   refrigerants: opt(refrigerantList),
   a2lListed: opt(yesNo),
   heatKitKw: opt(numberIn(0, 50)),
+  /** Voltage the heat kit's kW is rated at (default 240 V when not given). */
+  heatKitRatedVoltage: opt(numberIn(100, 600)),
+  /** An air handler with its own coil may carry the A2L leak sensor itself. */
+  leakSensor: opt(yesNo),
   mcaAmps: opt(amps),
   mocpAmps: opt(amps),
   voltage: opt(voltage),

@@ -34,6 +34,7 @@ export const RuleSettingsSchema = z
     evacuationTargetMicrons: z.number().int().min(50).max(5000).optional(),
     decayLimitMicrons: z.number().int().min(50).max(5000).optional(),
     decayHoldMinutes: z.number().int().min(1).max(120).optional(),
+    defaultStandardLineLengthFt: z.number().min(5).max(500).optional(),
     rebateTier: RebateTierSchema.optional(),
   })
   .refine((s) => s.cfmPerTonMax > s.cfmPerTonMin, { error: 'cfmPerTonMax must be above cfmPerTonMin', path: ['cfmPerTonMax'] })

@@ -18,6 +18,7 @@ export const airHandlerRange = defineRule({
     return [
       tools.finding({
         severity: 'blocker',
+        title: `${name} covers ${fmtTons(ah.minTons)}–${fmtTons(ah.maxTons)} tons; the unit is ${fmtTons(tons)} ${tons === 1 ? 'ton' : 'tons'}`,
         detail: `${name} covers ${fmtTons(ah.minTons)}–${fmtTons(ah.maxTons)} tons; outdoor unit is ${fmtTons(tons)} tons.`,
         fix: `Use ${ah.kind === 'furnace' ? 'a furnace' : 'an air handler'} whose cooling range includes ${fmtTons(tons)} tons, or resize the outdoor unit.`,
         values: { outdoorTons: tons, airHandlerMinTons: ah.minTons, airHandlerMaxTons: ah.maxTons },

@@ -15,6 +15,7 @@ export const coilRange = defineRule({
     return [
       tools.finding({
         severity: 'blocker',
+        title: `Coil covers ${fmtTons(coil.minTons)}–${fmtTons(coil.maxTons)} tons; the unit is ${fmtTons(tons)} ${tons === 1 ? 'ton' : 'tons'}`,
         detail: `Coil covers ${fmtTons(coil.minTons)}–${fmtTons(coil.maxTons)} tons; outdoor unit is ${fmtTons(tons)} tons.`,
         fix: under
           ? `Choose a coil rated for ${fmtTons(tons)} tons (its range must include it), or a smaller outdoor unit.`

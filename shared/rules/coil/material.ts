@@ -14,6 +14,7 @@ export const material = defineRule({
       return [
         tools.finding({
           severity: 'info',
+          title: 'Kept copper coil: check it for leaks',
           detail: 'A kept copper coil goes onto the new system: copper evaporators are prone to formicary (ant-nest) corrosion leaks, and a new outdoor unit does not renew its warranty.',
           fix: 'Leak-test the coil with nitrogen before connecting it and tell the customer its age and leak history; consider replacing it with the outdoor unit.',
           values: { material: 'copper', kept: true },
@@ -24,6 +25,7 @@ export const material = defineRule({
       return [
         tools.finding({
           severity: 'info',
+          title: 'Aluminum coil: braze only at the copper stubs',
           detail: 'Aluminum-tube coil: resists formicary corrosion, but its tubes cannot be repaired like copper, and its copper stubs are dissimilar-metal joints.',
           fix: 'Braze only at the copper connection stubs, keep the coil dry and clean; plan replacement rather than repair if it leaks.',
           values: { material: 'aluminum', kept: coil.kept },

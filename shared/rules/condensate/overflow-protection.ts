@@ -1,5 +1,6 @@
 import type { INDOOR_LOCATIONS } from '../../schemas/check';
 import { defineRule } from '../define-rule';
+import { LOCATION_WORDS } from '../words';
 
 type Location = (typeof INDOOR_LOCATIONS)[number];
 
@@ -31,12 +32,13 @@ export const overflowProtection = defineRule({
     if (site.hasFloatSwitch === true || site.hasSecondaryPan === true) return [];
     const need = PROTECTION[location];
     if (need === 'none') return [];
-    const where = location.replace('-', ' ');
+    const where = LOCATION_WORDS[location];
     if (need === 'advised') {
       return [
         tools.finding({
           severity: 'info',
-          detail: `Indoor unit in a ${where} with no float switch or secondary pan recorded: if the space is finished, a blocked drain damages it.`,
+          title: `No float switch or secondary pan for a unit ${where}`,
+          detail: `Indoor unit ${where} with no float switch or secondary pan recorded: if the space is finished, a blocked drain damages it.`,
           fix: 'Fit a float switch on the primary drain or pan; it is cheap protection.',
           values: { indoorLocation: location, hasFloatSwitch: site.hasFloatSwitch ?? null, hasSecondaryPan: site.hasSecondaryPan ?? null },
         }),
@@ -45,7 +47,8 @@ export const overflowProtection = defineRule({
     return [
       tools.finding({
         severity: 'caution',
-        detail: `Indoor unit in the ${where} with no float switch or secondary pan recorded: a blocked drain overflows into the building, and code requires a secondary means here.`,
+        title: `No overflow protection for a unit ${where}`,
+        detail: `Indoor unit ${where} with no float switch or secondary pan recorded: a blocked drain overflows into the building, and code requires a secondary means here.`,
         fix: 'Fit a secondary drain pan with its own drain or a float switch, or a water-level switch that shuts the unit off; follow local code.',
         values: { indoorLocation: location, hasFloatSwitch: site.hasFloatSwitch ?? null, hasSecondaryPan: site.hasSecondaryPan ?? null },
       }),

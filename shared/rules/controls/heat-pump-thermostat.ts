@@ -14,6 +14,7 @@ export const heatPumpThermostat = defineRule({
       return [
         tools.finding({
           severity: 'blocker',
+          title: 'Thermostat cannot run a heat pump',
           detail: 'The thermostat cannot run a heat pump: it has no reversing-valve (O/B) output, so the system will not heat with the heat pump.',
           fix: 'Fit a heat-pump thermostat (O/B output, auxiliary heat stage), with enough thermostat wire conductors for it; switch power off before rewiring.',
           values: { thermostatHeatPump: false },
@@ -25,6 +26,7 @@ export const heatPumpThermostat = defineRule({
       return [
         tools.finding({
           severity: 'caution',
+          title: `${heatKitKw} kW heat kit, but no auxiliary heat stage on the thermostat`,
           detail: `The air handler has a ${heatKitKw} kW heat kit but the thermostat is set up with no auxiliary heat stage: the strips will never be called (no backup or defrost heat).`,
           fix: 'Configure or fit a thermostat with an auxiliary heat stage (W2/AUX) and wire it to the heat kit.',
           values: { heatKitKw, auxHeatStages: 0 },

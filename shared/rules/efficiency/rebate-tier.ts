@@ -31,6 +31,7 @@ export const rebateTier = defineRule({
       findings.unshift(
         tools.finding({
           severity: 'caution',
+          title: `Short of the ${tier.name} rebate tier: ${short.join(' and ')}`,
           detail: `Short of the ${tier.name} rebate tier: by ${figures.sourceText}, ${short.join(' and ')}.`,
           fix: `Pick a certified combination that reaches the ${tier.name} thresholds, or tell the customer the rebate does not apply.`,
           values,

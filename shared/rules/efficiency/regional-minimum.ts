@@ -1,6 +1,7 @@
 import { complianceDateBasis, levels2023Apply, REGIONAL_MINIMUM_BASIS, regionalMinimum, STANDARDS_2023_FROM } from '../../efficiency';
 import { efficiencyFigures } from '../../efficiency/pairing-figures';
 import { defineRule } from '../define-rule';
+import { capitalize, withArticle } from '../text';
 import type { Finding } from '../types';
 
 /** Rated SEER2 / EER2 / HSPF2 against the DOE 2023 minimum for the site's region, type and capacity. */
@@ -21,6 +22,7 @@ export const regionalMinimumRule = defineRule({
       return [
         tools.finding({
           severity: 'info',
+          title: `The level in force before ${STANDARDS_2023_FROM} applies`,
           detail: `The 2023 levels apply from ${STANDARDS_2023_FROM} by ${dateBasis} date here (${min.regionName}); this unit is ${when}, so the level in force before then applies.`,
           fix: '',
           values: { state, region: min.regionName, dateBasis, installDate: pairing.installDate, manufactureDate: o.manufactureDate ?? null },
@@ -45,8 +47,8 @@ export const regionalMinimumRule = defineRule({
     findings.unshift(
       tools.finding({
         severity: 'blocker',
-        title: `Not allowed: below the ${min.regionName} efficiency minimum`,
-        detail: `Not allowed in ${state} (${min.regionName}): by ${figures.sourceText}, ${shortfalls.join(' and ')} for a ${kind} ${capacityClass} (${REGIONAL_MINIMUM_BASIS}).`,
+        title: `${capitalize(shortfalls.join(" and "))}, the ${min.regionName} minimum`,
+        detail: `Below the minimum in ${state} (${min.regionName} region): by ${figures.sourceText}, ${shortfalls.join(' and ')} for ${withArticle(kind)} ${capacityClass} (${REGIONAL_MINIMUM_BASIS}).`,
         fix: `Choose an outdoor unit and coil whose certified combination meets SEER2 ${min.seer2}${min.eer2 !== undefined ? `, EER2 ${min.eer2}` : ''}${min.hspf2 !== undefined ? `, HSPF2 ${min.hspf2}` : ''} or more.`,
         values: {
           state,

@@ -9,7 +9,8 @@ export const breakerNonstandard = defineRule({
   basis: { kind: 'standard', citation: 'NEC 240.6(A) standard ampere ratings' },
   evaluate(pairing, _context, tools) {
     const e = pairing.electrical;
-    if (!e || isStandardBreaker(e.breakerAmps)) return [];
+    const breakerAmps = e?.breakerAmps;
+    if (breakerAmps === undefined || isStandardBreaker(breakerAmps)) return [];
     const { mcaAmps, mocpAmps } = pairing.outdoor.spec;
     let sizes: number[];
     let range: string;
@@ -17,16 +18,17 @@ export const breakerNonstandard = defineRule({
       sizes = standardBreakersBetween(mcaAmps, mocpAmps);
       range = `between the ${mcaAmps} A MCA and the ${mocpAmps} A MOCP`;
     } else {
-      sizes = [standardBreakerAtOrBelow(e.breakerAmps), standardBreakerAtOrAbove(e.breakerAmps)].filter((a): a is number => a !== undefined);
+      sizes = [standardBreakerAtOrBelow(breakerAmps), standardBreakerAtOrAbove(breakerAmps)].filter((a): a is number => a !== undefined);
       range = 'nearest to it (MCA/MOCP not given)';
     }
     const list = sizes.length > 0 ? sizes.map((a) => `${a} A`).join(', ') : 'none';
     return [
       tools.finding({
         severity: 'caution',
-        detail: `${e.breakerAmps} A is not a standard breaker rating under NEC 240.6(A); standard sizes ${range}: ${list}.`,
+        title: `Breaker ${breakerAmps} A is not a standard size`,
+        detail: `${breakerAmps} A is not a standard breaker rating under NEC 240.6(A); standard sizes ${range}: ${list}.`,
         fix: `Check the breaker's marking; if it is a misread, enter the marked size, else fit a standard size ${range}. ${ELECTRICAL_SAFETY}`,
-        values: { breakerAmps: e.breakerAmps, standardSizes: sizes.join(';'), mcaAmps: mcaAmps ?? null, mocpAmps: mocpAmps ?? null },
+        values: { breakerAmps, standardSizes: sizes.join(';'), mcaAmps: mcaAmps ?? null, mocpAmps: mocpAmps ?? null },
       }),
     ];
   },

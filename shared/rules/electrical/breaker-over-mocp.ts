@@ -9,15 +9,18 @@ export const breakerOverMocp = defineRule({
   evaluate(pairing, _context, tools) {
     const e = pairing.electrical;
     if (!e) return [tools.missing('breaker size and wire', 'electrical not checked')];
+    const breakerAmps = e.breakerAmps;
+    if (breakerAmps === undefined) return [tools.missing('breaker size', 'breaker not checked against the nameplate')];
     const mocp = pairing.outdoor.spec.mocpAmps;
     if (mocp === undefined) return [tools.missing("outdoor unit's MOCP (max breaker)", 'breaker maximum not checked')];
-    if (e.breakerAmps <= mocp) return [];
+    if (breakerAmps <= mocp) return [];
     return [
       tools.finding({
         severity: 'blocker',
-        detail: `The ${e.breakerAmps} A breaker is above the outdoor unit's ${mocp} A maximum overcurrent protection.`,
+        title: `Breaker ${breakerAmps} A is above the ${mocp} A maximum`,
+        detail: `The ${breakerAmps} A breaker is above the outdoor unit's ${mocp} A maximum overcurrent protection.`,
         fix: `Fit a breaker (HACR type, or fuses if the nameplate says fuse) of ${mocp} A or less and at least the MCA. ${ELECTRICAL_SAFETY}`,
-        values: { breakerAmps: e.breakerAmps, mocpAmps: mocp },
+        values: { breakerAmps, mocpAmps: mocp },
       }),
     ];
   },

@@ -1,6 +1,8 @@
 import { nameplateVoltageRange } from '../../electrical';
 import { defineRule } from '../define-rule';
+import { capitalize } from '../text';
 import type { Finding } from '../types';
+import { phaseWords } from '../words';
 import { ELECTRICAL_SAFETY } from '../../electrical/safety-text';
 
 /** Supply voltage outside the nameplate range (±10 % utilization tolerance), or a different phase. */
@@ -20,6 +22,7 @@ export const voltageMismatch = defineRule({
       findings.push(
         tools.finding({
           severity: 'blocker',
+          title: `Supply ${e.supplyVoltage} V is outside the unit's ${range.minV}–${range.maxV} V`,
           detail: `The ${e.supplyVoltage} V supply is outside the ${range.minV}–${range.maxV} V range of the outdoor unit's ${o.voltage} V nameplate.`,
           fix: `Confirm the reading under load and the service voltage with the utility; use a unit rated for the supply. ${ELECTRICAL_SAFETY}`,
           values: { supplyVoltage: e.supplyVoltage, nameplateVoltage: String(o.voltage), minV: range.minV, maxV: range.maxV },
@@ -30,8 +33,9 @@ export const voltageMismatch = defineRule({
       findings.push(
         tools.finding({
           severity: 'blocker',
-          detail: `The supply is ${e.supplyPhase}-phase but the outdoor unit is rated ${o.phase}-phase.`,
-          fix: `Use a ${e.supplyPhase}-phase unit or provide a ${o.phase}-phase supply. ${ELECTRICAL_SAFETY}`,
+          title: `${capitalize(phaseWords(e.supplyPhase))} supply for a ${phaseWords(o.phase)} unit`,
+          detail: `The supply is ${phaseWords(e.supplyPhase)} but the outdoor unit is rated ${phaseWords(o.phase)}.`,
+          fix: `Use a ${phaseWords(e.supplyPhase)} unit or provide a ${phaseWords(o.phase)} supply. ${ELECTRICAL_SAFETY}`,
           values: { supplyPhase: e.supplyPhase, unitPhase: o.phase },
         }),
       );

@@ -25,6 +25,7 @@ export const coilCabinet = defineRule({
       return [
         tools.finding({
           severity: 'blocker',
+          title: `Coil is ${fmt(diff, 2)} in wider than the ${cabinet}`,
           detail: `Coil is ${fmt(coil.widthIn, 2)} in wide; the ${cabinet} is ${fmt(ah.widthIn, 2)} in: the coil overhangs the ${cabinet} by ${fmt(diff, 2)} in.`,
           fix: `Choose a coil ${fmt(ah.widthIn, 2)} in wide, or one the coil maker lists for this ${cabinet} width.`,
           values,
@@ -34,6 +35,7 @@ export const coilCabinet = defineRule({
     return [
       tools.finding({
         severity: 'caution',
+        title: `Coil is ${fmt(-diff, 2)} in narrower than the ${cabinet}`,
         detail: `Coil is ${fmt(coil.widthIn, 2)} in wide; the ${cabinet} is ${fmt(ah.widthIn, 2)} in: ${fmt(-diff, 2)} in narrower.`,
         fix: `Fit a sheet-metal transition and seal it airtight so no air bypasses the coil, or choose a ${fmt(ah.widthIn, 2)} in coil.`,
         values,

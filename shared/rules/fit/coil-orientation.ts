@@ -1,6 +1,8 @@
 import type { AIRFLOW_DIRECTIONS } from '../../schemas/check';
 import type { COIL_CONFIGURATIONS } from '../../schemas/equipment';
 import { defineRule } from '../define-rule';
+import { capitalize, withArticle } from '../text';
+import { CONFIGURATION_WORDS, DIRECTION_WORDS } from '../words';
 
 type Direction = (typeof AIRFLOW_DIRECTIONS)[number];
 type Configuration = (typeof COIL_CONFIGURATIONS)[number];
@@ -28,8 +30,9 @@ export const coilOrientation = defineRule({
     return [
       tools.finding({
         severity: 'blocker',
-        detail: `A ${coil.configuration} coil is being installed ${direction}: its drain pan will not catch the condensate, which runs off into the cabinet or the building.`,
-        fix: `Use a coil listed for ${direction} airflow (a multi-position coil fits every direction).`,
+        title: `${capitalize(CONFIGURATION_WORDS[coil.configuration])} coil installed ${DIRECTION_WORDS[direction]}`,
+        detail: `${capitalize(withArticle(CONFIGURATION_WORDS[coil.configuration]))} coil is being installed ${DIRECTION_WORDS[direction]}: its drain pan will not catch the condensate, which runs off into the cabinet or the building.`,
+        fix: `Use a coil listed for ${DIRECTION_WORDS[direction]} airflow (a multi-position coil fits every direction).`,
         values: { configuration: coil.configuration, airflowDirection: direction },
       }),
     ];

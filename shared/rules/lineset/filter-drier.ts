@@ -14,6 +14,7 @@ export const filterDrier = defineRule({
       return [
         tools.finding({
           severity: 'blocker',
+          title: 'One-way filter-drier on a heat pump',
           detail: 'Heat pump with a one-way filter-drier: in heating the flow reverses through it, which can wash trapped debris and moisture back out of the core toward the metering device.',
           fix: 'Replace it with a bi-flow filter-drier sized for the system.',
           values: { filterDrier: 'one-way', systemType: 'heat-pump' },
@@ -24,6 +25,7 @@ export const filterDrier = defineRule({
       return [
         tools.finding({
           severity: 'caution',
+          title: 'No filter-drier on an opened system',
           detail: `No filter-drier on a system that is being opened (${pairing.scope === 'new-system' ? 'new system' : 'component replacement'}): moisture and debris stay in the circuit.`,
           fix: `Fit a new ${isHeatPump(pairing) ? 'bi-flow' : 'liquid-line'} filter-drier before evacuating; braze with a nitrogen purge and keep the drier cool.`,
           values: { filterDrier: 'none', scope: pairing.scope },

@@ -16,6 +16,7 @@ export const capacityRange = defineRule({
     return [
       tools.finding({
         severity: 'blocker',
+        title: `Metering kit covers ${fmtTons(kit.minTons)}–${fmtTons(kit.maxTons)} tons; the unit is ${fmtTons(tons)} ${tons === 1 ? 'ton' : 'tons'}`,
         detail: `Metering kit covers ${fmtTons(kit.minTons)}–${fmtTons(kit.maxTons)} tons; outdoor unit is ${fmtTons(tons)} tons (${small ? 'too small: starves the coil' : 'too large: hunts and floods back'}).`,
         fix: `Use a kit listed for ${fmtTons(tons)} tons and ${kit.refrigerant}.`,
         values: { outdoorTons: tons, kitMinTons: kit.minTons, kitMaxTons: kit.maxTons },

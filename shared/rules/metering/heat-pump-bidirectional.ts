@@ -1,5 +1,6 @@
 import { defineRule } from '../define-rule';
 import { describeMetering, isHeatPump, meteringInUse } from '../facts';
+import { capitalize } from '../text';
 
 /**
  * In heating the indoor coil is the condenser and liquid leaves it backwards through the indoor
@@ -22,6 +23,7 @@ export const heatPumpBidirectional = defineRule({
     return [
       tools.finding({
         severity: 'blocker',
+        title: `${capitalize(describeMetering(m))} passes flow one way only; a heat pump needs both`,
         detail: `Heat pump: ${describeMetering(m)} passes flow one way only, so in heating the liquid leaving the indoor coil is metered a second time (low heating capacity, high head, possible compressor damage).`,
         fix:
           m.type === 'piston'

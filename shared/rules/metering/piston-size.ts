@@ -1,5 +1,6 @@
 import { defineRule } from '../define-rule';
 import { describeMetering, meteringInUse } from '../facts';
+import { capitalize } from '../text';
 
 /** Pistons are marked in thousandths of an inch: sizes that agree to 0.0005 in are the same piston. */
 const PISTON_MATCH_TOLERANCE_IN = 0.0005;
@@ -22,6 +23,7 @@ export const pistonSize = defineRule({
     return [
       tools.finding({
         severity: 'caution',
+        title: `Piston is ${m.pistonSizeIn.toFixed(3)} in; the unit specifies ${outdoor.pistonSizeIn.toFixed(3)} in`,
         detail: `${capitalize(describeMetering(m))} is ${m.pistonSizeIn.toFixed(3)} in; the outdoor unit specifies ${outdoor.pistonSizeIn.toFixed(3)} in (${bigger ? 'overfeeds: floodback risk' : 'starves the coil: low capacity, high superheat'}).`,
         fix: `Swap in the ${outdoor.pistonSizeIn.toFixed(3)} in piston shipped with the outdoor unit (new seals), then charge by superheat.`,
         values: { pistonInstalledIn: m.pistonSizeIn, pistonSpecifiedIn: outdoor.pistonSizeIn },
@@ -29,7 +31,3 @@ export const pistonSize = defineRule({
     ];
   },
 });
-
-function capitalize(s: string): string {
-  return s.charAt(0).toUpperCase() + s.slice(1);
-}

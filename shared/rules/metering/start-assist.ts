@@ -26,6 +26,7 @@ export const startAssist = defineRule({
     return [
       tools.finding({
         severity: 'caution',
+        title: 'Non-bleed valve on a single-phase unit with no start assist',
         detail: `${describeMetering(m).replace(/^./, (c) => c.toUpperCase())} is a non-bleed (hard shutoff) valve and the ${phase === 'presumed' ? 'outdoor unit (presumed single-phase from its ' + outdoor.voltage + ' V rating)' : 'single-phase outdoor unit'} has no start assist: the compressor may fail to restart against unequalized pressures.`,
         fix: "Fit the hard-start kit the outdoor unit's maker lists (or use a bleed-type valve). De-energize and lock out the disconnect and discharge capacitors before wiring it.",
         values: { bleed: false, phase: outdoor.phase ?? null, voltage: outdoor.voltage ?? null, startAssist: outdoor.startAssist ?? null },

@@ -17,6 +17,7 @@ export const typeRequired = defineRule({
     return [
       tools.finding({
         severity: 'blocker',
+        title: `The unit needs an expansion valve, not ${m.source === 'kit' ? 'a field piston kit' : "the coil's piston"}`,
         detail: `The outdoor unit requires an expansion valve; ${describeMetering(m)} is a fixed orifice.`,
         fix: "Replace the piston with the TXV kit listed for this outdoor unit and refrigerant (braze with a nitrogen purge, then pressure test and evacuate).",
         values: { meteringInUse: m.type, meteringSource: m.source, meteringRequired: required },

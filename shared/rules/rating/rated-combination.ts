@@ -17,10 +17,14 @@ export const ratedCombination = defineRule({
     return [
       tools.finding({
         severity: 'info',
-        detail: `Certified combination${combo.reference ? ` ${combo.reference}` : ''}: ${parts.length ? parts.join(', ') : 'no figures given'}.`,
+        title: parts.length ? `Certified rating: ${parts.join(', ')}` : 'Certified combination found',
+        detail: `Certified combination${combo.reference ? ` ${combo.reference}` : ''} (row ${combo.outdoorModel} with ${combo.indoorModel}${combo.airHandlerModel ? ` on ${combo.airHandlerModel}` : ''}): ${parts.length ? parts.join(', ') : 'no figures given'}.`,
         fix: '',
         values: {
           reference: combo.reference ?? null,
+          matchedOutdoorModel: combo.outdoorModel,
+          matchedIndoorModel: combo.indoorModel,
+          matchedAirHandlerModel: combo.airHandlerModel ?? null,
           coolingBtuh: combo.coolingBtuh ?? null,
           seer2: combo.seer2 ?? null,
           eer2: combo.eer2 ?? null,

@@ -1,11 +1,17 @@
 import { getRefrigerant, isA2L } from '../../refrigerants';
 import { KG_PER_OZ, systemChargeOz } from '../../refrigerants/a2l-charge';
-import { a2lListingOf, DETECTION_CITATION, detectionThresholdKg } from '../../refrigerants/a2l-detection';
+import { a2lListingOf, DETECTION_CITATION, DETECTION_THRESHOLD_M3, detectionThresholdKg } from '../../refrigerants/a2l-detection';
+import { a2lIndoorPart } from '../facts';
 import { defineRule, type RuleTools } from '../define-rule';
+import { capitalize, withArticle } from '../text';
 import type { Finding, Pairing } from '../types';
 
 const SAFETY =
   'A2L refrigerants are mildly flammable: work by certified technicians, keep ignition sources away, and follow the equipment instructions and local codes (the AHJ decides).';
+
+const DETECTION_BASIS = { kind: 'standard' as const, citation: DETECTION_CITATION };
+/** An indoor part's A2L listing: the listing standard and the EPA use conditions that require it. */
+const LISTING_BASIS = { kind: 'standard' as const, citation: 'UL 60335-2-40, 3rd ed. (2019) listing for A2L refrigerants; EPA SNAP Rule 23 use conditions (86 FR 24444)' };
 
 /** A2L systems need A2L-listed indoor parts and, above m1, a refrigerant detection system (DESIGN §3). */
 export const a2lListing = defineRule({
@@ -27,8 +33,10 @@ export const a2lListing = defineRule({
       findings.push(
         tools.finding({
           severity: 'blocker',
+          title: `${capitalize(label)} is not listed for A2L refrigerants; the unit runs ${system}`,
           detail: `The ${label}${spec.model ? ` ${spec.model}` : ''} is ${listed === false ? 'marked not listed' : 'not shown as listed'} for A2L refrigerants, and the system runs ${system} (class A2L).`,
-          fix: `Use a ${label} listed for ${system}${label === 'indoor coil' ? '' : ' (or the listed mitigation control kit its maker names) that runs the blower on a leak signal'}. ${SAFETY}`,
+          basis: LISTING_BASIS,
+          fix: `Use ${withArticle(label)} listed for ${system}${label === 'indoor coil' ? '' : ' (or the listed mitigation control kit its maker names) that runs the blower on a leak signal'}. ${SAFETY}`,
           values: { part: label, systemRefrigerant: system, a2lListed: listed ?? null },
         }),
       );
@@ -40,29 +48,37 @@ export const a2lListing = defineRule({
 });
 
 function leakSensorFinding(pairing: Pairing, tools: RuleTools): Finding | undefined {
-  const coil = pairing.indoorCoil?.spec;
-  if (!coil || a2lListingOf(coil, isA2L) !== true) return undefined;
-  if (coil.leakSensor === true) return undefined;
-  if (coil.leakSensor === undefined) return tools.missing('whether the indoor coil has a refrigerant leak sensor', 'A2L leak detection not checked');
+  const part = a2lIndoorPart(pairing);
+  if (!part || a2lListingOf(part, isA2L) !== true) return undefined;
+  // The sensor may sit on the refrigerant-holding part or, for a coil in an air handler, on the air handler.
+  const ahSensor = part.label === 'indoor coil' ? pairing.airHandler?.spec.leakSensor : undefined;
+  if (part.leakSensor === true || ahSensor === true) return undefined;
   const system = pairing.outdoor.spec.refrigerant;
   const lfl = getRefrigerant(system)?.lflKgM3 ?? 0;
   const thresholdOz = detectionThresholdKg(lfl) / KG_PER_OZ;
   const charge = systemChargeOz(pairing.outdoor.spec, pairing.lineSet?.lengthFt);
+  // At or below m1 no refrigerant detection system is required (UL 60335-2-40 GG.1).
   if (charge !== undefined && charge <= thresholdOz) return undefined;
-  const values = { systemRefrigerant: system, leakSensor: false, chargeOz: charge === undefined ? null : round1(charge), detectionThresholdOz: round1(thresholdOz) };
-  const fix = `Fit the refrigerant detection sensor the coil's listing names and wire it to the air handler or furnace so the blower runs on a leak. ${SAFETY}`;
+  if (part.leakSensor === undefined) return tools.missing(`whether the ${part.label} has a refrigerant leak sensor`, 'A2L leak detection not checked');
+  const values = { part: part.label, systemRefrigerant: system, leakSensor: false, chargeOz: charge === undefined ? null : round1(charge), detectionThresholdOz: round1(thresholdOz) };
+  const fix = `Fit the refrigerant detection sensor the ${part.label}'s listing names and wire it so the blower runs on a leak. ${SAFETY}`;
+  const m1 = `${round1(thresholdOz)} oz (m1 = ${DETECTION_THRESHOLD_M3} m³ × LFL, UL 60335-2-40 3rd ed. GG.1)`;
   if (charge === undefined) {
     return tools.finding({
       severity: 'caution',
-      detail: `The indoor coil has no leak sensor; an ${system} system with more than ${round1(thresholdOz)} oz of charge needs a refrigerant detection system, and the total charge is not known.`,
+      title: `No leak sensor, and the ${system} charge is not known`,
+      detail: `The ${part.label} has no leak sensor; ${withArticle(system)} system with more than ${m1} of charge needs a refrigerant detection system, and the total charge is not known.`,
       fix,
+      basis: DETECTION_BASIS,
       values,
     });
   }
   return tools.finding({
     severity: 'blocker',
-    detail: `The indoor coil has no leak sensor, and the ${round1(charge)} oz ${system} charge is above the ${round1(thresholdOz)} oz above which a refrigerant detection system is required.`,
+    title: `No leak sensor: ${round1(charge)} oz of ${system} is above ${round1(thresholdOz)} oz`,
+    detail: `The ${part.label} has no leak sensor, and the ${round1(charge)} oz ${system} charge is above ${m1}, above which a refrigerant detection system is required.`,
     fix,
+    basis: DETECTION_BASIS,
     values,
   });
 }

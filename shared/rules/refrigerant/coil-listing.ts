@@ -1,5 +1,7 @@
 import { defineRule } from '../define-rule';
+import { capitalize, listOf, withArticle } from '../text';
 import type { Finding } from '../types';
+import { cabinetName } from '../words';
 
 /** The indoor coil and air handler must be listed for the system's refrigerant (DESIGN §3). */
 export const coilListing = defineRule({
@@ -11,7 +13,7 @@ export const coilListing = defineRule({
     const findings: Finding[] = [];
     const parts = [
       { label: 'indoor coil', spec: pairing.indoorCoil?.spec },
-      { label: 'air handler', spec: pairing.airHandler?.spec },
+      { label: pairing.airHandler ? cabinetName(pairing.airHandler.spec) : 'air handler', spec: pairing.airHandler?.spec },
     ];
     for (const { label, spec } of parts) {
       const listed = spec?.refrigerants;
@@ -19,8 +21,9 @@ export const coilListing = defineRule({
       findings.push(
         tools.finding({
           severity: 'blocker',
-          detail: `The ${label}${spec.model ? ` ${spec.model}` : ''} is listed for ${listed.join(', ')}, not for the outdoor unit's ${system}.`,
-          fix: `Use a ${label} listed for ${system}; a part outside its listing may not hold the pressure or suit the oil.`,
+          title: `${capitalize(label)} is listed for ${listOf(listed, 'or')}, not ${system}`,
+          detail: `The ${label}${spec.model ? ` ${spec.model}` : ''} is listed for ${listOf(listed)}, not for the outdoor unit's ${system}.`,
+          fix: `Use ${withArticle(label)} listed for ${system}; a part outside its listing may not hold the pressure or suit the oil.`,
           values: { part: label, systemRefrigerant: system, listedRefrigerants: listed.join(';') },
         }),
       );

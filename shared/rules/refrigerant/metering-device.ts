@@ -1,6 +1,7 @@
 import { normalizeRefrigerantName } from '../../schemas/fields';
 import { defineRule } from '../define-rule';
 import { describeMetering, meteringInUse } from '../facts';
+import { capitalize, withArticle } from '../text';
 
 /** The metering device in use must be rated for the system's refrigerant (DESIGN §3). */
 export const meteringDevice = defineRule({
@@ -16,7 +17,8 @@ export const meteringDevice = defineRule({
       return [
         tools.finding({
           severity: 'caution',
-          detail: `The indoor coil has no metering device and no field kit is given; the ${system} system needs one.`,
+          title: 'The indoor coil has no metering device',
+          detail: `The indoor coil has no metering device and no field kit is given; ${withArticle(system)} system needs one.`,
           fix: `Fit a metering device kit rated for ${system} and the outdoor unit's tonnage, per the equipment instructions.`,
           values: { systemRefrigerant: system, meteringType: 'none' },
         }),
@@ -27,6 +29,7 @@ export const meteringDevice = defineRule({
         return [
           tools.finding({
             severity: 'caution',
+            title: `${capitalize(name)}: refrigerant not known`,
             detail: `The refrigerant of ${name} is not given; a piston sized for another refrigerant meters the ${system} system wrongly.`,
             fix: `Check the piston's marking against the outdoor unit's specified piston for ${system} and swap it if it differs.`,
             values: { systemRefrigerant: system, meteringType: m.type, meteringRefrigerant: null },
@@ -40,14 +43,11 @@ export const meteringDevice = defineRule({
     return [
       tools.finding({
         severity: 'blocker',
+        title: `${m.type === 'piston' ? 'Piston' : 'Valve'} is for ${rated}; the unit runs ${system}`,
         detail: `${capitalize(name)} is rated for ${rated}, but the outdoor unit runs ${system}.`,
-        fix: `Replace it with a ${m.type === 'piston' ? 'piston' : 'valve'} rated for ${system} (match the outdoor unit's tonnage); recover the refrigerant and braze under a nitrogen purge, by certified technicians.`,
+        fix: `Replace it with ${m.type === 'piston' ? 'a piston' : 'a valve'} rated for ${system} (match the outdoor unit's tonnage); recover the refrigerant and braze under a nitrogen purge, by certified technicians.`,
         values: { systemRefrigerant: system, meteringRefrigerant: rated, meteringType: m.type, source: m.source },
       }),
     ];
   },
 });
-
-function capitalize(s: string): string {
-  return s.charAt(0).toUpperCase() + s.slice(1);
-}

@@ -1,10 +1,14 @@
 import { getRefrigerant } from '../../refrigerants';
 import { defineRule } from '../define-rule';
+import { holdsRefrigerantIndoors } from '../facts';
+import { listOf, withArticle } from '../text';
 import type { Finding } from '../types';
 
 /**
- * A kept line set or coil that ran a mineral-oil refrigerant (R-22), going to a POE-oil one:
- * mineral oil left behind does not mix with POE and can log in the evaporator and starve the compressor.
+ * A kept part that carried a mineral-oil refrigerant (R-22), going to a POE-oil one: mineral oil
+ * left behind does not mix with POE and can log in the evaporator and starve the compressor. Only
+ * parts that carried refrigerant count: the line set, a kept coil, an air handler with its own coil
+ * — never a furnace or a blower cabinet whose coil is a separate part.
  */
 export const oilCompatibility = defineRule({
   id: 'refrigerant.oil-compatibility',
@@ -22,13 +26,11 @@ export const oilCompatibility = defineRule({
       if (previous) {
         if (isMineral(previous)) kept.push({ part: 'line set', old: previous });
       } else {
-        findings.push(tools.missing('previous refrigerant of the kept line set', 'oil compatibility of the line set not checked'));
+        findings.push(tools.missing('refrigerant the kept line set ran before', 'oil compatibility of the line set not checked'));
       }
     }
-    const indoor = [
-      { part: 'indoor coil', p: pairing.indoorCoil },
-      { part: 'air handler', p: pairing.airHandler },
-    ];
+    const indoor: { part: string; p?: { kept: boolean; spec: { refrigerants?: string[] } } }[] = [{ part: 'indoor coil', p: pairing.indoorCoil }];
+    if (pairing.airHandler && holdsRefrigerantIndoors(pairing.airHandler.spec, pairing.indoorCoil !== undefined)) indoor.push({ part: 'air handler', p: pairing.airHandler });
     for (const { part, p } of indoor) {
       if (!p?.kept) continue;
       const listing = p.spec.refrigerants ?? [];
@@ -43,18 +45,22 @@ export const oilCompatibility = defineRule({
     }
 
     if (kept.length > 0) {
-      const parts = kept.map((k) => `${k.part} (ran ${k.old})`).join(' and ');
+      const olds = [...new Set(kept.map((k) => k.old))];
+      const parts = listOf(kept.map((k, i) => (i === 0 ? k.part : `the ${k.part}`)));
+      const ran = kept.length === 1 ? `, which ran ${olds[0]},` : olds.length === 1 ? `, which both ran ${olds[0]},` : '';
+      const from = olds.length === 1 ? '' : ` from ${listOf(olds)}`;
       findings.push(
         tools.finding({
           severity: 'caution',
-          detail: `The kept ${parts} carries mineral oil into a ${system} system that runs POE oil.`,
-          fix: `Flush the kept ${kept.map((k) => k.part).join(' and ')} with an approved flush and blow out with dry nitrogen, fit a new filter-drier${pairing.outdoor.spec.systemType === 'heat-pump' ? ' (bi-flow)' : ''}, and evacuate to 500 microns; follow the equipment instructions, which may require new parts. Work by certified technicians; recover all refrigerant.`,
+          title: `Kept ${listOf(kept.map((k) => k.part))} ${kept.length === 1 ? 'holds' : 'hold'} mineral oil from ${listOf(olds)}`,
+          detail: `The kept ${parts}${ran} ${kept.length === 1 ? 'carries' : 'carry'} mineral oil${from} into ${withArticle(system)} system that runs POE oil.`,
+          fix: `Flush the kept ${listOf(kept.map((k) => k.part))} with an approved flush and blow out with dry nitrogen, fit a new filter-drier${pairing.outdoor.spec.systemType === 'heat-pump' ? ' (bi-flow)' : ''}, and evacuate to 500 microns; follow the equipment instructions, which may require new parts. Work by certified technicians; recover all refrigerant.`,
           values: { systemRefrigerant: system, keptParts: kept.map((k) => k.part).join(';'), previousRefrigerant: kept[0].old },
         }),
       );
     }
     for (const part of unsure) {
-      findings.push(tools.missing(`refrigerant the kept ${part} ran before (line set previous refrigerant)`, `mineral-oil residue in the ${part} not checked`));
+      findings.push(tools.missing(`refrigerant the kept ${part} ran before`, `mineral-oil residue in the ${part} not checked`));
     }
     return findings;
   },
@@ -63,3 +69,4 @@ export const oilCompatibility = defineRule({
 function isMineral(refrigerant: string): boolean {
   return getRefrigerant(refrigerant)?.oil === 'mineral';
 }
+

@@ -1,5 +1,6 @@
 import { applicableTransitions, latestManufactureDate } from '../../regulation';
 import { defineRule } from '../define-rule';
+import { capitalize, withArticle } from '../text';
 import type { Finding, Pairing } from '../types';
 
 /** The refrigerant transition rules in force (context.transitionRules, data with effective dates). */
@@ -12,7 +13,8 @@ export const refrigerantTransition = defineRule({
     const refrigerant = pairing.outdoor.spec.refrigerant;
     const manufactureDate = componentsMadeBy(pairing);
     const outcomes = applicableTransitions(context.transitionRules, { refrigerant, scope: pairing.scope, installDate: pairing.installDate, manufactureDate });
-    const job = pairing.scope === 'new-system' ? `a new ${refrigerant} system` : `an ${refrigerant} component replacement`;
+    const job = pairing.scope === 'new-system' ? `a new ${refrigerant} system` : `${withArticle(refrigerant)} component replacement`;
+    const jobShort = pairing.scope === 'new-system' ? `new ${refrigerant} system` : `${refrigerant} component replacement`;
     const findings: Finding[] = [];
     for (const o of outcomes) {
       const basis = { kind: 'regulation' as const, citation: o.rule.citation };
@@ -21,7 +23,7 @@ export const refrigerantTransition = defineRule({
         findings.push(
           tools.finding({
             severity: 'blocker',
-            title: `Not allowed: ${refrigerant} ${pairing.scope === 'new-system' ? 'new system' : 'replacement'}`,
+            title: `Not allowed: ${withArticle(jobShort)} installed ${pairing.installDate}`,
             detail: `Not allowed: ${job} installed ${pairing.installDate}${manufactureDate ? ` with components made ${manufactureDate}` : ''}, under ${o.rule.citation} (in force from ${o.rule.installFrom}). ${o.rule.note}`,
             fix: pairing.scope === 'new-system'
               ? 'Choose a system with an allowed refrigerant (for example an A2L system listed for it), or, if the job is really a repair of an existing system, check it as a component replacement.'
@@ -31,11 +33,12 @@ export const refrigerantTransition = defineRule({
           }),
         );
       } else if (o.kind === 'applies') {
-        findings.push(tools.finding({ severity: 'caution', detail: `${capitalize(job)} installed ${pairing.installDate}: ${o.rule.note}`, fix: 'Follow the condition above; keep records of the refrigerant used.', basis, values }));
+        findings.push(tools.finding({ severity: 'caution', title: `${capitalize(jobShort)}: a condition applies`, detail: `${capitalize(job)} installed ${pairing.installDate}: ${o.rule.note}`, fix: 'Follow the condition above; keep records of the refrigerant used.', basis, values }));
       } else if (o.kind === 'unknown-manufacture') {
         findings.push(
           tools.finding({
             severity: 'caution',
+            title: `${capitalize(jobShort)}: allowed only if made before ${o.rule.manufacturedBefore}`,
             detail: `${capitalize(job)} installed ${pairing.installDate} is allowed under ${o.rule.citation} only if its refrigerant components were made before ${o.rule.manufacturedBefore}; the manufacture date is not given.`,
             fix: `Read the manufacture dates on the outdoor unit and coil nameplates; made on or after ${o.rule.manufacturedBefore}, they may not be used for a new system.`,
             basis,
@@ -43,12 +46,13 @@ export const refrigerantTransition = defineRule({
           }),
         );
       } else if (o.kind === 'exempt') {
-        findings.push(tools.finding({ severity: 'info', detail: `Components made ${o.manufactureDate}, before ${o.rule.manufacturedBefore}: exempt from ${o.rule.citation} (rule ${o.rule.id}).`, fix: '', basis, values }));
+        findings.push(tools.finding({ severity: 'info', title: `Exempt: parts made before ${o.rule.manufacturedBefore}`, detail: `Components made ${o.manufactureDate}, before ${o.rule.manufacturedBefore}: exempt from ${o.rule.citation}.`, fix: '', basis, values }));
       } else if (o.kind === 'repair-allowed') {
         findings.push(
           tools.finding({
             severity: 'info',
-            detail: `Allowed as a repair of an existing system: ${o.rule.citation} (rule ${o.rule.id}) restricts new systems only; parts sold for servicing existing equipment must not be used to build a new system.`,
+            title: 'Allowed as a repair of an existing system',
+            detail: `Allowed as a repair of an existing system: ${o.rule.citation} restricts new systems only; parts sold for servicing existing equipment must not be used to build a new system.`,
             fix: '',
             basis,
             values,
@@ -96,8 +100,4 @@ function tidy(findings: Finding[]): Finding[] {
   if (serious) return findings.filter((f) => f.severity !== 'info');
   const repair = infos.filter((f) => f.detail.startsWith('Allowed as a repair'));
   return [...infos.filter((f) => !f.detail.startsWith('Allowed as a repair')), ...repair.slice(0, 1)];
-}
-
-function capitalize(s: string): string {
-  return s.charAt(0).toUpperCase() + s.slice(1);
 }

@@ -86,9 +86,11 @@ describe('A2L charge limit (UL 60335-2-40 3rd ed. GG.2)', () => {
     expect(systemChargeOz({ factoryChargeOz: 100, chargedLineLengthFt: 15 }, 40)).toBeUndefined();
   });
 
-  it('when the detection threshold is computed, then it is 4 m³ × LFL', () => {
-    // UL 60335-2-40 3rd ed. Annex GG m1 = 4 m³ × LFL — from memory
-    expect(detectionThresholdKg(0.296)).toBeCloseTo(1.184, 6);
+  it('when the detection threshold is computed for R-454B, then it is m1 = 6 m³ × LFL = 1.776 kg (3.91 lb)', () => {
+    // UL 60335-2-40 3rd ed., clause GG.1: m1 = 4 m³ × LFL × 1.5 for A2L; R-454B LFL 0.296 kg/m³ (ASHRAE 34, from memory)
+    expect(detectionThresholdKg(0.296)).toBeCloseTo(1.776, 6);
+    // 1.776 kg / 0.45359237 kg/lb = 3.915 lb (the figure commonly cited for R-454B)
+    expect(detectionThresholdKg(0.296) / 0.45359237).toBeCloseTo(3.915, 3);
   });
 
   it('when a part lists an A2L refrigerant and says nothing else, then it counts as A2L-listed', () => {

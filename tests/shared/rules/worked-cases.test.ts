@@ -251,10 +251,12 @@ const cases: WorkedCase[] = [
     findings: ['caution:condensate.overflow-protection'],
   },
   {
-    // Pairing: a 5-ton outdoor unit on a furnace blower rated 1400 CFM (coil and furnace ranges
-    // cover 5 tons). Verdict: incompatible. Reason: 280 CFM/ton freezes the coil and floods the compressor.
-    // Basis: 350–450 CFM/ton band (values.json CM-09), blocker margin common practice (no source).
-    name: 'a blower far below the airflow the tonnage needs',
+    // Pairing: a 5-ton outdoor unit on a furnace whose catalog gives one rated figure, 1400 CFM (coil
+    // and furnace ranges cover 5 tons). Verdict: compatible with cautions. Reason (Issue 12 correction 1):
+    // 280 CFM/ton would freeze the coil, but a catalog CFM is one tap; the tech must set the blower to
+    // about 2000 CFM and confirm a tap reaches it, not walk away from the sale.
+    // Basis: 350–450 CFM/ton band (values.json CM-09), common practice (no source).
+    name: 'a blower whose one rated figure is far below the airflow the tonnage needs',
     pairing: () =>
       edit((p) => {
         Object.assign(p.outdoor.spec, { nominalTons: 5, coolingBtuh: 57000, mcaAmps: 28, mocpAmps: 45, suctionLineOdIn: 1.125 });
@@ -263,6 +265,29 @@ const cases: WorkedCase[] = [
         p.lineSet!.suctionOdIn = 1.125;
         p.electrical = { ...p.electrical!, breakerAmps: 40, wireAwg: awg(8) };
         p.ratedCombinations = [{ outdoorModel: 'HW-C36-B4', indoorModel: 'HW-K36-MP', seer2: 15, eer2: 11.9 }];
+      }),
+    verdict: 'compatible-with-cautions',
+    findings: ['caution:airflow.per-ton'],
+  },
+  {
+    // Same pairing with the furnace's blower table and 0.8 in. w.c. measured: the highest tap gives
+    // 1518 CFM there, under the 1750 CFM 5 tons needs (350 × 5). Verdict: incompatible. Reason: no tap
+    // can move enough air at this duct static; the coil would freeze and flood the compressor.
+    // Basis: 350–450 CFM/ton band (values.json CM-09); the table's figures are invented for the case.
+    name: 'a blower with no tap that reaches the band at the measured static',
+    pairing: () =>
+      edit((p) => {
+        Object.assign(p.outdoor.spec, { nominalTons: 5, coolingBtuh: 57000, mcaAmps: 28, mocpAmps: 45, suctionLineOdIn: 1.125 });
+        Object.assign(p.indoorCoil!.spec, { minTons: 4, maxTons: 5, widthIn: 21 });
+        Object.assign(p.airHandler!.spec, { minTons: 4, maxTons: 5, airflowCfm: 1400, widthIn: 21 });
+        p.lineSet!.suctionOdIn = 1.125;
+        p.electrical = { ...p.electrical!, breakerAmps: 40, wireAwg: awg(8) };
+        p.ratedCombinations = [{ outdoorModel: 'HW-C36-B4', indoorModel: 'HW-K36-MP', seer2: 15, eer2: 11.9 }];
+        p.airHandler!.spec.blowerTable = [
+          { tap: 'med', points: [{ staticInWc: 0.5, cfm: 1450 }, { staticInWc: 1, cfm: 1290 }] },
+          { tap: 'high', points: [{ staticInWc: 0.5, cfm: 1650 }, { staticInWc: 1, cfm: 1430 }] },
+        ];
+        p.site!.externalStaticInWc = 0.8;
       }),
     verdict: 'incompatible',
     findings: ['blocker:airflow.per-ton'],
@@ -305,9 +330,14 @@ describe('worked pairing cases', () => {
     expect(result.coverage.notChecked).toContainEqual({ family: 'rating', missing: 'rated-combination lookup (offline)' });
   });
 
-  it('when the clean install is checked, then every family ran and nothing is missing', () => {
+  it('when the clean install is checked, then every family ran and only the second-pass checks ask for their new facts', () => {
     const result = check(cleanInstall());
-    expect(result.coverage.notChecked).toEqual([]);
+    // Issue 12: a check with none of the new facts reads as before, plus a coverage note per new check.
+    expect(result.coverage.notChecked).toEqual([
+      { family: 'lineset', missing: "outdoor unit's standard line length (long-line instructions)" },
+      { family: 'electrical', missing: 'disconnect at the outdoor unit (within sight, rating)' },
+      { family: 'electrical', missing: 'whether the nameplate calls for fuses or HACR breakers' },
+    ]);
     expect(result.coverage.ran).toHaveLength(13);
   });
 

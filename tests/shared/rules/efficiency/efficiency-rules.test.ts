@@ -32,7 +32,8 @@ describe('efficiency.regional-minimum', () => {
     const p = pairing({ site: { state: 'FL' }, outdoor: { seer2: 15 }, ratedCombinations: [combo({ outdoorModel: 'tq od36', indoorModel: 'TQ-C36', seer2: 14, reference: 'CERT-001' })] });
     const [f] = run(regionalMinimumRule, p);
     expect(f.severity).toBe('blocker');
-    expect(f.title).toMatch(/^Not allowed/);
+    // An efficiency blocker names the shortfall; only a regulation.* blocker reads "Not allowed" (Issue 7)
+    expect(f.title).toBe('SEER2 14 is below 14.3, the Southeast minimum');
     expect(f.detail).toMatch(/rated combination CERT-001/);
     expect(f.values).toMatchObject({ figuresFrom: 'rated-combination', seer2: 14, minSeer2: 14.3, region: 'Southeast' });
     expectWellFormed(regionalMinimumRule, [f]);

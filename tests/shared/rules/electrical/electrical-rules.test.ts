@@ -172,7 +172,9 @@ describe('electricalRules', () => {
       'electrical.breaker-nonstandard',
       'electrical.breaker-over-mocp',
       'electrical.breaker-under-mca',
+      'electrical.disconnect',
       'electrical.heat-kit-circuit',
+      'electrical.overcurrent-type',
       'electrical.voltage-mismatch',
       'electrical.wire-ampacity',
     ]);

@@ -53,7 +53,7 @@ describe('refrigerant.a2l-listing', () => {
     ['A2L coil marked not listed', { outdoor: a2lUnit, coil: { ...a2lCoil, a2lListed: false } }, ['blocker']],
     ['listed coil on an unlisted furnace', { outdoor: a2lUnit, coil: a2lCoil, airHandler: { kind: 'furnace' as const } }, ['blocker']],
     ['listed coil on a listed air handler', { outdoor: a2lUnit, coil: a2lCoil, airHandler: { a2lListed: true } }, []],
-    // UL 60335-2-40 3rd ed. Annex GG: 126 oz > m1 = 4 × 0.296 kg = 41.8 oz (m1 from memory) → sensor required
+    // UL 60335-2-40 3rd ed. GG.1: 126 oz > m1 = 6 m³ × 0.296 kg/m³ = 1.776 kg = 62.6 oz → sensor required
     ['no leak sensor, charge above m1', { outdoor: a2lUnit, coil: { ...a2lCoil, leakSensor: false }, lineSet: {} }, ['blocker']],
     ['no leak sensor, charge unknown', { outdoor: a2lUnit, coil: { ...a2lCoil, leakSensor: false } }, ['caution']],
     ['no leak sensor, small charge under m1', { outdoor: { ...a2lUnit, factoryChargeOz: 30 }, coil: { ...a2lCoil, leakSensor: false }, lineSet: { lengthFt: 15 } }, []],
@@ -80,8 +80,11 @@ describe('refrigerant.a2l-charge-area', () => {
 
   it.each([
     ['126 oz in 1,500 sq ft', 1500, {}, {}, []],
-    // 2.2 m ceiling release makes the limit 2.2/0.6 times larger (GG.2 h0)
-    ['250 oz in an attic, 1,500 sq ft', 1500, { factoryChargeOz: 244 }, { indoorLocation: 'attic' as const }, []],
+    // An attic unit is ducted: its release height is the lowest supply register, not the ceiling (GG.2 h0).
+    // Register height unknown → the floor value 0.6 m (conservative): 250 oz > 136 oz → blocker
+    ['250 oz in an attic, 1,500 sq ft, register height not given', 1500, { factoryChargeOz: 244 }, { indoorLocation: 'attic' as const }, ['blocker']],
+    // Registers at 7.2 ft = 2.19 m: limit 136.4 × 2.19/0.6 ≈ 498 oz (GG.2, h0 proportional) → passes
+    ['250 oz in an attic, 1,500 sq ft, registers at 7.2 ft', 1500, { factoryChargeOz: 244 }, { indoorLocation: 'attic' as const, lowestRegisterHeightFt: 7.2 }, []],
     ['250 oz in a closet, 1,500 sq ft, no mitigation', 1500, { factoryChargeOz: 244 }, { indoorLocation: 'closet' as const }, ['blocker']],
     ['126 oz in 1,000 sq ft (limit ~111 oz)', 1000, {}, {}, ['blocker']],
   ])('when %s, then %j', (_name, areaSqFt, unitOver, siteOver, expected) => {
