@@ -1,4 +1,4 @@
-import { useQueryClient } from '@tanstack/react-query';
+import { onlineManager, useQueryClient } from '@tanstack/react-query';
 import type { CheckRequest } from '@/shared/schemas/check';
 import type { RulesSettingsResponse } from '@/shared/schemas/settings';
 import { ApiError } from '@/hooks/api-client';
@@ -13,16 +13,23 @@ interface Input {
   picked: Partial<Record<PartSlot, PickedPart>>;
 }
 
-/** Runs a check on the server; with no connection, the same shared engine on the device. */
+/**
+ * Runs a check on the server; with no connection, the same shared engine on the device — at once
+ * when the app already knows it is offline, never after waiting on a request that can not succeed.
+ */
 export function useCheckRunner() {
   const client = useQueryClient();
   return useCheckMutation(async ({ request, picked }: Input): Promise<CheckOutcome> => {
+    const onDevice = (): CheckOutcome => {
+      const saved = client.getQueryData<RulesSettingsResponse>(ruleSettingsKeys.all);
+      return { result: runOffline(request, picked, offlineContext(saved)), offline: true };
+    };
+    if (!onlineManager.isOnline()) return onDevice();
     try {
       return { result: await postCheck(request), offline: false };
     } catch (err) {
       if (!(err instanceof ApiError) || err.kind !== 'network') throw err;
-      const saved = client.getQueryData<RulesSettingsResponse>(ruleSettingsKeys.all);
-      return { result: runOffline(request, picked, offlineContext(saved)), offline: true };
+      return onDevice();
     }
   });
 }
