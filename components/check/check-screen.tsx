@@ -1,10 +1,11 @@
-import { useRef } from 'react';
+import { useRef, useState } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
 import { useIsWide } from '@/hooks/use-layout';
 import { useRuleSettings } from '@/hooks/use-rule-settings';
+import { AppDialog } from '@/components/ui/app-dialog';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { buildCheckRequest } from './build-check-request';
 import { CheckForm } from './check-form';
@@ -22,6 +23,7 @@ export function CheckScreen() {
   useRuleSettings();
   const scroll = useRef<ScrollView>(null);
   const resultY = useRef(0);
+  const [confirmReset, setConfirmReset] = useState(false);
 
   const onCheck = () => {
     const built = buildCheckRequest(form);
@@ -59,10 +61,40 @@ export function CheckScreen() {
       <CheckResultView outcome={form.outcome} systemRefrigerant={refrigerant} />
     </View>
   ) : null;
+  // Clearing a half-typed driveway check by a stray tap would cost the tech the nameplates: ask first.
   const reset = (
-    <Button mode="outlined" icon="restart" onPress={() => updateCheckForm(() => initialCheckForm())} contentStyle={styles.button} testID="check-reset">
-      Start over
-    </Button>
+    <>
+      <Button mode="outlined" icon="restart" onPress={() => setConfirmReset(true)} contentStyle={styles.button} testID="check-reset">
+        Start over
+      </Button>
+      <AppDialog
+        visible={confirmReset}
+        onDismiss={() => setConfirmReset(false)}
+        title="Start over?"
+        testID="check-reset-dialog"
+        actions={
+          <>
+            <Button onPress={() => setConfirmReset(false)} contentStyle={styles.button} testID="check-reset-cancel">
+              Keep the form
+            </Button>
+            <Button
+              mode="contained"
+              onPress={() => {
+                setConfirmReset(false);
+                runner.reset();
+                updateCheckForm(() => initialCheckForm());
+              }}
+              contentStyle={styles.button}
+              testID="check-reset-confirm"
+            >
+              Start over
+            </Button>
+          </>
+        }
+      >
+        <Text variant="bodyMedium">This clears every part, entry and the answer on this phone. It can not be undone.</Text>
+      </AppDialog>
+    </>
   );
 
   if (wide) {
