@@ -5,6 +5,7 @@
 // on the phone, never stale copies.
 import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { generateSW } from 'workbox-build';
 
 /** Tags the exported index.html needs for installing; the theme colour is constants/theme.ts's primary. */
@@ -60,7 +61,7 @@ export async function finishWebExport(outDir) {
 }
 
 // Run as `node scripts/service-worker.mjs <dist>` by build-web.mjs, whose buildWeb() stays synchronous.
-if (process.argv[1] && import.meta.url === new URL(`file://${path.resolve(process.argv[1])}`).href) {
+if (process.argv[1] && fileURLToPath(import.meta.url) === path.resolve(process.argv[1])) {
   finishWebExport(path.resolve(process.argv[2] ?? 'dist')).catch((err) => {
     console.error(err);
     process.exit(1);
