@@ -13,7 +13,7 @@ import { useIsWide } from '@/hooks/use-layout';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
 import { CatalogFilters } from './catalog-filters';
-import { isCatalogKind, KIND_LABELS } from './catalog-kind-labels';
+import { isCatalogKind, KIND_LABELS, KIND_SINGULAR } from './catalog-kind-labels';
 import { CatalogPager } from './catalog-pager';
 import { CatalogResultCard } from './catalog-result-card';
 import { CatalogResultTable } from './catalog-result-table';
@@ -92,7 +92,7 @@ export function CatalogBrowser() {
       {fromPhone ? (
         <MessageBanner tone="info" testID="catalog-offline">
           {held.heldCount
-            ? `No connection: searching the ${held.heldCount} ${kindWords} saved on this phone${held.items.length > HELD_MAX_ROWS ? ` (first ${HELD_MAX_ROWS} shown)` : ''}.`
+            ? `No connection: searching the ${held.heldCount} ${held.heldCount === 1 ? KIND_SINGULAR[kind].toLowerCase() : kindWords} saved on this phone${held.items.length > HELD_MAX_ROWS ? ` (first ${HELD_MAX_ROWS} shown)` : ''}.`
             : `No connection, and no ${kindWords} are saved on this phone yet. Parts you search or open while connected are kept here.`}
         </MessageBanner>
       ) : null}
