@@ -1,3 +1,4 @@
+import { onlineManager } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
@@ -25,22 +26,36 @@ export function CheckScreen() {
   const resultY = useRef(0);
   const [confirmReset, setConfirmReset] = useState(false);
 
+  const showResult = () => {
+    if (!wide) setTimeout(() => scroll.current?.scrollTo({ y: resultY.current, animated: true }), 50);
+  };
+
   const onCheck = () => {
     const built = buildCheckRequest(form);
     if (!built.ok) {
       updateCheckForm((s) => ({ ...s, errors: built.errors }));
       return;
     }
-    updateCheckForm((s) => ({ ...s, errors: {} }));
-    runner.mutate(
-      { request: built.request, picked: built.picked },
-      {
-        onSuccess: (outcome) => {
-          updateCheckForm((s) => ({ ...s, outcome }));
-          if (!wide) setTimeout(() => scroll.current?.scrollTo({ y: resultY.current, animated: true }), 50);
-        },
+    const input = { request: built.request, picked: built.picked };
+    // Known to be offline: answer on the phone in this very tap (one render, no pending state).
+    if (!onlineManager.isOnline()) {
+      try {
+        const outcome = runner.onDevice(input);
+        if (runner.mutation.status !== 'idle') runner.mutation.reset();
+        updateCheckForm((s) => ({ ...s, errors: {}, outcome }));
+        showResult();
+        return;
+      } catch {
+        // Falls through to the mutation, which reports the problem in words.
+      }
+    }
+    if (Object.keys(form.errors).length) updateCheckForm((s) => ({ ...s, errors: {} }));
+    runner.mutation.mutate(input, {
+      onSuccess: (outcome) => {
+        updateCheckForm((s) => ({ ...s, outcome }));
+        showResult();
       },
-    );
+    });
   };
 
   const outdoor = form.parts.outdoor;
@@ -53,7 +68,7 @@ export function CheckScreen() {
           {`${errorCount === 1 ? 'One entry needs' : `${errorCount} entries need`} fixing before the check can run (marked ⚠ above).`}
         </MessageBanner>
       ) : null}
-      {runner.isError ? <MessageBanner tone="error">{errorText(runner.error)}</MessageBanner> : null}
+      {runner.mutation.isError ? <MessageBanner tone="error">{errorText(runner.mutation.error)}</MessageBanner> : null}
     </>
   );
   const result = form.outcome ? (
@@ -81,7 +96,7 @@ export function CheckScreen() {
               mode="contained"
               onPress={() => {
                 setConfirmReset(false);
-                runner.reset();
+                runner.mutation.reset();
                 updateCheckForm(() => initialCheckForm());
               }}
               contentStyle={styles.button}
@@ -105,7 +120,7 @@ export function CheckScreen() {
         </View>
         <View style={styles.columns}>
           <ScrollView style={styles.column} contentContainerStyle={styles.columnContent} keyboardShouldPersistTaps="handled">
-            <CheckForm onCheck={onCheck} busy={runner.isPending} />
+            <CheckForm onCheck={onCheck} busy={runner.mutation.isPending} />
             {status}
           </ScrollView>
           <ScrollView style={styles.column} contentContainerStyle={styles.columnContent}>
@@ -123,7 +138,7 @@ export function CheckScreen() {
     <CheckFrame>
       <ScrollView ref={scroll} style={styles.fill} contentContainerStyle={styles.phoneContent} keyboardShouldPersistTaps="handled">
         <CheckHeading actions={reset} />
-        <CheckForm onCheck={onCheck} busy={runner.isPending} />
+        <CheckForm onCheck={onCheck} busy={runner.mutation.isPending} />
         {status}
         {result}
       </ScrollView>
