@@ -83,3 +83,23 @@ export function writeStoredCheckForm(form: CheckFormState): void {
     // Storage full or refused: the form still lives until the tab closes.
   }
 }
+
+/** Typing and tapping write the copy at most this often (ms); leaving the page writes it at once. */
+const SAVE_DELAY_MS = 300;
+let latest: CheckFormState | null = null;
+let timer: ReturnType<typeof setTimeout> | null = null;
+
+function flush() {
+  if (timer) clearTimeout(timer);
+  timer = null;
+  if (latest) writeStoredCheckForm(latest);
+  latest = null;
+}
+
+if (typeof window !== 'undefined' && typeof window.addEventListener === 'function') window.addEventListener('pagehide', flush);
+
+/** Keeps the form soon, off the tap's path: serializing an answer costs time the verdict should not wait for. */
+export function saveCheckFormSoon(form: CheckFormState): void {
+  latest = form;
+  if (!timer) timer = setTimeout(flush, SAVE_DELAY_MS);
+}

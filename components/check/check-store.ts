@@ -1,7 +1,7 @@
 import { useSyncExternalStore } from 'react';
 import type { CheckResult } from '@/shared/rules/types';
 import type { CheckRequest } from '@/shared/schemas/check';
-import { readStoredCheckForm, restoreCheckForm, writeStoredCheckForm } from './check-form-storage';
+import { readStoredCheckForm, restoreCheckForm, saveCheckFormSoon } from './check-form-storage';
 import type { FieldValues } from './field-types';
 import { NAMEPLATE_DEFAULTS } from './nameplate-fields';
 import { PART_SLOTS, type PartSlot } from './part-slots';
@@ -61,7 +61,7 @@ export function useCheckForm(): CheckFormState {
 
 export function updateCheckForm(change: (s: CheckFormState) => CheckFormState) {
   state = change(state);
-  writeStoredCheckForm(state);
+  saveCheckFormSoon(state);
   listeners.forEach((l) => l());
 }
 
