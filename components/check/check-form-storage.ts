@@ -96,7 +96,11 @@ function flush() {
   latest = null;
 }
 
-if (typeof window !== 'undefined' && typeof window.addEventListener === 'function') window.addEventListener('pagehide', flush);
+// Phones may kill a hidden tab without a pagehide: leaving the screen writes the copy too.
+if (typeof window !== 'undefined' && typeof window.addEventListener === 'function') {
+  window.addEventListener('pagehide', flush);
+  document.addEventListener('visibilitychange', () => document.visibilityState === 'hidden' && flush());
+}
 
 /** Keeps the form soon, off the tap's path: serializing an answer costs time the verdict should not wait for. */
 export function saveCheckFormSoon(form: CheckFormState): void {
