@@ -1,11 +1,11 @@
+/** How long after the page has loaded the worker is registered (ms). */
+const REGISTER_DELAY_MS = 3000;
+
 /**
  * Registers dist/sw.js (generated at build time by scripts/service-worker.mjs) so the app opens with
  * no signal after one visit. Production exports only: the dev server has no sw.js, and a worker
  * caching dev bundles would serve stale code.
  */
-/** How long after the page has loaded the worker is registered (ms). */
-const REGISTER_DELAY_MS = 3000;
-
 export function registerServiceWorker(): void {
   if (process.env.NODE_ENV !== 'production') return;
   if (typeof navigator === 'undefined' || !('serviceWorker' in navigator)) return;
