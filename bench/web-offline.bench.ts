@@ -5,6 +5,7 @@ import { createInterface } from 'node:readline';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import type { Measure } from './measure';
 import { percentile, round } from './measure';
+import { SERVICE_WORKER_ACTIVE, shownAtScript, tapToAnswerScript } from '../tests/e2e/page-timing';
 
 /**
  * The web app in Debian's Chromium with 4× CPU throttling (DevTools `Emulation.setCPUThrottlingRate`),
@@ -58,18 +59,10 @@ async function firstLoad(browser: Browser, base: string): Promise<number> {
   const context = await browser.newContext({ viewport: PHONE, baseURL: base, serviceWorkers: 'block' });
   const page = await context.newPage();
   await throttle(context, page);
-  await page.addInitScript(() => {
-    const w = window as unknown as { __signInAt?: number };
-    new MutationObserver((_, observer) => {
-      if (document.querySelector('[data-testid="sign-in-email"]')) {
-        w.__signInAt = performance.now();
-        observer.disconnect();
-      }
-    }).observe(document, { subtree: true, childList: true });
-  });
+  await page.addInitScript(shownAtScript('[data-testid="sign-in-email"]'));
   await page.goto('/sign-in');
-  await page.waitForFunction(() => (window as unknown as { __signInAt?: number }).__signInAt !== undefined, undefined, { timeout: 60_000 });
-  const ms = await page.evaluate(() => (window as unknown as { __signInAt: number }).__signInAt);
+  await page.waitForFunction('window.__shownAt !== undefined', undefined, { timeout: 60_000 });
+  const ms = await page.evaluate<number>('window.__shownAt');
   await context.close();
   return ms;
 }
@@ -92,16 +85,11 @@ async function offlineChecks(browser: Browser, server: Server): Promise<number[]
     outcome: null,
   });
   const context = await browser.newContext({ viewport: PHONE, baseURL: server.base });
-  await context.addInitScript(
-    ([session, saved]) => {
-      localStorage.setItem('tandem.session', session);
-      localStorage.setItem('tandem.check-form.v1', saved);
-    },
-    [JSON.stringify({ token: server.token, user: me.user }), form],
-  );
+  const session = JSON.stringify({ token: server.token, user: me.user });
+  await context.addInitScript(`localStorage.setItem('tandem.session', ${JSON.stringify(session)}); localStorage.setItem('tandem.check-form.v1', ${JSON.stringify(form)});`);
   const page = await context.newPage();
   await page.goto('/check');
-  await page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active));
+  await page.evaluate(SERVICE_WORKER_ACTIVE);
   await context.setOffline(true);
   const times: number[] = [];
   for (let i = 0; i < OFFLINE_CHECKS; i++) {
@@ -109,20 +97,7 @@ async function offlineChecks(browser: Browser, server: Server): Promise<number[]
     await page.getByTestId('run-check').waitFor({ timeout: 60_000 });
     await throttle(context, page);
     await page.getByTestId('run-check').scrollIntoViewIfNeeded();
-    const done = page.evaluate(
-      () =>
-        new Promise<number>((resolve) => {
-          let tapped = 0;
-          document.addEventListener('click', () => (tapped = performance.now()), { capture: true, once: true });
-          const observer = new MutationObserver(() => {
-            if (tapped && document.querySelector('[data-testid="verdict-word"]')) {
-              observer.disconnect();
-              resolve(performance.now() - tapped);
-            }
-          });
-          observer.observe(document.body, { subtree: true, childList: true, characterData: true });
-        }),
-    );
+    const done = page.evaluate<number>(tapToAnswerScript('[data-testid="check-result"]', ''));
     await page.getByTestId('run-check').click();
     times.push(await done);
     if (!(await page.getByTestId('offline-note').count())) throw new Error('the offline check did not say it was computed on the device');

@@ -2,6 +2,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { account, launchBrowser, openPage, screenshot, signIn } from './browser';
 import { adminToken, importCsv } from './api-setup';
+import { SERVICE_WORKER_ACTIVE, tapToAnswerScript } from './page-timing';
 
 // Invented models unique to this file. The heat pump runs R-410A; the kept coil's TXV is set for R-22,
 // which does not meter R-410A or R-454B (common practice: a metering device rated for the system's refrigerant).
@@ -26,35 +27,10 @@ async function choose(page: Page, testId: string) {
   if (!states.includes('true')) await chip.click();
 }
 
-/**
- * Taps Check and returns the ms, measured in the page, from the tap reaching the page to a new answer
- * showing `expected` (Playwright's own round trips are not the app's time).
- */
+/** Taps Check and returns the ms, in the page's clock, from the tap to a new answer showing `expected`. */
 async function timedCheck(page: Page, expected: string): Promise<number> {
   await page.getByTestId('run-check').scrollIntoViewIfNeeded();
-  const done = page.evaluate(
-    (text) =>
-      new Promise<number>((resolve) => {
-        let tapped = 0;
-        const onTap = () => {
-          tapped = performance.now();
-        };
-        document.addEventListener('click', onTap, { capture: true, once: true });
-        const answer = () => document.querySelector('[data-testid="check-result"]')?.textContent ?? '';
-        // A new answer: different from the one on screen before the tap, and naming what is expected.
-        const before = answer();
-        const seen = () => answer() !== before && answer().includes(text);
-        setTimeout(() => resolve(Number.POSITIVE_INFINITY), 10_000);
-        const observer = new MutationObserver(() => {
-          if (tapped && seen()) {
-            observer.disconnect();
-            resolve(performance.now() - tapped);
-          }
-        });
-        observer.observe(document.body, { subtree: true, childList: true, characterData: true });
-      }),
-    expected,
-  );
+  const done = page.evaluate<number>(tapToAnswerScript('[data-testid="check-result"]', expected));
   await page.getByTestId('run-check').click();
   return done;
 }
@@ -77,13 +53,13 @@ describe('the driveway with no signal, on a phone', () => {
     await expect.poll(() => page.url(), { timeout: 15_000 }).toContain('/check');
 
     // One visit with a signal: the service worker installs (precache complete) and parts are looked up.
-    expect(await page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active))).toBe(true);
+    expect(await page.evaluate<boolean>(SERVICE_WORKER_ACTIVE)).toBe(true);
     await pick(page, 'outdoor', OUTDOOR, OUTDOOR);
     await pick(page, 'indoorCoil', COIL, COIL);
     await page.getByTestId('indoorCoil-kept').click();
     await page.getByTestId('scope-component-replacement').click();
     // The lookups reach the persisted cache (written at most once a second).
-    await expect.poll(() => page.evaluate(() => localStorage.getItem('tandem-query-cache') ?? ''), { timeout: 10_000 }).toContain(COIL);
+    await expect.poll(() => page.evaluate<string>("localStorage.getItem('tandem-query-cache') ?? ''"), { timeout: 10_000 }).toContain(COIL);
 
     // No signal at all, then a reload: the service worker serves the app, and the form is still there.
     await page.context().setOffline(true);
@@ -91,7 +67,7 @@ describe('the driveway with no signal, on a phone', () => {
     await expect.poll(() => page.getByTestId('connection-banner').textContent(), { timeout: 20_000 }).toContain('No connection');
     await expect.poll(() => page.getByTestId('outdoor-picked').textContent()).toContain(OUTDOOR);
     await expect.poll(() => page.getByTestId('indoorCoil-picked').textContent()).toContain(COIL);
-    expect(await page.evaluate(() => navigator.onLine)).toBe(false);
+    expect(await page.evaluate<boolean>('navigator.onLine')).toBe(false);
     await screenshot(page, 'offline-reloaded-phone');
 
     // Catalog parts seen before: the phone answers at once and says so.
