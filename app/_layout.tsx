@@ -3,13 +3,15 @@ import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client
 import { useFonts } from 'expo-font';
 import { Stack } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { ActivityIndicator, useColorScheme, View } from 'react-native';
 import { PaperProvider } from 'react-native-paper';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
+import { ConnectionBanner } from '@/components/ui/connection-banner';
 import { darkTheme, FONT_FILES, lightTheme } from '@/constants/theme';
 import { createQueryClient } from '@/hooks/query-client';
 import { persistOptions } from '@/hooks/query-persistence';
+import { registerServiceWorker } from '@/hooks/register-service-worker';
 import { SessionProvider } from '@/hooks/use-session';
 
 /** Root: fonts first (no flash of fallback text or empty icon boxes), then theme, data and session. */
@@ -19,6 +21,8 @@ export default function RootLayout() {
   const [persistence] = useState(persistOptions);
   const scheme = useColorScheme();
   const theme = scheme === 'dark' ? darkTheme : lightTheme;
+  // Web production builds only: the next visit opens with no signal.
+  useEffect(registerServiceWorker, []);
 
   if (!fontsLoaded) {
     return (
@@ -33,7 +37,10 @@ export default function RootLayout() {
         <PaperProvider theme={theme}>
           <SessionProvider>
             <StatusBar style={scheme === 'dark' ? 'light' : 'dark'} />
-            <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: theme.colors.background } }} />
+            <View style={{ flex: 1 }}>
+              <ConnectionBanner />
+              <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: theme.colors.background } }} />
+            </View>
           </SessionProvider>
         </PaperProvider>
       </PersistQueryClientProvider>

@@ -35,7 +35,7 @@ async function seedCatalog(ctx: AppContext, userId: number) {
 
 async function main() {
   const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-bench-checks-'));
-  const config: AppConfig = { port: 0, databasePath: path.join(dir, 'bench.sqlite'), dataDir: dir, demo: false, jwtSecret: randomBytes(32).toString('hex'), webDir: path.join(dir, 'web'), logLevel: 'silent', signInLimit: 10_000 };
+  const config: AppConfig = { port: 0, databasePath: path.join(dir, 'bench.sqlite'), dataDir: dir, demo: false, jwtSecret: randomBytes(32).toString('hex'), webDir: process.env.TANDEM_WEB_DIR ?? path.join(dir, 'web'), logLevel: 'silent', signInLimit: 10_000 };
   const dataSource = await openDatabase(config.databasePath);
   const ctx: AppContext = { dataSource, config, logger: pino({ level: 'silent' }) };
   const users = dataSource.getRepository(User);

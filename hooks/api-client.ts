@@ -53,6 +53,23 @@ const API_BASE = `${process.env.EXPO_PUBLIC_API_URL ?? ''}/api`;
 
 let token: string | null = null;
 let onUnauthorized: (() => void) | null = null;
+let outcomeListener: ((reached: boolean) => void) | null = null;
+
+/** The connection tracker hears whether each request reached the server (hooks/connection.ts). */
+export function onRequestOutcome(listener: (reached: boolean) => void) {
+  outcomeListener = listener;
+}
+
+/** True when GET /api/health answers within a few seconds. */
+export async function pingServer(timeoutMs = 5000): Promise<boolean> {
+  try {
+    const response = await fetch(`${API_BASE}/health`, { signal: AbortSignal.timeout(timeoutMs), cache: 'no-store' });
+    outcomeListener?.(true);
+    return response.ok;
+  } catch {
+    return false;
+  }
+}
 
 /** The session module sets the token and what to do when the server says 401. */
 export function configureApiClient(options: { token: string | null; onUnauthorized?: () => void }) {
@@ -82,9 +99,12 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   try {
     response = await fetch(`${API_BASE}${path}`, { method: options.method ?? 'GET', headers, body, signal: options.signal });
   } catch (err) {
+    // A query cancelled by the app says nothing about the network; a timeout does.
     if ((err as Error)?.name === 'AbortError') throw err;
+    outcomeListener?.(false);
     throw new ApiError('network', 'Tandem can not reach the server.', 0, 'network');
   }
+  outcomeListener?.(true);
 
   const text = await response.text();
   let json: unknown = undefined;
@@ -110,6 +130,7 @@ export async function apiBlob(path: string): Promise<Blob> {
   try {
     response = await fetch(`${API_BASE}${path}`, { headers: token ? { Authorization: `Bearer ${token}` } : {} });
   } catch {
+    outcomeListener?.(false);
     throw new ApiError('network', 'Tandem can not reach the server.', 0, 'network');
   }
   if (!response.ok) {

@@ -8,7 +8,7 @@ import type {
   RatedCombinationSpec,
 } from '@/shared/schemas/equipment';
 import { api, queryString } from './api-client';
-import { STALE } from './stale-times';
+import { OFFLINE_CACHE_MAX_AGE, STALE } from './stale-times';
 
 /** One catalog item as GET /api/catalog/:kind lists it (DESIGN.md §5): its spec plus id. */
 export type CatalogEntry =
@@ -63,6 +63,8 @@ export const catalogListQuery = (kind: CatalogKind, search: CatalogSearch) =>
     queryKey: catalogKeys.list(kind, search),
     queryFn: ({ signal }) => api.get<CatalogPage>(`/catalog/${kind}${queryString({ ...search })}`, signal),
     staleTime: STALE.catalog,
+    // Kept (and persisted) for a week: these are the parts an offline search answers from.
+    gcTime: OFFLINE_CACHE_MAX_AGE,
     // Keep the last page on screen while the next search runs: no flash of emptiness as you type.
     placeholderData: keepPreviousData,
   });
@@ -72,6 +74,7 @@ export const catalogDetailQuery = (kind: CatalogKind, id: number) =>
     queryKey: catalogKeys.detail(kind, id),
     queryFn: ({ signal }) => api.get<CatalogDetail>(`/catalog/${kind}/${id}`, signal),
     staleTime: STALE.catalog,
+    gcTime: OFFLINE_CACHE_MAX_AGE,
   });
 
 export function useCatalogList(kind: CatalogKind, search: CatalogSearch) {

@@ -9,7 +9,21 @@ import { fileURLToPath } from 'node:url';
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const outDir = path.join(root, 'dist');
 const stampFile = path.join(outDir, '.build-stamp');
-const INPUTS = ['app', 'components', 'hooks', 'constants', 'shared', 'assets', 'app.json', 'package-lock.json', 'tsconfig.json'];
+// The service worker is part of the build: its script and the public/ files it precaches are inputs too.
+const INPUTS = [
+  'app',
+  'components',
+  'hooks',
+  'constants',
+  'shared',
+  'assets',
+  'public',
+  'app.json',
+  'package-lock.json',
+  'tsconfig.json',
+  'scripts/build-web.mjs',
+  'scripts/service-worker.mjs',
+];
 
 function* files(entry) {
   const full = path.join(root, entry);
@@ -46,6 +60,9 @@ export function buildWeb({ force = false } = {}) {
     env: { ...process.env, EXPO_OFFLINE: '1', EXPO_NO_TELEMETRY: '1', CI: '1' },
   });
   if (result.status !== 0) throw new Error(`expo export failed with exit code ${result.status}`);
+  // Manifest links and dist/sw.js (workbox-build is async; a child process keeps buildWeb synchronous).
+  const sw = spawnSync(process.execPath, [path.join(root, 'scripts/service-worker.mjs'), outDir], { cwd: root, stdio: 'inherit' });
+  if (sw.status !== 0) throw new Error(`service worker generation failed with exit code ${sw.status}`);
   writeFileSync(stampFile, hash);
   console.log(`web app built in ${((Date.now() - started) / 1000).toFixed(1)} s`);
 }

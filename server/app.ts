@@ -70,13 +70,15 @@ function devCors(origin: string): express.RequestHandler {
 
 function serveWebApp(app: Express, webDir: string) {
   const indexHtml = path.join(webDir, 'index.html');
-  app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+  // The service worker, manifest and index.html must be re-checked on every visit, or a new build waits an hour.
+  const revalidate = /^(sw\.js|manifest\.webmanifest|index\.html)$/;
+  app.use(express.static(webDir, { index: false, maxAge: '1h', setHeaders: (res, file) => revalidate.test(path.basename(file)) && res.setHeader('Cache-Control', 'no-cache') }));
   // Deep links (/jobs/123) load the app, which routes on the client.
   app.get('/{*splat}', (_req, res, next) => {
     if (!existsSync(indexHtml)) {
       res.status(503).type('text/plain').send('The web app has not been built yet: run npm start (or npm run build:web).');
       return;
     }
-    res.sendFile(indexHtml, (err) => err && next(err));
+    res.sendFile(indexHtml, { headers: { 'Cache-Control': 'no-cache' } }, (err) => err && next(err));
   });
 }

@@ -4,13 +4,16 @@ import { StyleSheet, View } from 'react-native';
 import { ActivityIndicator, ProgressBar, Searchbar, Text } from 'react-native-paper';
 import type { CatalogKind } from '@/shared/schemas/equipment';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { ApiError } from '@/hooks/api-client';
 import { errorText } from '@/hooks/error-text';
 import { useCatalogList } from '@/hooks/use-catalog';
+import { useHeldCatalogSearch } from '@/hooks/use-catalog-held';
+import { useIsOnline } from '@/hooks/use-connection';
 import { useIsWide } from '@/hooks/use-layout';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
 import { CatalogFilters } from './catalog-filters';
-import { isCatalogKind, KIND_LABELS } from './catalog-kind-labels';
+import { isCatalogKind, KIND_LABELS, KIND_SINGULAR } from './catalog-kind-labels';
 import { CatalogPager } from './catalog-pager';
 import { CatalogResultCard } from './catalog-result-card';
 import { CatalogResultTable } from './catalog-result-table';
@@ -19,6 +22,8 @@ import { KindSwitcher } from './kind-switcher';
 import { useDebouncedValue } from './use-debounced-value';
 
 const PAGE_SIZE = 20;
+/** With no signal, the held parts are shown on one page (a phone holds tens, not thousands). */
+const HELD_MAX_ROWS = 50;
 const SEARCH_DEBOUNCE_MS = 250;
 
 type Params = { kind?: string; q?: string; refrigerant?: string; tons?: string; page?: string };
@@ -48,7 +53,13 @@ export function CatalogBrowser() {
     page,
     pageSize: PAGE_SIZE,
   });
-  const rows = (list.data?.items ?? []).map((item) => ({ id: item.id, summary: summarize(kind, item) }));
+  // No signal: the parts saved on this phone answer instead of a request that can not succeed.
+  const online = useIsOnline();
+  const fromPhone = !online || (list.error instanceof ApiError && list.error.kind === 'network');
+  const held = useHeldCatalogSearch(kind, q, { refrigerant: withFilters ? params.refrigerant : undefined, tons: withFilters ? tons : undefined }, fromPhone);
+  const items = fromPhone ? held.items.slice(0, HELD_MAX_ROWS) : (list.data?.items ?? []);
+  const rows = items.map((item) => ({ id: item.id, summary: summarize(kind, item) }));
+  const kindWords = KIND_LABELS[kind].toLowerCase();
   const open = (id: number) => router.push(`/catalog/${kind}/${id}` as never);
 
   return (
@@ -74,13 +85,20 @@ export function CatalogBrowser() {
       {/* A thin bar while a new search runs over the previous results (kept on screen). */}
       {/* Paper's ProgressBar is 100% tall on the web: the wrapper gives it its 4 px. */}
       <View style={styles.progress}>
-        <ProgressBar indeterminate visible={list.isFetching && !list.isPending} />
+        <ProgressBar indeterminate visible={!fromPhone && list.isFetching && !list.isPending} />
       </View>
-      {list.isPending ? <ActivityIndicator /> : null}
-      {list.isError ? <MessageBanner tone="error">{errorText(list.error)}</MessageBanner> : null}
-      {list.data && rows.length === 0 ? (
+      {!fromPhone && list.isPending ? <ActivityIndicator accessibilityLabel="Loading the catalog" /> : null}
+      {!fromPhone && list.isError ? <MessageBanner tone="error">{errorText(list.error)}</MessageBanner> : null}
+      {fromPhone ? (
+        <MessageBanner tone="info" testID="catalog-offline">
+          {held.heldCount
+            ? `No connection: searching the ${held.heldCount} ${held.heldCount === 1 ? KIND_SINGULAR[kind].toLowerCase() : kindWords} saved on this phone${held.items.length > HELD_MAX_ROWS ? ` (first ${HELD_MAX_ROWS} shown)` : ''}.`
+            : `No connection, and no ${kindWords} are saved on this phone yet. Parts you search or open while connected are kept here.`}
+        </MessageBanner>
+      ) : null}
+      {(fromPhone ? held.heldCount > 0 : !!list.data) && rows.length === 0 ? (
         <Text variant="bodyLarge" testID="catalog-empty">
-          Nothing in {KIND_LABELS[kind].toLowerCase()} matches{q ? ` “${q}”` : ''}. Try fewer letters or clear a filter.
+          Nothing in {kindWords}{fromPhone ? ' saved on this phone' : ''} matches{q ? ` “${q}”` : ''}. Try fewer letters or clear a filter.
         </Text>
       ) : null}
       {rows.length > 0 && wide ? <CatalogResultTable kind={kind} rows={rows} onOpen={open} /> : null}
@@ -91,7 +109,7 @@ export function CatalogBrowser() {
           ))}
         </View>
       ) : null}
-      {list.data && list.data.total > 0 ? (
+      {!fromPhone && list.data && list.data.total > 0 ? (
         <CatalogPager page={list.data.page} pageSize={list.data.pageSize} total={list.data.total} onPage={(p) => setParams({ page: String(p) })} />
       ) : null}
     </Screen>

@@ -1,10 +1,12 @@
-import { useRef } from 'react';
+import { onlineManager } from '@tanstack/react-query';
+import { useRef, useState } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
 import { useIsWide } from '@/hooks/use-layout';
 import { useRuleSettings } from '@/hooks/use-rule-settings';
+import { AppDialog } from '@/components/ui/app-dialog';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { buildCheckRequest } from './build-check-request';
 import { CheckForm } from './check-form';
@@ -22,6 +24,11 @@ export function CheckScreen() {
   useRuleSettings();
   const scroll = useRef<ScrollView>(null);
   const resultY = useRef(0);
+  const [confirmReset, setConfirmReset] = useState(false);
+
+  const showResult = () => {
+    if (!wide) setTimeout(() => scroll.current?.scrollTo({ y: resultY.current, animated: true }), 50);
+  };
 
   const onCheck = () => {
     const built = buildCheckRequest(form);
@@ -29,16 +36,26 @@ export function CheckScreen() {
       updateCheckForm((s) => ({ ...s, errors: built.errors }));
       return;
     }
-    updateCheckForm((s) => ({ ...s, errors: {} }));
-    runner.mutate(
-      { request: built.request, picked: built.picked },
-      {
-        onSuccess: (outcome) => {
-          updateCheckForm((s) => ({ ...s, outcome }));
-          if (!wide) setTimeout(() => scroll.current?.scrollTo({ y: resultY.current, animated: true }), 50);
-        },
+    const input = { request: built.request, picked: built.picked };
+    // Known to be offline: answer on the phone in this very tap (one render, no pending state).
+    if (!onlineManager.isOnline()) {
+      try {
+        const outcome = runner.onDevice(input);
+        if (runner.mutation.status !== 'idle') runner.mutation.reset();
+        updateCheckForm((s) => ({ ...s, errors: {}, outcome }));
+        showResult();
+        return;
+      } catch {
+        // Falls through to the mutation, which reports the problem in words.
+      }
+    }
+    if (Object.keys(form.errors).length) updateCheckForm((s) => ({ ...s, errors: {} }));
+    runner.mutation.mutate(input, {
+      onSuccess: (outcome) => {
+        updateCheckForm((s) => ({ ...s, outcome }));
+        showResult();
       },
-    );
+    });
   };
 
   const outdoor = form.parts.outdoor;
@@ -51,7 +68,7 @@ export function CheckScreen() {
           {`${errorCount === 1 ? 'One entry needs' : `${errorCount} entries need`} fixing before the check can run (marked ⚠ above).`}
         </MessageBanner>
       ) : null}
-      {runner.isError ? <MessageBanner tone="error">{errorText(runner.error)}</MessageBanner> : null}
+      {runner.mutation.isError ? <MessageBanner tone="error">{errorText(runner.mutation.error)}</MessageBanner> : null}
     </>
   );
   const result = form.outcome ? (
@@ -59,10 +76,40 @@ export function CheckScreen() {
       <CheckResultView outcome={form.outcome} systemRefrigerant={refrigerant} />
     </View>
   ) : null;
+  // Clearing a half-typed driveway check by a stray tap would cost the tech the nameplates: ask first.
   const reset = (
-    <Button mode="outlined" icon="restart" onPress={() => updateCheckForm(() => initialCheckForm())} contentStyle={styles.button} testID="check-reset">
-      Start over
-    </Button>
+    <>
+      <Button mode="outlined" icon="restart" onPress={() => setConfirmReset(true)} contentStyle={styles.button} testID="check-reset">
+        Start over
+      </Button>
+      <AppDialog
+        visible={confirmReset}
+        onDismiss={() => setConfirmReset(false)}
+        title="Start over?"
+        testID="check-reset-dialog"
+        actions={
+          <>
+            <Button onPress={() => setConfirmReset(false)} contentStyle={styles.button} testID="check-reset-cancel">
+              Keep the form
+            </Button>
+            <Button
+              mode="contained"
+              onPress={() => {
+                setConfirmReset(false);
+                runner.mutation.reset();
+                updateCheckForm(() => initialCheckForm());
+              }}
+              contentStyle={styles.button}
+              testID="check-reset-confirm"
+            >
+              Start over
+            </Button>
+          </>
+        }
+      >
+        <Text variant="bodyMedium">This clears every part, entry and the answer on this phone. It can not be undone.</Text>
+      </AppDialog>
+    </>
   );
 
   if (wide) {
@@ -73,7 +120,7 @@ export function CheckScreen() {
         </View>
         <View style={styles.columns}>
           <ScrollView style={styles.column} contentContainerStyle={styles.columnContent} keyboardShouldPersistTaps="handled">
-            <CheckForm onCheck={onCheck} busy={runner.isPending} />
+            <CheckForm onCheck={onCheck} busy={runner.mutation.isPending} />
             {status}
           </ScrollView>
           <ScrollView style={styles.column} contentContainerStyle={styles.columnContent}>
@@ -91,7 +138,7 @@ export function CheckScreen() {
     <CheckFrame>
       <ScrollView ref={scroll} style={styles.fill} contentContainerStyle={styles.phoneContent} keyboardShouldPersistTaps="handled">
         <CheckHeading actions={reset} />
-        <CheckForm onCheck={onCheck} busy={runner.isPending} />
+        <CheckForm onCheck={onCheck} busy={runner.mutation.isPending} />
         {status}
         {result}
       </ScrollView>

@@ -1,6 +1,7 @@
 import { useSyncExternalStore } from 'react';
 import type { CheckResult } from '@/shared/rules/types';
 import type { CheckRequest } from '@/shared/schemas/check';
+import { readStoredCheckForm, restoreCheckForm, saveCheckFormSoon } from './check-form-storage';
 import type { FieldValues } from './field-types';
 import { NAMEPLATE_DEFAULTS } from './nameplate-fields';
 import { PART_SLOTS, type PartSlot } from './part-slots';
@@ -43,8 +44,9 @@ export function initialCheckForm(): CheckFormState {
   };
 }
 
-// A module store, not component state: the form survives a tab switch (the screen unmounts).
-let state = initialCheckForm();
+// A module store, not component state: the form survives a tab switch (the screen unmounts), and
+// on the web it is kept in localStorage so it survives a reload too.
+let state = restoreCheckForm(readStoredCheckForm(), initialCheckForm());
 const listeners = new Set<() => void>();
 
 export function useCheckForm(): CheckFormState {
@@ -59,6 +61,7 @@ export function useCheckForm(): CheckFormState {
 
 export function updateCheckForm(change: (s: CheckFormState) => CheckFormState) {
   state = change(state);
+  saveCheckFormSoon(state);
   listeners.forEach((l) => l());
 }
 

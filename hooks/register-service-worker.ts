@@ -1,0 +1,2 @@
+/** Native builds have no service worker: the web variant (register-service-worker.web.ts) does the work. */
+export function registerServiceWorker(): void {}

@@ -1,0 +1,69 @@
+// The progressive-web-app half of the web build, run over dist/ after `expo export`: links the
+// manifest and icons from index.html, then generates dist/sw.js with workbox-build, which precaches
+// the export (JS, CSS, fonts including the icon font under assets/node_modules, icons) so the app
+// opens with no signal after one visit. The API is never cached: answers must be live or computed
+// on the phone, never stale copies.
+import { readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { generateSW } from 'workbox-build';
+
+/** Tags the exported index.html needs for installing; the theme colour is constants/theme.ts's primary. */
+const HEAD_TAGS = [
+  '<link rel="manifest" href="/manifest.webmanifest" />',
+  '<meta name="theme-color" content="#23406E" />',
+  '<link rel="icon" type="image/png" sizes="48x48" href="/icons/favicon-48.png" />',
+  '<link rel="apple-touch-icon" href="/icons/apple-touch-icon.png" />',
+];
+
+/** Adds the manifest/icon tags to index.html once (a rebuild over the same file does not repeat them). */
+export function linkManifest(outDir) {
+  const file = path.join(outDir, 'index.html');
+  let html = readFileSync(file, 'utf8');
+  // Expo writes its own theme-color from app.json; keep one.
+  html = html.replace(/<meta name="theme-color"[^>]*>\s*/g, '');
+  const missing = HEAD_TAGS.filter((tag) => !html.includes(tag));
+  if (missing.length) html = html.replace('</head>', `${missing.join('')}</head>`);
+  writeFileSync(file, html);
+}
+
+/** Generates dist/sw.js; returns how many files and bytes it precaches. */
+export async function writeServiceWorker(outDir) {
+  const { count, size, warnings } = await generateSW({
+    globDirectory: outDir,
+    // The icon font lives under assets/node_modules/…: `**` matches it (glob skips no node_modules).
+    globPatterns: ['**/*.{js,css,html,ttf,otf,woff,woff2,png,svg,ico,webmanifest}'],
+    globIgnores: ['sw.js', 'workbox-*.js', '**/*.map'],
+    swDest: path.join(outDir, 'sw.js'),
+    mode: 'production',
+    sourcemap: false,
+    // Expo names bundles entry-<md5>.js and assets name.<md5>.ext: those hashes already bust caches.
+    dontCacheBustURLsMatching: /(-[0-9a-f]{32}\.js|\.[0-9a-f]{32}\.[a-z0-9]+)$/,
+    // The main bundle is larger than workbox's 2 MB default.
+    maximumFileSizeToCacheInBytes: 12 * 1024 * 1024,
+    navigateFallback: '/index.html',
+    navigateFallbackDenylist: [/^\/api\//, /^\/sw\.js$/],
+    cleanupOutdatedCaches: true,
+    // A new build takes over at the next navigation; pages already open keep the code they loaded.
+    skipWaiting: true,
+    clientsClaim: false,
+    runtimeCaching: [],
+  });
+  for (const w of warnings) console.warn(`service worker: ${w}`);
+  return { count, size };
+}
+
+/** Both steps, in order (index.html changes before its revision is computed). */
+export async function finishWebExport(outDir) {
+  linkManifest(outDir);
+  const { count, size } = await writeServiceWorker(outDir);
+  console.log(`service worker: ${count} files precached (${(size / 1024 / 1024).toFixed(1)} MB)`);
+}
+
+// Run as `node scripts/service-worker.mjs <dist>` by build-web.mjs, whose buildWeb() stays synchronous.
+if (process.argv[1] && fileURLToPath(import.meta.url) === path.resolve(process.argv[1])) {
+  finishWebExport(path.resolve(process.argv[2] ?? 'dist')).catch((err) => {
+    console.error(err);
+    process.exit(1);
+  });
+}
