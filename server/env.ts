@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { z } from 'zod';
+import { SmtpEnvShape, smtpConfigOf, type SmtpConfig } from './mail/smtp-config';
 
 /** The one place that reads process.env: validated configuration for the server. */
 
@@ -17,6 +18,9 @@ const EnvSchema = z.object({
   TANDEM_SIGNIN_LIMIT: z.coerce.number().int().min(1).default(10),
   /** Only `npm run dev` sets this: the Expo dev server's origin. */
   TANDEM_CORS_ORIGIN: z.string().url().optional(),
+  /** The shop's name on reports and e-mail. */
+  TANDEM_SHOP_NAME: z.string().trim().min(1).max(120).optional(),
+  ...SmtpEnvShape,
 });
 
 export interface AppConfig {
@@ -29,6 +33,11 @@ export interface AppConfig {
   logLevel: z.infer<typeof EnvSchema>['TANDEM_LOG_LEVEL'];
   signInLimit: number;
   corsOrigin?: string;
+  shopName?: string;
+  /** Where reports are e-mailed; absent means sending is not configured (demo mode fills it in). */
+  smtp?: SmtpConfig;
+  /** Loopback port of the local mail service demo mode starts. */
+  localMailPort?: number;
 }
 
 /** Reads the JWT secret from the data dir, creating it once; it is never committed. */
@@ -59,5 +68,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     logLevel: e.TANDEM_LOG_LEVEL,
     signInLimit: e.TANDEM_SIGNIN_LIMIT,
     corsOrigin: e.TANDEM_CORS_ORIGIN,
+    shopName: e.TANDEM_SHOP_NAME,
+    smtp: smtpConfigOf(e),
+    localMailPort: e.TANDEM_LOCAL_MAIL_PORT,
   };
 }

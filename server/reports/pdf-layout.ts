@@ -1,0 +1,151 @@
+import path from 'node:path';
+import PDFDocument from 'pdfkit';
+
+export const FONT = { regular: 'Inter', medium: 'Inter-Medium', bold: 'Inter-Bold' } as const;
+const FONT_DIR = path.resolve(__dirname, '../../assets/fonts');
+
+/** Paper sizes in points (1/72 in): US Letter 8.5 × 11 in, ISO A4 210 × 297 mm. */
+export const PAPER = { letter: 'LETTER', a4: 'A4' } as const;
+export type Paper = keyof typeof PAPER;
+
+const MARGIN_PT = 36;
+const INK = '#1d2a33';
+const MUTED = '#56646e';
+const RULE = '#c9d1d6';
+
+export interface Column {
+  header: string;
+  /** Share of the usable width (the shares of a table add up to 1). */
+  share: number;
+}
+
+/** A pdfkit document with the shipped Inter fonts and a few layout helpers that keep a cursor and break pages. */
+export class PdfLayout {
+  readonly doc: PDFKit.PDFDocument;
+
+  constructor(paper: Paper, info: { title: string; author: string }) {
+    this.doc = new PDFDocument({ size: PAPER[paper], margin: MARGIN_PT, bufferPages: true, info: { Title: info.title, Author: info.author } });
+    this.doc.registerFont(FONT.regular, path.join(FONT_DIR, 'Inter_400Regular.ttf'));
+    this.doc.registerFont(FONT.medium, path.join(FONT_DIR, 'Inter_600SemiBold.ttf'));
+    this.doc.registerFont(FONT.bold, path.join(FONT_DIR, 'Inter_700Bold.ttf'));
+    this.doc.font(FONT.regular).fontSize(8.5).fillColor(INK);
+  }
+
+  get left() {
+    return this.doc.page.margins.left;
+  }
+  get width() {
+    return this.doc.page.width - this.doc.page.margins.left - this.doc.page.margins.right;
+  }
+  private get bottom() {
+    return this.doc.page.height - this.doc.page.margins.bottom - 14; // room for the footer line
+  }
+
+  /** Starts a new page when less than `heightPt` is left on this one. */
+  ensure(heightPt: number) {
+    if (this.doc.y + heightPt > this.bottom) this.doc.addPage();
+  }
+
+  heading(text: string) {
+    this.ensure(40);
+    this.doc.moveDown(0.5).font(FONT.bold).fontSize(10).fillColor(INK).text(text, this.left, this.doc.y, { width: this.width });
+    const y = this.doc.y + 1;
+    this.doc.moveTo(this.left, y).lineTo(this.left + this.width, y).lineWidth(0.5).strokeColor(RULE).stroke();
+    this.doc.y = y + 3;
+    this.doc.font(FONT.regular).fontSize(8.5);
+  }
+
+  paragraph(text: string, options: { muted?: boolean; bold?: boolean; size?: number } = {}) {
+    this.doc
+      .font(options.bold ? FONT.medium : FONT.regular)
+      .fontSize(options.size ?? 8.5)
+      .fillColor(options.muted ? MUTED : INK);
+    this.ensure(this.doc.heightOfString(text, { width: this.width }));
+    this.doc.text(text, this.left, this.doc.y, { width: this.width });
+    this.doc.font(FONT.regular).fontSize(8.5).fillColor(INK);
+  }
+
+  /** A table with a header row; each row breaks to a new page whole (with the header repeated). */
+  table(columns: Column[], rows: string[][]) {
+    const widths = columns.map((c) => c.share * this.width);
+    const pad = 2;
+    const drawRow = (cells: string[], header: boolean) => {
+      this.doc.font(header ? FONT.medium : FONT.regular).fontSize(header ? 7.5 : 8.5);
+      const height = Math.max(...cells.map((cell, i) => this.doc.heightOfString(cell || ' ', { width: widths[i] - pad * 2 }))) + pad * 2;
+      if (this.doc.y + height > this.bottom) {
+        this.doc.addPage();
+        if (!header) drawRow(columns.map((c) => c.header), true);
+        this.doc.font(header ? FONT.medium : FONT.regular).fontSize(header ? 7.5 : 8.5);
+      }
+      const top = this.doc.y;
+      let x = this.left;
+      cells.forEach((cell, i) => {
+        this.doc.fillColor(header ? MUTED : INK).text(cell, x + pad, top + pad, { width: widths[i] - pad * 2 });
+        x += widths[i];
+      });
+      this.doc.moveTo(this.left, top + height).lineTo(this.left + this.width, top + height).lineWidth(0.3).strokeColor(RULE).stroke();
+      this.doc.y = top + height;
+      this.doc.x = this.left;
+    };
+    drawRow(columns.map((c) => c.header), true);
+    for (const row of rows) drawRow(row, false);
+    this.doc.fillColor(INK).font(FONT.regular).fontSize(8.5);
+  }
+
+  /** Images in one row, each fitted in a box of the given height; unreadable images are skipped. */
+  images(items: { data: Buffer; caption: string }[], heightPt: number) {
+    if (items.length === 0) return;
+    this.ensure(heightPt + 14);
+    const boxWidth = Math.min(160, (this.width - 8 * (items.length - 1)) / items.length);
+    const top = this.doc.y + 2;
+    items.forEach((item, i) => {
+      const x = this.left + i * (boxWidth + 8);
+      try {
+        this.doc.image(item.data, x, top, { fit: [boxWidth, heightPt], align: 'center', valign: 'center' });
+      } catch {
+        this.doc.rect(x, top, boxWidth, heightPt).strokeColor(RULE).stroke();
+      }
+      this.doc.fontSize(7).fillColor(MUTED).text(item.caption, x, top + heightPt + 2, { width: boxWidth, ellipsis: true, lineBreak: false });
+    });
+    this.doc.y = top + heightPt + 14;
+    this.doc.x = this.left;
+    this.doc.fontSize(8.5).fillColor(INK);
+  }
+
+  /** Signature lines side by side. */
+  signatures(labels: string[]) {
+    this.ensure(44);
+    const top = this.doc.y + 26;
+    const each = (this.width - 24 * (labels.length - 1)) / labels.length;
+    labels.forEach((label, i) => {
+      const x = this.left + i * (each + 24);
+      this.doc.moveTo(x, top).lineTo(x + each, top).lineWidth(0.6).strokeColor(INK).stroke();
+      this.doc.fontSize(7.5).fillColor(MUTED).text(label, x, top + 3, { width: each });
+    });
+    this.doc.y = top + 16;
+    this.doc.x = this.left;
+    this.doc.fontSize(8.5).fillColor(INK);
+  }
+
+  /** Writes the footer on every page and returns the finished PDF. */
+  finish(footer: (page: number, pages: number) => string): Promise<Buffer> {
+    const chunks: Buffer[] = [];
+    const done = new Promise<Buffer>((resolve, reject) => {
+      this.doc.on('data', (c: Buffer) => chunks.push(c));
+      this.doc.on('end', () => resolve(Buffer.concat(chunks)));
+      this.doc.on('error', reject);
+    });
+    const range = this.doc.bufferedPageRange();
+    for (let i = range.start; i < range.start + range.count; i++) {
+      this.doc.switchToPage(i);
+      const y = this.doc.page.height - this.doc.page.margins.bottom - 8;
+      // Drawing below the bottom margin would add a page: lift the margin while writing the footer.
+      const bottom = this.doc.page.margins.bottom;
+      this.doc.page.margins.bottom = 0;
+      this.doc.font(FONT.regular).fontSize(7).fillColor(MUTED).text(footer(i + 1, range.count), this.left, y, { width: this.width, align: 'center', lineBreak: false });
+      this.doc.page.margins.bottom = bottom;
+    }
+    this.doc.end();
+    return done;
+  }
+}
