@@ -40,3 +40,17 @@ export function usesPoeOil(name: string | undefined | null): boolean | undefined
   const r = getRefrigerant(name);
   return r ? r.oil === 'poe' : undefined;
 }
+
+export {
+  bubblePointF,
+  bubblePressurePsig,
+  dewPointF,
+  dewPressurePsig,
+  glideF,
+  saturationRange,
+  SaturationRangeError,
+  SATURATION_MAX_F,
+  SATURATION_MIN_F,
+  type SaturationRange,
+} from './saturation';
+export { atmosphericPsia, absoluteToGaugePsig, gaugeToAbsolutePsia } from './atmosphere';

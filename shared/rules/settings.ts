@@ -6,6 +6,8 @@ import type { RuleSettings } from './types';
  * 10 °F subcooling when the unit gives none: common practice (no source).
  * 50 ft / 20 ft line-length and lift limits when a unit gives none: common practice (no source),
  * conservative figures typical of residential installation instructions.
+ * Start-up readings: ±5 °F superheat (fixed orifice) and ±3 °F subcooling bands, a 500-micron
+ * evacuation and a decay test that stays under 1,000 microns over 10 minutes: common practice (no source).
  */
 export const DEFAULT_RULE_SETTINGS: RuleSettings = {
   cfmPerTonMin: 350,
@@ -14,6 +16,11 @@ export const DEFAULT_RULE_SETTINGS: RuleSettings = {
   defaultMaxLineLengthFt: 50,
   defaultMaxLiftFt: 20,
   rebateTier: undefined,
+  superheatToleranceF: 5,
+  subcoolingToleranceF: 3,
+  evacuationTargetMicrons: 500,
+  decayLimitMicrons: 1000,
+  decayHoldMinutes: 10,
 };
 
 /** Merges stored overrides over the defaults, ignoring unknown keys. */

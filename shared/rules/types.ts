@@ -63,6 +63,17 @@ export interface RuleSettings {
   defaultMaxLiftFt: number;
   /** The rebate tier the shop works with; undefined thresholds are not checked. */
   rebateTier?: { name: string; seer2?: number; eer2?: number; hspf2?: number };
+  // Start-up readings (shared/commissioning); optional so settings stored before them still load.
+  /** ± band in °F around the fixed-orifice target superheat that counts as on target. */
+  superheatToleranceF?: number;
+  /** ± band in °F around the target subcooling that counts as on target. */
+  subcoolingToleranceF?: number;
+  /** Deepest vacuum in microns a finished evacuation must reach. */
+  evacuationTargetMicrons?: number;
+  /** Highest reading in microns the decay (standing vacuum) test may rise to. */
+  decayLimitMicrons?: number;
+  /** Hold time in minutes of the decay test. */
+  decayHoldMinutes?: number;
 }
 
 /** A refrigerant transition rule, kept as data with effective dates so the office can update it. */

@@ -44,6 +44,14 @@ export interface CommissioningEvaluateResult {
   verdict: (typeof READING_VERDICTS)[number];
   /** One plain sentence: what to do next, with the numbers that led there. */
   advice: string;
+  /** Indoor wet bulb in °F the fixed-orifice target used, and whether it was measured or computed from humidity. */
+  indoorWbF?: number;
+  wetBulbSource?: 'measured' | 'from-humidity';
+  /** The shop's ± tolerance in °F the verdict used, and how far the judged reading is from its target (reading − target). */
+  toleranceF?: number;
+  marginF?: number;
+  /** Short plain reasons behind the verdict (for records and tests). */
+  reasons?: string[];
 }
 
 /** GET /api/refrigerants/:id/saturation query: exactly one of psig or tempF. */

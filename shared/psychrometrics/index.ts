@@ -1,0 +1,1 @@
+export { wetBulbF, PsychrometricInputError } from './wet-bulb';
