@@ -16,7 +16,7 @@ import { readingView } from './system-view';
  */
 export async function addReading(ctx: AppContext, id: number, body: ReadingCreate, userId: number) {
   const { settings } = await loadRuleContext(ctx);
-  const results = evaluateReading(body, settings);
+  const results = evaluateReading(body, settings, (await loadCurrent(ctx.dataSource.manager, id)).revision.parts);
   const row = await withWriteLock(ctx, async (manager) => {
     const { record } = await loadCurrent(manager, id);
     if (record.status === 'final') {

@@ -22,6 +22,7 @@ export interface PriceSnapshot {
 /** What was computed from one reading: charge figures, and pass/fail of evacuation and nitrogen test. */
 export interface ReadingResults {
   charge?: CommissioningEvaluateResult;
-  evacuation?: { passed: boolean; targetMicrons: number; finalMicrons: number; decayMicrons?: number; message: string };
-  pressureTest?: { passed: boolean; pressurePsig: number; holdMinutes: number; dropPsig: number; message: string };
+  /** `passed` null: not enough recorded to judge (the message says what is missing). */
+  evacuation?: { passed: boolean | null; message: string };
+  pressureTest?: { passed: boolean | null; message: string };
 }

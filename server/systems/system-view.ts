@@ -1,4 +1,4 @@
-import { applyChecklistStates, deriveChecklist, openChecklistItems, type ChecklistRow } from '../../shared/checklist/index';
+import { applyChecklistStates, deriveChecklist, openChecklistItems, type ChecklistOptions, type ChecklistRow } from '../../shared/checklist/index';
 import type { AttachmentRow } from '../attachments/attachment.entity';
 import { who } from '../lib/user-names';
 import type { CommissioningReadingRow } from './commissioning-reading.entity';
@@ -8,8 +8,8 @@ import type { SystemRevisionRow } from './system-revision.entity';
 type Who = { id: number; name: string } | null;
 
 /** The checklist of a revision: items from its facts, with the states the tech saved. */
-export function checklistOf(rev: SystemRevisionRow): ChecklistRow[] {
-  return applyChecklistStates(deriveChecklist(rev.parts), rev.content.checklist);
+export function checklistOf(rev: SystemRevisionRow, options: ChecklistOptions = {}): ChecklistRow[] {
+  return applyChecklistStates(deriveChecklist(rev.parts, options), rev.content.checklist);
 }
 
 /** A reading as the API answers it. */
@@ -37,10 +37,10 @@ export interface RevisionSummary {
 export function systemView(
   record: SystemRecordRow,
   rev: SystemRevisionRow,
-  extra: { readings: CommissioningReadingRow[]; attachments: AttachmentRow[]; revisions: SystemRevisionRow[]; names: Map<number, string> },
+  extra: { readings: CommissioningReadingRow[]; attachments: AttachmentRow[]; revisions: SystemRevisionRow[]; names: Map<number, string>; checklistOptions: ChecklistOptions },
 ) {
   const { serials, checklist: _states, label, ...request } = rev.content;
-  const checklist = checklistOf(rev);
+  const checklist = checklistOf(rev, extra.checklistOptions);
   return {
     id: record.id,
     jobId: record.jobId,

@@ -6,6 +6,7 @@ import { withWriteLock } from '../db/write-transaction';
 import { requireJob } from '../jobs/jobs.service';
 import { AppError, notFound } from '../lib/errors';
 import { userNames } from '../lib/user-names';
+import { loadRuleContext } from '../settings/settings.service';
 import { CommissioningReadingRow } from './commissioning-reading.entity';
 import { compareWithToday } from './current-check';
 import { mergeContent } from './system-content';
@@ -70,7 +71,7 @@ export async function finalizeSystem(ctx: AppContext, id: number, body: SystemFi
   await withWriteLock(ctx, async (manager) => {
     const { record, revision } = await loadCurrent(manager, id);
     await assertEditable(ctx, record, body.revision, 'patch');
-    const open = checklistOf(revision).filter((row) => row.state === 'open');
+    const open = checklistOf(revision, await checklistOptions(ctx)).filter((row) => row.state === 'open');
     if (open.length > 0 && !body.openItemsReason) {
       throw new AppError('open-checklist-items', 'Checklist items are still open: give a reason to finalize with them open.', 422, {
         openItems: open.map((row) => ({ id: row.id, title: row.title })),
@@ -142,7 +143,12 @@ export async function loadView(ctx: AppContext, id: number, n?: number): Promise
   const rev = revisions.find((r) => r.revision === (n ?? record.revision));
   if (!rev) throw notFound('Revision');
   const names = await userNames(manager, [record.createdBy, ...revisions.flatMap((r) => [r.savedBy, r.finalizedBy]), ...readings.map((r) => r.takenBy)]);
-  return systemView(record, rev, { readings, attachments, revisions, names });
+  return systemView(record, rev, { readings, attachments, revisions, names, checklistOptions: await checklistOptions(ctx) });
+}
+
+/** The shop's evacuation target for the checklist's wording. */
+async function checklistOptions(ctx: AppContext) {
+  return { evacuationTargetMicrons: (await loadRuleContext(ctx)).settings.evacuationTargetMicrons };
 }
 
 /** 409 unless the save started from the latest revision, and (for PATCH) the record is a draft. */

@@ -1,3 +1,4 @@
+import { DEFAULT_COMMISSIONING_SETTINGS } from '../commissioning/settings';
 import { isA2L, usesPoeOil } from '../refrigerants/index';
 import type { Pairing } from '../rules/types';
 
@@ -14,8 +15,8 @@ export interface ChecklistOptions {
   evacuationTargetMicrons?: number;
 }
 
-/** 500 microns with a decay test: common practice (no source), the figure most instructions name. */
-export const DEFAULT_EVACUATION_TARGET_MICRONS = 500;
+/** The evacuation target when the shop sets none: shared/commissioning's default (500 microns, common practice). */
+export const DEFAULT_EVACUATION_TARGET_MICRONS = DEFAULT_COMMISSIONING_SETTINGS.evacuationTargetMicrons;
 
 // Where an overflow damages the building (IRC M1411.3, as the condensate rule reads it).
 const OVERFLOW_DAMAGE = new Set(['attic', 'above-ceiling', 'closet', 'utility-room']);

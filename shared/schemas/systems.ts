@@ -79,17 +79,20 @@ export const EvacuationSchema = z
   .object({
     finalMicrons: z.number().min(0).max(30000),
     decayMicrons: z.number().min(0).max(30000).optional(),
-    decayMinutes: z.number().min(0).max(240).optional(),
-    targetMicrons: z.number().min(50).max(5000).optional(),
+    holdMinutes: z.number().min(0).max(240).optional(),
   })
   .strict();
 
-/** Standing pressure test with dry nitrogen: test pressure, hold time and the drop seen. */
+/** Standing pressure test with dry nitrogen: test pressure, hold time, the drop seen, the unit's limit and temperatures. */
 export const PressureTestSchema = z
   .object({
     pressurePsig: z.number().min(0).max(800),
     holdMinutes: z.number().min(0).max(1440),
-    dropPsig: z.number().min(-50).max(800).default(0),
+    dropPsig: z.number().min(-50).max(800).optional(),
+    maxTestPsig: z.number().min(0).max(800).optional(),
+    startTempF: z.number().min(-40).max(150).optional(),
+    endTempF: z.number().min(-40).max(150).optional(),
+    altitudeFt: z.number().min(-1500).max(15000).optional(),
   })
   .strict();
 
