@@ -8,7 +8,7 @@ const FONT_DIR = path.resolve(__dirname, '../../assets/fonts');
 export const PAPER = { letter: 'LETTER', a4: 'A4' } as const;
 export type Paper = keyof typeof PAPER;
 
-const MARGIN_PT = 36;
+const MARGIN_PT = 32;
 const INK = '#1d2a33';
 const MUTED = '#56646e';
 const RULE = '#c9d1d6';
@@ -34,9 +34,11 @@ export class PdfLayout {
   get left() {
     return this.doc.page.margins.left;
   }
+  /** Usable width in points (narrowed while drawing beside images). */
   get width() {
-    return this.doc.page.width - this.doc.page.margins.left - this.doc.page.margins.right;
+    return this.narrowWidth ?? this.doc.page.width - this.doc.page.margins.left - this.doc.page.margins.right;
   }
+  private narrowWidth: number | undefined;
   private get bottom() {
     return this.doc.page.height - this.doc.page.margins.bottom - 14; // room for the footer line
   }
@@ -46,9 +48,10 @@ export class PdfLayout {
     if (this.doc.y + heightPt > this.bottom) this.doc.addPage();
   }
 
-  heading(text: string) {
-    this.ensure(40);
-    this.doc.moveDown(0.5).font(FONT.bold).fontSize(10).fillColor(INK).text(text, this.left, this.doc.y, { width: this.width });
+  /** A section heading, kept on one page with at least `keepWithPt` of what follows it. */
+  heading(text: string, keepWithPt = 40) {
+    this.ensure(keepWithPt);
+    this.doc.moveDown(0.35).font(FONT.bold).fontSize(9.5).fillColor(INK).text(text, this.left, this.doc.y, { width: this.width });
     const y = this.doc.y + 1;
     this.doc.moveTo(this.left, y).lineTo(this.left + this.width, y).lineWidth(0.5).strokeColor(RULE).stroke();
     this.doc.y = y + 3;
@@ -68,14 +71,14 @@ export class PdfLayout {
   /** A table with a header row; each row breaks to a new page whole (with the header repeated). */
   table(columns: Column[], rows: string[][]) {
     const widths = columns.map((c) => c.share * this.width);
-    const pad = 2;
+    const pad = 1.5;
     const drawRow = (cells: string[], header: boolean) => {
-      this.doc.font(header ? FONT.medium : FONT.regular).fontSize(header ? 7.5 : 8.5);
+      this.doc.font(header ? FONT.medium : FONT.regular).fontSize(header ? 6.5 : 7.5);
       const height = Math.max(...cells.map((cell, i) => this.doc.heightOfString(cell || ' ', { width: widths[i] - pad * 2 }))) + pad * 2;
       if (this.doc.y + height > this.bottom) {
         this.doc.addPage();
         if (!header) drawRow(columns.map((c) => c.header), true);
-        this.doc.font(header ? FONT.medium : FONT.regular).fontSize(header ? 7.5 : 8.5);
+        this.doc.font(header ? FONT.medium : FONT.regular).fontSize(header ? 6.5 : 7.5);
       }
       const top = this.doc.y;
       let x = this.left;
@@ -92,30 +95,50 @@ export class PdfLayout {
     this.doc.fillColor(INK).font(FONT.regular).fontSize(8.5);
   }
 
-  /** Images in one row, each fitted in a box of the given height; unreadable images are skipped. */
-  images(items: { data: Buffer; caption: string }[], heightPt: number) {
-    if (items.length === 0) return;
-    this.ensure(heightPt + 14);
-    const boxWidth = Math.min(160, (this.width - 8 * (items.length - 1)) / items.length);
-    const top = this.doc.y + 2;
+  /**
+   * Draws `left` in a narrowed column and the images in a grid at the right (two per row, each fitted in
+   * a `cellPt` box with its caption), then moves below whichever is taller. Unreadable images show a frame.
+   */
+  besideImages(title: string, items: { data: Buffer; caption: string }[], cellPt: number, left: (widthPt: number) => void) {
+    if (items.length === 0) {
+      left(this.width);
+      return;
+    }
+    const gap = 6;
+    const gridWidth = cellPt * 2 + gap;
+    const rows = Math.ceil(items.length / 2);
+    const gridHeight = 12 + rows * (cellPt * 0.75 + 12);
+    this.ensure(gridHeight);
+    const top = this.doc.y;
+    const x0 = this.left + this.width - gridWidth;
+    this.doc.font(FONT.medium).fontSize(7.5).fillColor(MUTED).text(title, x0, top, { width: gridWidth, lineBreak: false });
     items.forEach((item, i) => {
-      const x = this.left + i * (boxWidth + 8);
+      const x = x0 + (i % 2) * (cellPt + gap);
+      const y = top + 12 + Math.floor(i / 2) * (cellPt * 0.75 + 12);
       try {
-        this.doc.image(item.data, x, top, { fit: [boxWidth, heightPt], align: 'center', valign: 'center' });
+        this.doc.image(item.data, x, y, { fit: [cellPt, cellPt * 0.75], align: 'center', valign: 'center' });
       } catch {
-        this.doc.rect(x, top, boxWidth, heightPt).strokeColor(RULE).stroke();
+        this.doc.rect(x, y, cellPt, cellPt * 0.75).lineWidth(0.5).strokeColor(RULE).stroke();
       }
-      this.doc.fontSize(7).fillColor(MUTED).text(item.caption, x, top + heightPt + 2, { width: boxWidth, ellipsis: true, lineBreak: false });
+      this.doc.font(FONT.regular).fontSize(6.5).fillColor(MUTED).text(item.caption, x, y + cellPt * 0.75 + 1, { width: cellPt, ellipsis: true, lineBreak: false });
     });
-    this.doc.y = top + heightPt + 14;
     this.doc.x = this.left;
-    this.doc.fontSize(8.5).fillColor(INK);
+    this.doc.y = top;
+    this.narrowWidth = this.width - gridWidth - 14;
+    try {
+      left(this.narrowWidth);
+    } finally {
+      this.narrowWidth = undefined;
+    }
+    this.doc.y = Math.max(this.doc.y, top + gridHeight);
+    this.doc.x = this.left;
+    this.doc.font(FONT.regular).fontSize(8.5).fillColor(INK);
   }
 
   /** Signature lines side by side. */
   signatures(labels: string[]) {
     this.ensure(44);
-    const top = this.doc.y + 26;
+    const top = this.doc.y + 22;
     const each = (this.width - 24 * (labels.length - 1)) / labels.length;
     labels.forEach((label, i) => {
       const x = this.left + i * (each + 24);

@@ -25,20 +25,19 @@ export async function drawReport(data: ReportData, paper: Paper): Promise<Buffer
   const layout = new PdfLayout(paper, { title: `Matched-system record — ${job.customerName}`, author: data.shopName });
   header(layout, data);
   layout.heading(`Result: ${verdictWord(record.check)}`);
-  layout.paragraph(`Checked ${dateTimeText(record.savedAt)} with rules version ${record.rulesVersion}; this is the result as it stood for this revision.`, { muted: true });
+  layout.paragraph(`As it stood for this revision: checked ${dateTimeText(record.savedAt)} with rules version ${record.rulesVersion}.`, { muted: true });
   parts(layout, record);
   layout.paragraph(ratingLine(record));
   layout.paragraph(regionalLine(record));
   findings(layout, record);
   readings(layout, record);
   checklist(layout, record);
-  if (data.photos.length > 0) {
-    layout.heading('Nameplate photos');
-    layout.images(data.photos.map((p) => ({ data: p.data, caption: p.fileName })), 90);
-  }
-  layout.heading('Safety');
-  layout.paragraph(SAFETY_NOTE);
-  layout.signatures(['Technician — name, signature, date', 'Customer — name, signature, date']);
+  layout.heading('Safety', 120);
+  const photos = data.photos.map((p) => ({ data: p.data, caption: p.fileName }));
+  layout.besideImages('Nameplate photos', photos, 76, () => {
+    layout.paragraph(SAFETY_NOTE);
+    layout.signatures(['Technician — name, signature, date', 'Customer — name, signature, date']);
+  });
   const revisionText = `Revision ${record.revision}${record.status === 'final' ? '' : ' (draft)'}`;
   return layout.finish((page, pages) => `${data.shopName} · ${job.customerName} · ${revisionText} · page ${page} of ${pages} · printed ${dateTimeText(data.generatedAt)}`);
 }
@@ -55,9 +54,8 @@ function header(layout: PdfLayout, { shopName, job, record }: ReportData) {
   doc.moveDown(0.4);
   const contact = [job.contactEmail, job.contactPhone].filter(Boolean).join(' · ');
   layout.paragraph(`Customer: ${job.customerName}${contact ? ` (${contact})` : ''}`, { bold: true });
-  layout.paragraph(`Site: ${job.siteAddress} (${job.state})${record.label ? ` — ${record.label}` : ''}`);
-  const scope = record.request.scope === 'new-system' ? 'New system' : 'Component replacement';
-  layout.paragraph(`Scope: ${scope}${record.parts.installDate ? ` · install date ${record.parts.installDate}` : ''}`);
+  const scope = record.request.scope === 'new-system' ? 'new system' : 'component replacement';
+  layout.paragraph(`Site: ${job.siteAddress} (${job.state})${record.label ? ` — ${record.label}` : ''} · Scope: ${scope}${record.parts.installDate ? ` · install date ${record.parts.installDate}` : ''}`);
 }
 
 function parts(layout: PdfLayout, record: SystemView) {
@@ -85,18 +83,24 @@ function parts(layout: PdfLayout, record: SystemView) {
 
 function findings(layout: PdfLayout, record: SystemView) {
   layout.heading('Findings');
-  if (record.check.findings.length === 0) {
-    layout.paragraph('No findings.');
-    return;
+  // "Facts not given" notes are listed in one line: they say what was not checked, not what is wrong.
+  const missing = record.check.findings.filter((f) => f.severity === 'info' && typeof f.values.missing === 'string');
+  const shown = record.check.findings.filter((f) => !missing.includes(f));
+  if (shown.length === 0) layout.paragraph('No findings.');
+  else {
+    layout.table(
+      [
+        { header: 'Severity', share: 0.09 },
+        { header: 'Finding', share: 0.65 },
+        { header: 'Basis', share: 0.26 },
+      ],
+      shown.map((f) => [SEVERITY_WORDS[f.severity], `${f.title}: ${f.detail}${f.fix && f.severity !== 'info' ? ` Fix: ${f.fix}` : ''}`, f.basis.citation]),
+    );
   }
-  layout.table(
-    [
-      { header: 'Severity', share: 0.1 },
-      { header: 'Finding', share: 0.62 },
-      { header: 'Basis', share: 0.28 },
-    ],
-    record.check.findings.map((f) => [SEVERITY_WORDS[f.severity], `${f.title}: ${f.detail}${f.fix ? ` Fix: ${f.fix}` : ''}`, f.basis.citation]),
-  );
+  if (missing.length > 0) {
+    const facts = [...new Set(missing.map((f) => String(f.values.missing)))];
+    layout.paragraph(`Not checked for want of facts: ${facts.join('; ')}.`, { muted: true });
+  }
 }
 
 function readings(layout: PdfLayout, record: SystemView) {
@@ -111,7 +115,7 @@ function readings(layout: PdfLayout, record: SystemView) {
     const lines: string[] = [];
     if (c && input) {
       lines.push(
-        `Superheat ${fmt(c.superheatF, '°F')} (target ${fmt(c.targetSuperheatF, '°F')}) · Subcooling ${fmt(c.subcoolingF, '°F')} (target ${fmt(c.targetSubcoolingF, '°F')}) — ${READING_VERDICT_WORDS[c.verdict] ?? c.verdict}`,
+        `Superheat ${fmt(c.superheatF, '°F')}${target(c.targetSuperheatF)} · Subcooling ${fmt(c.subcoolingF, '°F')}${target(c.targetSubcoolingF)} — ${READING_VERDICT_WORDS[c.verdict] ?? c.verdict}`,
         `Suction ${fmt(input.suctionPsig, 'psig')} / ${fmt(input.suctionLineF, '°F')}, liquid ${fmt(input.liquidPsig, 'psig')} / ${fmt(input.liquidLineF, '°F')}; outdoor ${fmt(input.outdoorDbF, '°F')}, indoor WB ${fmt(input.indoorWbF, '°F')}`,
       );
     }
@@ -128,13 +132,15 @@ function readings(layout: PdfLayout, record: SystemView) {
   );
 }
 
+const target = (valueF: number | undefined) => (valueF === undefined ? '' : ` (target ${fmt(valueF, '°F')})`);
+
 function checklist(layout: PdfLayout, record: SystemView) {
   layout.heading('Checklist');
   layout.table(
     [
-      { header: 'State', share: 0.08 },
-      { header: 'Item', share: 0.3 },
-      { header: 'Why', share: 0.62 },
+      { header: 'State', share: 0.07 },
+      { header: 'Item', share: 0.35 },
+      { header: 'Why', share: 0.58 },
     ],
     record.checklist.map((row) => [STATE_WORDS[row.state], row.note ? `${row.title} — ${row.note}` : row.title, row.reason]),
   );
