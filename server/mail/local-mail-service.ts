@@ -22,7 +22,7 @@ const MAX_MESSAGE_BYTES = 25 * 1024 * 1024;
  * Demo mode's mail service: an SMTP server on the loopback interface that keeps every message it
  * receives as an .eml file under the data dir, so a sent report can be opened without a real mail host.
  */
-export async function startLocalMailService(options: { dataDir: string; port: number; from?: string }): Promise<LocalMailService> {
+export async function startLocalMailService(options: { dataDir: string; port: number; from?: string; onError?: (err: Error) => void }): Promise<LocalMailService> {
   const dir = path.join(options.dataDir, 'mail');
   await mkdir(dir, { recursive: true });
   const server = new SMTPServer({
@@ -39,10 +39,23 @@ export async function startLocalMailService(options: { dataDir: string; port: nu
       );
     },
   });
-  await new Promise<void>((resolve, reject) => {
-    server.once('error', reject);
-    server.listen(options.port, '127.0.0.1', () => resolve());
-  });
+  const listen = (port: number) =>
+    new Promise<void>((resolve, reject) => {
+      server.once('error', reject);
+      server.listen(port, '127.0.0.1', () => {
+        server.off('error', reject);
+        resolve();
+      });
+    });
+  try {
+    await listen(options.port);
+  } catch (err) {
+    // Another demo on this machine holds the port: any free loopback port serves as well.
+    if ((err as NodeJS.ErrnoException).code !== 'EADDRINUSE' || options.port === 0) throw err;
+    await listen(0);
+  }
+  // A client that drops mid-message is an error event: report it, never let it end the process.
+  server.on('error', (err: Error) => options.onError?.(err));
   const { port } = server.server.address() as AddressInfo;
   return {
     smtp: { host: '127.0.0.1', port, tls: 'none', from: options.from ?? DEFAULT_FROM },

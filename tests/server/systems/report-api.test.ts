@@ -1,10 +1,10 @@
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { PDFParse } from 'pdf-parse';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 import { tinyPng } from './images';
+import { pdfText } from './pdf-text';
 import { authFor, buildFixture, recordBody, type Fixture } from './system-fixtures';
 
 let t: TestApp;
@@ -18,17 +18,6 @@ afterAll(async () => {
 });
 
 const auth = (role: 'tech' | 'admin' = 'tech') => authFor(t, role);
-
-/** The text of a PDF with whitespace collapsed, and its page count. */
-export async function pdfText(data: Buffer) {
-  const parser = new PDFParse({ data: new Uint8Array(data) });
-  try {
-    const result = await parser.getText();
-    return { text: result.text.replace(/\s+/g, ' '), pages: result.total };
-  } finally {
-    await parser.destroy();
-  }
-}
 
 const getPdf = (url: string) =>
   request(t.app)
