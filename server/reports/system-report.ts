@@ -32,7 +32,7 @@ export async function drawReport(data: ReportData, paper: Paper): Promise<Buffer
   findings(layout, record);
   readings(layout, record);
   checklist(layout, record);
-  layout.heading('Safety', 120);
+  layout.heading('Safety', data.photos.length > 0 ? 110 : 72);
   const photos = data.photos.map((p) => ({ data: p.data, caption: p.fileName }));
   layout.besideImages('Nameplate photos', photos, 76, () => {
     layout.paragraph(SAFETY_NOTE);

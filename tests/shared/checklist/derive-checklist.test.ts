@@ -38,7 +38,7 @@ describe('deriveChecklist', () => {
   });
 
   it('when the refrigerant is A2L or a sensor is fitted, then the leak sensor test is listed', () => {
-    // R-454B is ASHRAE 34 class A2L (values.json RP rows)
+    // R-454B is ASHRAE 34 class A2L (values.json RP-04)
     expect(ids(pairing({ outdoor: outdoor({ refrigerant: 'R-454B' }), indoorCoil: coil({ refrigerants: ['R-454B'] }) }))).toContain('a2l-leak-sensor');
     expect(ids(pairing({ indoorCoil: coil({ leakSensor: true }) }))).toContain('a2l-leak-sensor');
     expect(ids(pairing())).not.toContain('a2l-leak-sensor');
