@@ -18,7 +18,8 @@ interface CannonResult {
   errors: number;
 }
 
-const cannon = (opts: Record<string, unknown>) => autocannon({ connections: CONNECTIONS, duration: DURATION_S, ...opts }) as Promise<CannonResult>;
+const cannon = (opts: Record<string, unknown>) =>
+  autocannon({ connections: CONNECTIONS, duration: DURATION_S, ...opts }) as Promise<CannonResult>;
 
 /**
  * jobs.record-save.p99-ms: POST /api/jobs/:id/systems (the check re-run, prices, a write-locked insert)
@@ -37,7 +38,13 @@ export async function run(): Promise<Measure[]> {
       createInterface({ input: child.stdout! }).once('line', resolve);
       child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
     });
-    const { port, token, jobId, recordId, body } = JSON.parse(line) as { port: number; token: string; jobId: number; recordId: number; body: Record<string, unknown> };
+    const { port, token, jobId, recordId, body } = JSON.parse(line) as {
+      port: number;
+      token: string;
+      jobId: number;
+      recordId: number;
+      body: Record<string, unknown>;
+    };
     const base = `http://127.0.0.1:${port}`;
     const headers = { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' };
     const payload = JSON.stringify(body);

@@ -17,7 +17,14 @@ export async function seedDemoJobs(ctx: AppContext): Promise<void> {
 
   const open = await createJob(
     ctx,
-    { customerName: 'Marisol Thibault', siteAddress: '48 Wren Hollow Lane, Ashford', state: 'GA', contactEmail: 'marisol.thibault@example.test', contactPhone: '555-0187', notes: 'Dog in the back yard; attic access in the hall closet.' },
+    {
+      customerName: 'Marisol Thibault',
+      siteAddress: '48 Wren Hollow Lane, Ashford',
+      state: 'GA',
+      contactEmail: 'marisol.thibault@example.test',
+      contactPhone: '555-0187',
+      notes: 'Dog in the back yard; attic access in the hall closet.',
+    },
     tech.id,
   );
   const record = await createSystem(
@@ -40,10 +47,27 @@ export async function seedDemoJobs(ctx: AppContext): Promise<void> {
   await addReading(
     ctx,
     record.id,
-    { label: 'First start', charge: { refrigerant: 'R-454B', meteringType: 'txv', suctionPsig: 128, suctionLineF: 59, liquidPsig: 330, liquidLineF: 95, indoorWbF: 63, indoorDbF: 75, outdoorDbF: 90 } },
+    {
+      label: 'First start',
+      charge: {
+        refrigerant: 'R-454B',
+        meteringType: 'txv',
+        suctionPsig: 128,
+        suctionLineF: 59,
+        liquidPsig: 330,
+        liquidLineF: 95,
+        indoorWbF: 63,
+        indoorDbF: 75,
+        outdoorDbF: 90,
+      },
+    },
     tech.id,
   );
 
-  const closed = await createJob(ctx, { customerName: 'Keir Abernathy', siteAddress: '310 Old Mill Road, Dunmore', state: 'OH', notes: 'Quote only; customer postponed.' }, tech.id);
+  const closed = await createJob(
+    ctx,
+    { customerName: 'Keir Abernathy', siteAddress: '310 Old Mill Road, Dunmore', state: 'OH', notes: 'Quote only; customer postponed.' },
+    tech.id,
+  );
   await updateJob(ctx, closed.id, { status: 'closed' }, tech.id);
 }
