@@ -38,7 +38,9 @@ export async function run(): Promise<Measure[]> {
       createInterface({ input: child.stdout! }).once('line', resolve);
       child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
     });
-    const { port, token, jobId, recordId, body } = JSON.parse(line) as {
+    const { port, token, jobId, recordId, body, saveCpuMs, pdfCpuMs } = JSON.parse(line) as {
+      saveCpuMs: number;
+      pdfCpuMs: number;
       port: number;
       token: string;
       jobId: number;
@@ -75,13 +77,13 @@ export async function run(): Promise<Measure[]> {
         unit: 'ms',
         baseline: check.latency.p99,
         ratio: round(save.latency.p99 / Math.max(check.latency.p99, 1), 2),
-        note: `${note}; ${round(save.requests.average, 0)} saves/s; baseline POST /api/checks p99 with the same parts; target < 50${failures ? `; ${failures} failed requests` : ''}`,
+        note: `${note}; ${round(save.requests.average, 0)} saves/s; ${round(saveCpuMs, 1)} ms CPU per save in-process; baseline POST /api/checks p99 with the same parts; target < 50${failures ? `; ${failures} failed requests` : ''}`,
       },
       {
         id: 'jobs.report-pdf.ms',
         value: round(percentile(times, 50), 1),
         unit: 'ms',
-        note: `median of ${PDF_RUNS} sequential GET report.pdf (3 readings, 10 findings, checklist, one 640×480 photo), after 3 warm-up renders; p95 ${round(percentile(times, 95), 1)} ms; target < 300`,
+        note: `median of ${PDF_RUNS} sequential GET report.pdf (3 readings, 10 findings, checklist, one 640×480 photo), after 3 warm-up renders; ${round(pdfCpuMs, 1)} ms CPU per render in-process; p95 ${round(percentile(times, 95), 1)} ms; target < 300`,
       },
     ];
   } finally {
