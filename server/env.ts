@@ -3,6 +3,7 @@ import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { isIP } from 'node:net';
 import path from 'node:path';
 import { z } from 'zod';
+import { SmtpEnvShape, smtpConfigOf, type SmtpConfig } from './mail/smtp-config';
 
 /** The one place that reads process.env: validated configuration for the server. */
 
@@ -20,6 +21,9 @@ const EnvSchema = z.object({
   TANDEM_TRUST_PROXY: z.string().default('false'),
   /** Only `npm run dev` sets this: the Expo dev server's origin. */
   TANDEM_CORS_ORIGIN: z.string().url().optional(),
+  /** The shop's name on reports and e-mail. */
+  TANDEM_SHOP_NAME: z.string().trim().min(1).max(120).optional(),
+  ...SmtpEnvShape,
 });
 
 export interface AppConfig {
@@ -34,6 +38,11 @@ export interface AppConfig {
   /** Express's `trust proxy`: false (the default) ignores X-Forwarded-For entirely. */
   trustProxy?: TrustProxy;
   corsOrigin?: string;
+  shopName?: string;
+  /** Where reports are e-mailed; absent means sending is not configured (demo mode fills it in). */
+  smtp?: SmtpConfig;
+  /** Loopback port of the local mail service demo mode starts. */
+  localMailPort?: number;
 }
 
 export type TrustProxy = false | number | string[];
@@ -101,5 +110,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     signInLimit: e.TANDEM_SIGNIN_LIMIT,
     trustProxy: parseTrustProxy(e.TANDEM_TRUST_PROXY),
     corsOrigin: e.TANDEM_CORS_ORIGIN,
+    shopName: e.TANDEM_SHOP_NAME,
+    smtp: smtpConfigOf(e),
+    localMailPort: e.TANDEM_LOCAL_MAIL_PORT,
   };
 }

@@ -5,6 +5,7 @@ import type { AppContext } from './context';
 import { openDatabase } from './db/data-source';
 import { loadConfig } from './env';
 import { createLogger } from './lib/logger';
+import { startLocalMailService } from './mail/local-mail-service';
 
 /** Starts Tandem: open and migrate the database, seed the demo if asked, listen, shut down cleanly. */
 async function main() {
@@ -13,6 +14,12 @@ async function main() {
   const dataSource = await openDatabase(config.databasePath);
   const ctx: AppContext = { dataSource, config, logger };
   if (config.demo && (await seedDemoIfEmpty(ctx))) logger.info('demo data loaded');
+  // Demo mode with no SMTP host: reports go to a local mail service that keeps them under the data dir.
+  const localMail = config.demo && !config.smtp ? await startLocalMailService({ dataDir: config.dataDir, port: config.localMailPort ?? 2525, onError: (err) => logger.warn({ err }, 'local mail service') }) : undefined;
+  if (localMail) {
+    config.smtp = localMail.smtp;
+    logger.info(`local mail service on 127.0.0.1:${localMail.smtp.port}, messages kept in ${localMail.dir}`);
+  }
 
   const server = createApp(ctx).listen(config.port, () => {
     const address = server.address();
@@ -22,6 +29,7 @@ async function main() {
 
   const shutdown = (signal: string) => {
     logger.info({ signal }, 'shutting down');
+    void localMail?.close();
     server.close(() => {
       void dataSource.destroy().finally(() => process.exit(0));
     });

@@ -1,0 +1,73 @@
+import { MoreThan } from 'typeorm';
+import type { SendReport } from '../../shared/schemas/systems';
+import type { AppContext } from '../context';
+import { withWriteLock } from '../db/write-transaction';
+import { JobRow } from '../jobs/job.entity';
+import { AppError } from '../lib/errors';
+import { renderSystemReport } from '../reports/system-report';
+import { SAFETY_NOTE } from '../reports/report-text';
+import { storageFor } from '../storage/storage-for';
+import { loadCurrent } from '../systems/systems.service';
+import { createMailTransport } from './mail-transport';
+import { OutboundEmailRow } from './outbound-email.entity';
+import { outboxView } from './outbox.service';
+
+/** A second send of the same record within this window asks first (409 unless `confirm`). */
+export const RESEND_WINDOW_MS = 60_000;
+
+/**
+ * POST /api/systems/:id/send: renders the report and sends it over SMTP. A failure answers 502 and
+ * records the attempt; nothing else changes (the record, its revision and status stay as they were).
+ */
+export async function sendReport(ctx: AppContext, id: number, body: SendReport, userId: number) {
+  const { record } = await loadCurrent(ctx.dataSource.manager, id);
+  const smtp = ctx.config.smtp;
+  if (!smtp)
+    throw new AppError('mail-not-configured', 'E-mail is not set up on this server: ask your office to add the SMTP settings.', 503);
+  if (!body.confirm) {
+    const since = new Date(Date.now() - RESEND_WINDOW_MS).toISOString();
+    const recent = await ctx.dataSource
+      .getRepository(OutboundEmailRow)
+      .findOne({ where: { systemId: id, status: 'sent', createdAt: MoreThan(since) }, order: { id: 'DESC' } });
+    if (recent) {
+      throw new AppError('recently-sent', `This report was sent to ${recent.to} less than a minute ago. Send it again?`, 409, {
+        sentAt: recent.createdAt,
+        to: recent.to,
+        confirmWith: { confirm: true },
+      });
+    }
+  }
+  const job = await ctx.dataSource.getRepository(JobRow).findOneByOrFail({ id: record.jobId });
+  const report = await renderSystemReport(ctx, id, { paper: body.paper ?? 'letter' });
+  const shop = ctx.config.shopName ?? 'Tandem';
+  const subject = `${shop}: system record for ${job.siteAddress} (revision ${report.revision})`.slice(0, 200);
+  const attempt = { systemId: id, revision: report.revision, to: body.to, subject, sentBy: userId, createdAt: new Date().toISOString() };
+
+  let messageId: string;
+  try {
+    const info = await createMailTransport(smtp).sendMail({
+      from: { name: shop, address: smtp.from },
+      to: body.to,
+      subject,
+      text: `Hello ${job.customerName},\n\nAttached is the record of the heating and cooling system installed at ${job.siteAddress}: the equipment with serial numbers, the compatibility check, the start-up readings and the checklist.\n\nSafety: ${SAFETY_NOTE}\n\n${shop}\n`,
+      attachments: [{ filename: report.fileName, content: report.pdf, contentType: 'application/pdf' }],
+    });
+    messageId = info.messageId;
+  } catch (err) {
+    const reason = err instanceof Error ? err.message.slice(0, 300) : 'unknown error';
+    await withWriteLock(ctx, (manager) =>
+      manager
+        .getRepository(OutboundEmailRow)
+        .insert({ ...attempt, status: 'failed', messageId: null, error: reason, reportKey: null, reportFileName: null }),
+    );
+    ctx.logger.warn({ systemId: id, err: reason }, 'report e-mail failed');
+    throw new AppError('mail-failed', 'The mail server did not accept the report. Nothing was sent; try again later.', 502, { reason });
+  }
+  const reportKey = await storageFor(ctx).put(report.pdf);
+  const row = await withWriteLock(ctx, (manager) =>
+    manager
+      .getRepository(OutboundEmailRow)
+      .save({ ...attempt, status: 'sent', messageId, error: null, reportKey, reportFileName: report.fileName }),
+  );
+  return outboxView(row);
+}
