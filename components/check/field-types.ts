@@ -14,6 +14,8 @@ export interface FieldDesc {
   options?: readonly Option[];
   /** Shown before "More nameplate fields" is opened. */
   essential?: boolean;
+  /** The check cannot run without it: marked "required" beside the label. */
+  required?: boolean;
   hint?: string;
 }
 

@@ -70,7 +70,7 @@ export function ColumnMappingForm({ problem, distributor, busy, onRetry }: Props
   return (
     <Card mode="outlined" testID="column-mapping">
       <Card.Content style={styles.gap}>
-        <Text variant="titleLarge" accessibilityRole="header">
+        <Text variant="titleLarge" role="heading" aria-level={2}>
           Match the columns
         </Text>
         <Text variant="bodyMedium">

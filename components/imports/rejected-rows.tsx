@@ -13,7 +13,7 @@ export function RejectedRows({ errors, rejected }: { errors: ImportRowError[]; r
   const heading = (
     <View style={styles.heading}>
       <Icon source="alert-octagon-outline" size={22} color={theme.status.blocker} />
-      <Text variant="titleMedium" accessibilityRole="header">
+      <Text variant="titleMedium" role="heading" aria-level={3}>
         Rejected rows ({rejected})
       </Text>
     </View>

@@ -1,0 +1,63 @@
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser, openPage, VIEWPORTS, type ViewportName } from './browser';
+import { AUDIT_SCREENS, seedAuditData, signInFor } from './audit-screens';
+import { saveShot } from './shots';
+
+/**
+ * axe-core on every screen at both viewports: no serious or critical violation (WCAG 2.x A/AA rules
+ * as axe-core 4.14 ships them). The screens are listed once, in audit-screens.ts.
+ */
+
+const AXE_SOURCE = readFileSync(path.resolve(__dirname, '../../node_modules/axe-core/axe.min.js'), 'utf8');
+
+interface AxeViolation {
+  id: string;
+  impact: string | null;
+  help: string;
+  nodes: { target: string[]; html: string; failureSummary?: string }[];
+}
+
+async function seriousViolations(page: Page): Promise<AxeViolation[]> {
+  await page.addScriptTag({ content: AXE_SOURCE });
+  const violations = await page.evaluate(async () => {
+    // The server tsconfig these tests compile under has no DOM lib: reach the page's globals untyped.
+    const page = globalThis as unknown as { axe: { run(ctx: unknown, opts: object): Promise<{ violations: AxeViolation[] }> }; document: unknown };
+    const result = await page.axe.run(page.document, { resultTypes: ['violations'] });
+    return result.violations;
+  });
+  return violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+}
+
+function describeViolations(violations: AxeViolation[]): string {
+  return violations
+    .map((v) => {
+      const nodes = v.nodes.slice(0, 5).map((n) => `    ${n.target.join(' ')} :: ${n.html.slice(0, 160)}`);
+      return `${v.impact} ${v.id} (${v.nodes.length}): ${v.help}\n${nodes.join('\n')}`;
+    })
+    .join('\n');
+}
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchBrowser();
+  await seedAuditData();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe.each(Object.keys(VIEWPORTS) as ViewportName[])('accessibility audit at the %s viewport', (viewport) => {
+  it.each(AUDIT_SCREENS.map((s) => [s.name, s] as const))('when axe-core audits the %s screen, then it finds no serious or critical violation', async (_name, screen) => {
+    const page = await openPage(browser, viewport);
+    await signInFor(page, screen.role);
+    await screen.open(page);
+    await saveShot(page, `a11y-${screen.name}-${viewport}`);
+    const violations = await seriousViolations(page);
+    if (violations.length) console.log(`[a11y ${screen.name} ${viewport}]\n${describeViolations(violations)}`);
+    expect(violations.map((v) => `${v.impact} ${v.id} ×${v.nodes.length}`)).toEqual([]);
+    await page.context().close();
+  });
+});
