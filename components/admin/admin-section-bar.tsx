@@ -10,7 +10,14 @@ export function AdminSectionBar() {
   const router = useRouter();
   const current = pathname.split('/')[2] ?? '';
   return (
-    <ScrollView horizontal contentContainerStyle={styles.row} style={styles.bar} showsHorizontalScrollIndicator={false} role="navigation" aria-label="Admin sections">
+    <ScrollView
+      horizontal
+      contentContainerStyle={styles.row}
+      style={styles.bar}
+      showsHorizontalScrollIndicator={false}
+      role="navigation"
+      aria-label="Admin sections"
+    >
       {ADMIN_SECTIONS.map((s) => (
         <ToggleChip
           key={s.href}
@@ -28,5 +35,12 @@ export function AdminSectionBar() {
 
 const styles = StyleSheet.create({
   bar: { flexGrow: 0 },
-  row: { gap: spacing.sm, paddingHorizontal: spacing.lg, paddingTop: spacing.md, maxWidth: CONTENT_MAX_WIDTH, width: '100%', alignSelf: 'center' },
+  row: {
+    gap: spacing.sm,
+    paddingHorizontal: spacing.lg,
+    paddingTop: spacing.md,
+    maxWidth: CONTENT_MAX_WIDTH,
+    width: '100%',
+    alignSelf: 'center',
+  },
 });

@@ -1,7 +1,8 @@
 import { StyleSheet, View } from 'react-native';
-import { Card, Icon, Text } from 'react-native-paper';
+import { Card, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import type { ItemSummary } from './item-summary';
 
 /** One result on a phone: model first, then brand, refrigerant, size and key facts on their own lines. */
@@ -15,7 +16,7 @@ export function CatalogResultCard({ summary, onPress, testID }: { summary: ItemS
           <Text variant="titleMedium" style={styles.title} numberOfLines={2}>
             {summary.title}
           </Text>
-          <Icon source="chevron-right" size={24} color={theme.colors.onSurfaceVariant} />
+          <DecorativeIcon source="chevron-right" size={24} color={theme.colors.onSurfaceVariant} />
         </View>
         {summary.brand ? (
           <Text variant="bodyMedium" style={muted}>

@@ -42,7 +42,11 @@ export function CatalogSearch({ slot, onPick }: { slot: PartSlot; onPick(part: P
                 key={id}
                 title={model}
                 description={describe(spec)}
-                left={(p) => <List.Icon {...p} icon="plus-circle-outline" />}
+                left={(p) => (
+                  <View aria-hidden>
+                    <List.Icon {...p} icon="plus-circle-outline" />
+                  </View>
+                )}
                 onPress={() => {
                   setQ('');
                   onPick({ id, label: model, spec });

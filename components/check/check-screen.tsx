@@ -1,4 +1,4 @@
-import { useRef } from 'react';
+import { useEffect, useRef } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
@@ -22,6 +22,18 @@ export function CheckScreen() {
   useRuleSettings();
   const scroll = useRef<ScrollView>(null);
   const resultY = useRef(0);
+  // Set when a check answers on the phone; cleared once the page has scrolled to the verdict.
+  const scrollPending = useRef(false);
+  const scrollToVerdict = () => {
+    if (!scrollPending.current || resultY.current <= 0) return;
+    scrollPending.current = false;
+    scroll.current?.scrollTo({ y: Math.max(0, resultY.current - spacing.md), animated: true });
+  };
+  // A result of the same height lays out at the same place (no new onLayout): scroll after the paint too.
+  useEffect(() => {
+    const t = setTimeout(scrollToVerdict, 80);
+    return () => clearTimeout(t);
+  }, [form.outcome]);
 
   const onCheck = () => {
     const built = buildCheckRequest(form);
@@ -34,8 +46,8 @@ export function CheckScreen() {
       { request: built.request, picked: built.picked },
       {
         onSuccess: (outcome) => {
+          scrollPending.current = !wide;
           updateCheckForm((s) => ({ ...s, outcome }));
-          if (!wide) setTimeout(() => scroll.current?.scrollTo({ y: resultY.current, animated: true }), 50);
         },
       },
     );
@@ -55,7 +67,12 @@ export function CheckScreen() {
     </>
   );
   const result = form.outcome ? (
-    <View onLayout={(e) => (resultY.current = e.nativeEvent.layout.y)}>
+    <View
+      onLayout={(e) => {
+        resultY.current = e.nativeEvent.layout.y;
+        scrollToVerdict();
+      }}
+    >
       <CheckResultView outcome={form.outcome} systemRefrigerant={refrigerant} />
     </View>
   ) : null;

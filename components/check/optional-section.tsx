@@ -17,7 +17,11 @@ export function OptionalSection({ section }: { section: SectionKey }) {
       title={def.title}
       titleNumberOfLines={2}
       description={hasError ? 'Needs attention' : filled ? `${filled} given` : 'Not given'}
-      left={(p) => <List.Icon {...p} icon={hasError ? 'alert-circle-outline' : def.icon} />}
+      left={(p) => (
+        <View aria-hidden>
+          <List.Icon {...p} icon={hasError ? 'alert-circle-outline' : def.icon} />
+        </View>
+      )}
       testID={`section-${section}`}
       style={styles.header}
     >

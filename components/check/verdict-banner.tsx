@@ -1,8 +1,9 @@
 import { StyleSheet, View } from 'react-native';
-import { Icon, Text } from 'react-native-paper';
+import { Text } from 'react-native-paper';
 import type { CheckResult } from '@/shared/rules/types';
 import { spacing } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import { verdictWords } from './verdict-words';
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
@@ -16,7 +17,7 @@ export function VerdictBanner({ result }: { result: CheckResult }) {
   const count = (s: string) => result.findings.filter((f) => f.severity === s).length;
   return (
     <View style={[styles.banner, { backgroundColor: bg, borderColor: fg }]} accessibilityRole="alert" testID="verdict-banner">
-      <Icon source={icon} size={40} color={fg} />
+      <DecorativeIcon source={icon} size={40} color={fg} />
       <View style={styles.words}>
         <Text variant="headlineSmall" style={{ color: theme.colors.onSurface }} testID="verdict-word">
           {word}
