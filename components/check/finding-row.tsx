@@ -6,7 +6,7 @@ import { MIN_TARGET_PX, spacing } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
 import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import { citationWords, isInternalKey, valueLabel, valueWords } from './value-label';
-import { BASIS_WORDS, SEVERITY_GROUPS } from './verdict-words';
+import { BASIS_WORDS, findingTitle, SEVERITY_GROUPS } from './verdict-words';
 
 /** One finding: what is wrong and the fix under it; a tap opens the numbers and the basis. */
 export function FindingRow({ finding }: { finding: Finding }) {
@@ -32,7 +32,7 @@ export function FindingRow({ finding }: { finding: Finding }) {
         <DecorativeIcon source={group.icon} size={22} color={colour} />
         <View style={styles.words}>
           <Text variant="titleMedium" testID={`finding-title-${finding.ruleId}`}>
-            {finding.title}
+            {findingTitle(finding)}
           </Text>
           {finding.fix ? (
             <Text variant="bodyMedium" testID={`finding-fix-${finding.ruleId}`}>

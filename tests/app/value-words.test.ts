@@ -59,7 +59,7 @@ describe('citationWords', () => {
 
 describe('figuresWords', () => {
   it('when a record holds codes and keys, then it reads as labelled words with no code or key left', () => {
-    // 10 CFR 430.32(c): Southeast split heat pump, SEER2 14.3 and HSPF2 7.5 (values.json EF rows).
+    // 10 CFR 430.32(c): Southeast split heat pump, SEER2 14.3 and HSPF2 7.5 (values.json EFF-06).
     const text = figuresWords({ region: 'southeast', regionName: 'Southeast', productClass: 'split-heat-pump', seer2: 14.3, hspf2: 7.5 }, ['region']);
     expect(text).toBe('Region name: Southeast · Product class: Split heat pump · SEER2: 14.3 · HSPF2: 7.5');
     expect(text).not.toMatch(/regionName|productClass|split-heat-pump/);
