@@ -135,9 +135,11 @@ export const AUDIT_SCREENS: AuditScreen[] = [
     open: async (page) => {
       await page.goto('/admin/imports');
       await visible(page, 'import-pick');
+      await page.getByTestId('import-kind-outdoor-units').click();
       const chooser = page.waitForEvent('filechooser');
       await page.getByTestId('import-pick').click();
       await (await chooser).setFiles({ name: 'audit-preview.csv', mimeType: 'text/csv', buffer: Buffer.from(PREVIEW_CSV, 'utf8') });
+      await expect.poll(() => page.getByTestId('import-file-name').textContent(), { timeout: 15_000 }).toContain('audit-preview.csv');
       await page.getByTestId('import-upload').click();
       await visible(page, 'import-preview');
     },
