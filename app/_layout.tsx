@@ -11,6 +11,7 @@ import { darkTheme, FONT_FILES, lightTheme } from '@/constants/theme';
 import { createQueryClient } from '@/hooks/query-client';
 import { persistOptions } from '@/hooks/query-persistence';
 import { SessionProvider } from '@/hooks/use-session';
+import { PAPER_SETTINGS } from '@/components/ui/paper-icon';
 
 /** Root: fonts first (no flash of fallback text or empty icon boxes), then theme, data and session. */
 export default function RootLayout() {
@@ -30,7 +31,7 @@ export default function RootLayout() {
   return (
     <SafeAreaProvider>
       <PersistQueryClientProvider client={queryClient} persistOptions={persistence}>
-        <PaperProvider theme={theme}>
+        <PaperProvider theme={theme} settings={PAPER_SETTINGS}>
           <SessionProvider>
             <StatusBar style={scheme === 'dark' ? 'light' : 'dark'} />
             <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: theme.colors.background } }} />

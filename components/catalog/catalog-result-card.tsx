@@ -10,7 +10,7 @@ export function CatalogResultCard({ summary, onPress, testID }: { summary: ItemS
   const theme = useTandemTheme();
   const muted = { color: theme.colors.onSurfaceVariant };
   return (
-    <Card mode="outlined" onPress={onPress} style={styles.card} testID={testID} accessibilityRole="button" accessibilityLabel={`Open ${summary.title}`}>
+    <Card mode="outlined" onPress={onPress} style={styles.card} testID={testID} accessibilityRole="button">
       <Card.Content style={styles.content}>
         <View style={styles.head}>
           <Text variant="titleMedium" style={styles.title} numberOfLines={2}>

@@ -52,7 +52,6 @@ export function CatalogSearch({ slot, onPick }: { slot: PartSlot; onPick(part: P
                   onPick({ id, label: model, spec });
                 }}
                 style={styles.item}
-                accessibilityLabel={`Pick ${model}`}
                 testID={`${slot}-result-${model}`}
               />
             );
