@@ -63,3 +63,35 @@ describe.each(Object.keys(VIEWPORTS) as ViewportName[])('accessibility audit at 
     await page.context().close();
   });
 });
+
+describe('dialogs', () => {
+  it('when an admin opens Add user from the keyboard, then focus moves into a named modal dialog, stays there on Tab, and returns to the button on Escape', async () => {
+    const context = await browser.newContext({ viewport: VIEWPORTS.wide, baseURL: inject('baseUrl'), deviceScaleFactor: 1 });
+    const page = await context.newPage();
+    await signInFor(page, 'admin');
+    await page.goto('/admin/users');
+    const opener = page.getByTestId('add-user');
+    await expect.poll(() => opener.isVisible(), { timeout: 15_000 }).toBe(true);
+    await opener.focus();
+    await page.keyboard.press('Enter');
+
+    const dialog = page.getByRole('dialog', { name: 'Add user' });
+    await expect.poll(() => dialog.count(), { timeout: 15_000 }).toBe(1);
+    expect(await dialog.getAttribute('aria-modal')).toBe('true');
+    const focusInDialog = () => page.evaluate(() => {
+      const g = globalThis as unknown as { document: { activeElement: { closest(s: string): unknown } | null } };
+      return Boolean(g.document.activeElement?.closest('[role=dialog]'));
+    });
+    await expect.poll(focusInDialog).toBe(true);
+    // More Tabs than the dialog has controls: focus wraps inside it.
+    for (let i = 0; i < 12; i++) await page.keyboard.press('Tab');
+    expect(await focusInDialog()).toBe(true);
+    for (let i = 0; i < 3; i++) await page.keyboard.press('Shift+Tab');
+    expect(await focusInDialog()).toBe(true);
+
+    await page.keyboard.press('Escape');
+    await expect.poll(() => dialog.count()).toBe(0);
+    await expect.poll(() => page.evaluate(() => (globalThis as unknown as { document: { activeElement: { getAttribute(n: string): string | null } | null } }).document.activeElement?.getAttribute('data-testid'))).toBe('add-user');
+    await context.close();
+  });
+});

@@ -130,6 +130,16 @@ export const AUDIT_SCREENS: AuditScreen[] = [
     },
   },
   {
+    name: 'admin-users-add-dialog',
+    role: 'admin',
+    open: async (page) => {
+      await page.goto('/admin/users');
+      await visible(page, 'add-user');
+      await page.getByTestId('add-user').click();
+      await visible(page, 'add-user-dialog');
+    },
+  },
+  {
     name: 'admin-imports-preview',
     role: 'admin',
     open: async (page) => {
