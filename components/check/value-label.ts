@@ -99,6 +99,11 @@ const CODE_WORDS: Record<string, string> = {
   '45k-and-over': '45,000 Btu/h and over',
 };
 
+/** A schema code as the words shown for it ("above-ceiling" → "Above a ceiling"); unknown codes come back as given. */
+export function codeWords(code: string): string {
+  return CODE_WORDS[code] ?? code;
+}
+
 /** Codes whose meaning depends on the key they sit under. */
 const KEYED_WORDS: Record<string, Record<string, string>> = {
   limitSource: { unit: 'The outdoor unit’s instructions', default: 'The shop’s default' },

@@ -65,3 +65,14 @@ describe('figuresWords', () => {
     expect(text).not.toMatch(/regionName|productClass|split-heat-pump/);
   });
 });
+
+describe('form options', () => {
+  it('when the site section offers where the indoor unit sits and the airflow direction, then no chip shows a raw code', async () => {
+    const { SECTIONS } = await import('../../components/check/check-sections');
+    const labels = SECTIONS.site.fields.flatMap((f) => (f.options ?? []).map((o) => o.label));
+    // Codes from shared/schemas/check.ts INDOOR_LOCATIONS and AIRFLOW_DIRECTIONS.
+    expect(labels).toContain('Above a ceiling');
+    expect(labels).toContain('Horizontal, air moving left');
+    expect(labels.filter((l) => /^[a-z]+(-[a-z]+)+$/.test(l))).toEqual([]);
+  });
+});
