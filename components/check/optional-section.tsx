@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { List } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import { SECTIONS, type SectionKey } from './check-sections';
 import { setSectionField, useCheckForm } from './check-store';
 import { SpecField } from './spec-field';
@@ -22,6 +23,8 @@ export function OptionalSection({ section }: { section: SectionKey }) {
           <List.Icon {...p} icon={hasError ? 'alert-circle-outline' : def.icon} />
         </View>
       )}
+      // Paper draws its own chevron as an unnamed image; ours is hidden from assistive tech (the button says expanded).
+      right={({ isExpanded }) => <DecorativeIcon source={isExpanded ? 'chevron-up' : 'chevron-down'} size={24} />}
       testID={`section-${section}`}
       style={styles.header}
     >
