@@ -37,7 +37,7 @@ export function ToggleChip({ label, selected, icon, kind = 'toggle', onPress, te
     >
       <View style={styles.inner}>
         {selected ? <DecorativeIcon source="check" size={18} color={fg} /> : icon ? <DecorativeIcon source={icon} size={18} color={fg} /> : null}
-        <Text variant="labelLarge" style={{ color: fg }}>
+        <Text variant="labelLarge" style={[styles.label, { color: fg }]}>
           {label}
         </Text>
       </View>
@@ -48,4 +48,6 @@ export function ToggleChip({ label, selected, icon, kind = 'toggle', onPress, te
 const styles = StyleSheet.create({
   chip: { minHeight: MIN_TARGET_PX, minWidth: MIN_TARGET_PX, borderWidth: 1, borderRadius: 10, paddingHorizontal: spacing.md, justifyContent: 'center' },
   inner: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs, justifyContent: 'center' },
+  // In an equal-width row a long word wraps inside its chip instead of being cut off.
+  label: { flexShrink: 1, textAlign: 'center' },
 });
