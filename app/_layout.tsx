@@ -13,6 +13,7 @@ import { createQueryClient } from '@/hooks/query-client';
 import { persistOptions } from '@/hooks/query-persistence';
 import { registerServiceWorker } from '@/hooks/register-service-worker';
 import { SessionProvider } from '@/hooks/use-session';
+import { PAPER_SETTINGS } from '@/components/ui/paper-icon';
 
 /** Root: fonts first (no flash of fallback text or empty icon boxes), then theme, data and session. */
 export default function RootLayout() {
@@ -34,7 +35,7 @@ export default function RootLayout() {
   return (
     <SafeAreaProvider>
       <PersistQueryClientProvider client={queryClient} persistOptions={persistence}>
-        <PaperProvider theme={theme}>
+        <PaperProvider theme={theme} settings={PAPER_SETTINGS}>
           <SessionProvider>
             <StatusBar style={scheme === 'dark' ? 'light' : 'dark'} />
             <View style={{ flex: 1 }}>

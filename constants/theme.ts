@@ -1,3 +1,4 @@
+import { MIN_TARGET_PX } from './target-size';
 import { configureFonts, MD3DarkTheme, MD3LightTheme, type MD3Theme } from 'react-native-paper';
 
 /**
@@ -14,8 +15,9 @@ export const FONT_FILES = {
 };
 
 export const spacing = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
-/** Minimum touch target (px): gloved thumbs on a driveway. */
-export const TOUCH_TARGET = 48;
+export { MIN_TARGET_PX } from './target-size';
+/** The shared minimum target (px) under its older name, kept so existing styles read on. */
+export const TOUCH_TARGET = MIN_TARGET_PX;
 /** Below this width the app uses bottom tabs; at or above, a side rail. */
 export const WIDE_BREAKPOINT = 768;
 export const CONTENT_MAX_WIDTH = 1200;

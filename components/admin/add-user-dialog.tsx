@@ -1,4 +1,5 @@
-import { Button, SegmentedButtons, Text } from 'react-native-paper';
+import { MIN_TARGET_PX } from '@/constants/theme';
+import { Button } from 'react-native-paper';
 import { ROLES, UserCreateSchema } from '@/shared/schemas/auth';
 import { errorText } from '@/hooks/error-text';
 import { useCreateUser } from '@/hooks/use-users';
@@ -7,6 +8,10 @@ import { ROLE_LABELS } from '@/components/account/role-labels';
 import { FormField } from '@/components/ui/form-field';
 import { AppDialog } from '@/components/ui/app-dialog';
 import { MessageBanner } from '@/components/ui/message-banner';
+import { ToggleGroup } from '@/components/ui/toggle-group';
+
+/** Dialog buttons reach the shared 48 px minimum. */
+const TARGET = { minHeight: MIN_TARGET_PX };
 
 const EMPTY = { email: '', name: '', role: 'tech' as const, password: '' };
 
@@ -32,8 +37,10 @@ export function AddUserDialog({ visible, onDismiss }: { visible: boolean; onDism
       testID="add-user-dialog"
       actions={
         <>
-          <Button onPress={close}>Cancel</Button>
-          <Button mode="contained" onPress={submit} loading={create.isPending} testID="new-user-save">
+          <Button contentStyle={TARGET} onPress={close}>
+            Cancel
+          </Button>
+          <Button contentStyle={TARGET} mode="contained" onPress={submit} loading={create.isPending} testID="new-user-save">
             Add
           </Button>
         </>
@@ -42,11 +49,11 @@ export function AddUserDialog({ visible, onDismiss }: { visible: boolean; onDism
       {create.isError ? <MessageBanner tone="error">{errorText(create.error)}</MessageBanner> : null}
       <FormField label="Name" {...form.bind('name')} testID="new-user-name" />
       <FormField label="E-mail" {...form.bind('email')} autoCapitalize="none" inputMode="email" testID="new-user-email" />
-      <Text variant="labelLarge">Role</Text>
-      <SegmentedButtons
+      <ToggleGroup
+        label="Role"
         value={form.values.role}
-        onValueChange={(v) => form.setField('role', v as (typeof ROLES)[number])}
-        buttons={ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }))}
+        onChange={(v) => form.setField('role', v)}
+        options={ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r], testID: `new-user-role-${r}` }))}
       />
       <FormField
         label="First password"

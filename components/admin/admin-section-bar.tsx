@@ -1,8 +1,8 @@
 import { usePathname, useRouter } from 'expo-router';
 import { ScrollView, StyleSheet } from 'react-native';
-import { Chip } from 'react-native-paper';
 import { ADMIN_SECTIONS } from '@/constants/navigation';
-import { CONTENT_MAX_WIDTH, spacing, TOUCH_TARGET } from '@/constants/theme';
+import { CONTENT_MAX_WIDTH, spacing } from '@/constants/theme';
+import { ToggleChip } from '@/components/ui/toggle-chip';
 
 /** The Admin sections as a row of selectable chips (scrolls sideways on a narrow phone). */
 export function AdminSectionBar() {
@@ -10,19 +10,24 @@ export function AdminSectionBar() {
   const router = useRouter();
   const current = pathname.split('/')[2] ?? '';
   return (
-    <ScrollView horizontal contentContainerStyle={styles.row} style={styles.bar} showsHorizontalScrollIndicator={false}>
+    <ScrollView
+      horizontal
+      contentContainerStyle={styles.row}
+      style={styles.bar}
+      showsHorizontalScrollIndicator={false}
+      role="navigation"
+      aria-label="Admin sections"
+    >
       {ADMIN_SECTIONS.map((s) => (
-        <Chip
+        <ToggleChip
           key={s.href}
+          kind="link"
           icon={s.icon}
+          label={s.label}
           selected={current === s.segment}
-          showSelectedOverlay
           onPress={() => router.navigate(s.href as never)}
-          style={styles.chip}
           testID={`admin-section-${s.segment}`}
-        >
-          {s.label}
-        </Chip>
+        />
       ))}
     </ScrollView>
   );
@@ -30,6 +35,12 @@ export function AdminSectionBar() {
 
 const styles = StyleSheet.create({
   bar: { flexGrow: 0 },
-  row: { gap: spacing.sm, paddingHorizontal: spacing.lg, paddingTop: spacing.md, maxWidth: CONTENT_MAX_WIDTH, width: '100%', alignSelf: 'center' },
-  chip: { minHeight: TOUCH_TARGET - 8, justifyContent: 'center' },
+  row: {
+    gap: spacing.sm,
+    paddingHorizontal: spacing.lg,
+    paddingTop: spacing.md,
+    maxWidth: CONTENT_MAX_WIDTH,
+    width: '100%',
+    alignSelf: 'center',
+  },
 });

@@ -1,9 +1,13 @@
+import { MIN_TARGET_PX } from '@/constants/theme';
 import { Button, Text } from 'react-native-paper';
 import { z } from 'zod';
 import { PasswordSchema, type PublicUser } from '@/shared/schemas/auth';
 import { useZodForm } from '@/hooks/use-zod-form';
 import { AppDialog } from '@/components/ui/app-dialog';
 import { FormField } from '@/components/ui/form-field';
+
+/** Dialog buttons reach the shared 48 px minimum. */
+const TARGET = { minHeight: MIN_TARGET_PX };
 
 const ResetSchema = z.object({ password: PasswordSchema });
 const EMPTY = { password: '' };
@@ -35,8 +39,10 @@ export function ResetPasswordDialog({ user, onDismiss, onReset }: Props) {
       testID="reset-password-dialog"
       actions={
         <>
-          <Button onPress={close}>Cancel</Button>
-          <Button mode="contained" onPress={submit} testID="reset-password-save">
+          <Button contentStyle={TARGET} onPress={close}>
+            Cancel
+          </Button>
+          <Button contentStyle={TARGET} mode="contained" onPress={submit} testID="reset-password-save">
             Set password
           </Button>
         </>

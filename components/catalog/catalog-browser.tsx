@@ -1,15 +1,16 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { ActivityIndicator, ProgressBar, Searchbar, Text } from 'react-native-paper';
+import { ActivityIndicator, ProgressBar, Text } from 'react-native-paper';
 import type { CatalogKind } from '@/shared/schemas/equipment';
-import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { spacing } from '@/constants/theme';
 import { ApiError } from '@/hooks/api-client';
 import { errorText } from '@/hooks/error-text';
 import { useCatalogList } from '@/hooks/use-catalog';
 import { useHeldCatalogSearch } from '@/hooks/use-catalog-held';
 import { useIsOnline } from '@/hooks/use-connection';
 import { useIsWide } from '@/hooks/use-layout';
+import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
 import { CatalogFilters } from './catalog-filters';
@@ -65,14 +66,15 @@ export function CatalogBrowser() {
   return (
     <Screen title="Catalog" subtitle="Equipment, metering kits and rated combinations, with current distributor prices.">
       <KindSwitcher value={kind} onChange={(k) => setParams({ kind: k, page: undefined, refrigerant: undefined, tons: undefined })} />
-      <Searchbar
-        placeholder={`Search ${KIND_LABELS[kind].toLowerCase()} by model, brand or description`}
+      {/* A labelled field, not a search bar: its icon buttons were 40 px targets with names unlike their looks. */}
+      <FormField
+        label={`Search ${KIND_LABELS[kind].toLowerCase()}`}
+        placeholder="Model, brand or description"
         value={text}
         onChangeText={setText}
-        style={styles.search}
-        inputStyle={styles.searchInput}
+        autoCapitalize="none"
+        autoCorrect={false}
         testID="catalog-search"
-        accessibilityLabel="Search the catalog"
       />
       {withFilters ? (
         <CatalogFilters
@@ -85,7 +87,7 @@ export function CatalogBrowser() {
       {/* A thin bar while a new search runs over the previous results (kept on screen). */}
       {/* Paper's ProgressBar is 100% tall on the web: the wrapper gives it its 4 px. */}
       <View style={styles.progress}>
-        <ProgressBar indeterminate visible={!fromPhone && list.isFetching && !list.isPending} />
+        <ProgressBar indeterminate visible={!fromPhone && list.isFetching && !list.isPending} aria-label="Searching the catalog" />
       </View>
       {!fromPhone && list.isPending ? <ActivityIndicator accessibilityLabel="Loading the catalog" /> : null}
       {!fromPhone && list.isError ? <MessageBanner tone="error">{errorText(list.error)}</MessageBanner> : null}
@@ -117,8 +119,6 @@ export function CatalogBrowser() {
 }
 
 const styles = StyleSheet.create({
-  search: { minHeight: TOUCH_TARGET },
-  searchInput: { minHeight: TOUCH_TARGET },
   cards: { gap: spacing.sm },
   progress: { height: 4 },
 });

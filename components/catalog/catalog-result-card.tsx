@@ -1,7 +1,8 @@
 import { StyleSheet, View } from 'react-native';
-import { Card, Icon, Text } from 'react-native-paper';
+import { Card, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import type { ItemSummary } from './item-summary';
 
 /** One result on a phone: model first, then brand, refrigerant, size and key facts on their own lines. */
@@ -9,13 +10,13 @@ export function CatalogResultCard({ summary, onPress, testID }: { summary: ItemS
   const theme = useTandemTheme();
   const muted = { color: theme.colors.onSurfaceVariant };
   return (
-    <Card mode="outlined" onPress={onPress} style={styles.card} testID={testID} accessibilityRole="button" accessibilityLabel={`Open ${summary.title}`}>
+    <Card mode="outlined" onPress={onPress} style={styles.card} testID={testID} accessibilityRole="button">
       <Card.Content style={styles.content}>
         <View style={styles.head}>
           <Text variant="titleMedium" style={styles.title} numberOfLines={2}>
             {summary.title}
           </Text>
-          <Icon source="chevron-right" size={24} color={theme.colors.onSurfaceVariant} />
+          <DecorativeIcon source="chevron-right" size={24} color={theme.colors.onSurfaceVariant} />
         </View>
         {summary.brand ? (
           <Text variant="bodyMedium" style={muted}>

@@ -22,7 +22,7 @@ export function CatalogResultTable({ kind, rows, onOpen }: { kind: CatalogKind; 
         <DataTable.Title style={styles.facts}>{combos ? 'Ratings' : 'Key facts'}</DataTable.Title>
       </DataTable.Header>
       {rows.map(({ id, summary }) => (
-        <DataTable.Row key={id} onPress={() => onOpen(id)} style={styles.row} testID={`catalog-item-${summary.title}`} accessibilityLabel={`Open ${summary.title}`}>
+        <DataTable.Row key={id} onPress={() => onOpen(id)} style={styles.row} testID={`catalog-item-${summary.title}`}>
           <DataTable.Cell style={styles.model}>
             <Text variant="titleSmall">{summary.title}</Text>
           </DataTable.Cell>

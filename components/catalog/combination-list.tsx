@@ -19,7 +19,11 @@ export function CombinationList({ combinations }: { combinations: (RatedCombinat
           title={[c.outdoorModel, c.indoorModel, c.airHandlerModel].filter(Boolean).join(' + ')}
           description={[ratings(c), btuh(c.coolingBtuh), c.reference ? `Certificate ${c.reference}` : undefined].filter(Boolean).join(' · ')}
           descriptionNumberOfLines={3}
-          right={(props) => <List.Icon {...props} icon="chevron-right" />}
+          right={(props) => (
+            <View aria-hidden>
+              <List.Icon {...props} icon="chevron-right" />
+            </View>
+          )}
           onPress={() => router.push(`/catalog/rated-combinations/${c.id}` as never)}
           style={styles.item}
         />

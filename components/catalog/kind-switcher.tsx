@@ -1,7 +1,7 @@
 import { ScrollView, StyleSheet } from 'react-native';
-import { Chip } from 'react-native-paper';
 import { CATALOG_KINDS, type CatalogKind } from '@/shared/schemas/equipment';
-import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { spacing } from '@/constants/theme';
+import { ToggleChip } from '@/components/ui/toggle-chip';
 import { KIND_LABELS } from './catalog-kind-labels';
 
 const ICONS: Record<CatalogKind, string> = {
@@ -12,24 +12,12 @@ const ICONS: Record<CatalogKind, string> = {
   'rated-combinations': 'certificate-outline',
 };
 
-/** The catalog's kinds as a row of chips (scrolls sideways on a phone). */
+/** The catalog's kinds as a row of chips (scrolls sideways on a phone); the shown kind is announced as pressed. */
 export function KindSwitcher({ value, onChange }: { value: CatalogKind; onChange(kind: CatalogKind): void }) {
   return (
-    <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.row} style={styles.bar} accessibilityRole="tablist">
+    <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.row} style={styles.bar} role="group" aria-label="Kind of equipment">
       {CATALOG_KINDS.map((kind) => (
-        <Chip
-          key={kind}
-          icon={ICONS[kind]}
-          selected={kind === value}
-          showSelectedOverlay
-          onPress={() => onChange(kind)}
-          style={styles.chip}
-          accessibilityRole="tab"
-          accessibilityState={{ selected: kind === value }}
-          testID={`catalog-kind-${kind}`}
-        >
-          {KIND_LABELS[kind]}
-        </Chip>
+        <ToggleChip key={kind} icon={ICONS[kind]} label={KIND_LABELS[kind]} selected={kind === value} onPress={() => onChange(kind)} testID={`catalog-kind-${kind}`} />
       ))}
     </ScrollView>
   );
@@ -38,5 +26,4 @@ export function KindSwitcher({ value, onChange }: { value: CatalogKind; onChange
 const styles = StyleSheet.create({
   bar: { flexGrow: 0, flexShrink: 0 },
   row: { gap: spacing.sm },
-  chip: { minHeight: TOUCH_TARGET - 8, justifyContent: 'center' },
 });

@@ -3,7 +3,8 @@ import type { z } from 'zod';
 import type { FieldDesc, FieldValues } from './field-types';
 import { SECTIONS, SECTION_KEYS, type SectionKey } from './check-sections';
 import type { CheckFormState, PickedPart } from './check-store';
-import { SPEC_SCHEMAS } from './nameplate-fields';
+import { plainError } from './field-errors';
+import { nameplateFields, SPEC_SCHEMAS } from './nameplate-fields';
 import { PART_INFO, PART_SLOTS, type PartSlot } from './part-slots';
 
 const SECTION_SCHEMAS: Record<SectionKey, z.ZodType> = {
@@ -36,7 +37,7 @@ export function buildCheckRequest(form: CheckFormState): BuiltCheck {
     // Typed text goes through the same schema as a catalog CSV row (it reads "3", "yes", "R-22;R-410A").
     const result = SPEC_SCHEMAS[slot].safeParse(blankless(part.typed));
     if (result.success) body[slot] = { spec: result.data, kept: part.kept };
-    else collect(errors, slot, result.error);
+    else collect(errors, slot, result.error, nameplateFields(slot), part.typed);
   }
 
   for (const key of SECTION_KEYS) {
@@ -44,7 +45,7 @@ export function buildCheckRequest(form: CheckFormState): BuiltCheck {
     if (!Object.values(values).some((v) => v !== '')) continue;
     const result = SECTION_SCHEMAS[key].safeParse(toTyped(SECTIONS[key].fields, values));
     if (result.success) body[key] = result.data;
-    else collect(errors, key, result.error);
+    else collect(errors, key, result.error, SECTIONS[key].fields, values);
   }
 
   if (Object.keys(errors).length) return { ok: false, errors };
@@ -56,10 +57,13 @@ export function buildCheckRequest(form: CheckFormState): BuiltCheck {
   return { ok: true, request: request.data, picked };
 }
 
-function collect(errors: Record<string, string>, prefix: string, error: z.ZodError) {
+/** Issues keyed by field path, in plain words beside the field (the field's own label and the text typed). */
+function collect(errors: Record<string, string>, prefix: string, error: z.ZodError, fields: FieldDesc[] = [], values: FieldValues = {}) {
   for (const issue of error.issues) {
     const key = [prefix, ...issue.path.map(String)].filter(Boolean).join('.');
-    errors[key] ??= issue.message;
+    const fieldKey = issue.path.length ? String(issue.path[0]) : undefined;
+    const field = fields.find((f) => f.key === fieldKey);
+    errors[key] ??= field ? plainError(issue, field, values[field.key]) : plainError(issue, undefined, 'given');
   }
 }
 

@@ -61,13 +61,16 @@ export function CatalogSearch({ slot, onPick }: { slot: PartSlot; onPick(part: P
                 key={id}
                 title={model}
                 description={describePart(kind, spec)}
-                left={(p) => <List.Icon {...p} icon="plus-circle-outline" />}
+                left={(p) => (
+                  <View aria-hidden>
+                    <List.Icon {...p} icon="plus-circle-outline" />
+                  </View>
+                )}
                 onPress={() => {
                   setQ('');
                   onPick({ id, label: model, spec });
                 }}
                 style={styles.item}
-                accessibilityLabel={`Pick ${model}`}
                 testID={`${slot}-result-${model}`}
               />
             );

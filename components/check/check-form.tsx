@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
-import { Button, SegmentedButtons, Text } from 'react-native-paper';
-import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { Button } from 'react-native-paper';
+import { spacing } from '@/constants/theme';
+import { ToggleGroup } from '@/components/ui/toggle-group';
 import { SECTION_KEYS } from './check-sections';
 import { updateCheckForm, useCheckForm } from './check-store';
 import { OptionalSection } from './optional-section';
@@ -12,17 +13,15 @@ export function CheckForm({ onCheck, busy }: { onCheck(): void; busy: boolean })
   const form = useCheckForm();
   return (
     <View style={styles.form}>
-      <View style={styles.scope}>
-        <Text variant="labelLarge">Scope</Text>
-        <SegmentedButtons
-          value={form.scope}
-          onValueChange={(scope) => updateCheckForm((s) => ({ ...s, scope: scope as typeof s.scope }))}
-          buttons={[
-            { value: 'new-system', label: 'New system', style: styles.segment, testID: 'scope-new-system' },
-            { value: 'component-replacement', label: 'Replacing a part', accessibilityLabel: 'Component replacement', style: styles.segment, testID: 'scope-component-replacement' },
-          ]}
-        />
-      </View>
+      <ToggleGroup
+        label="Scope"
+        value={form.scope}
+        onChange={(scope) => updateCheckForm((s) => ({ ...s, scope }))}
+        options={[
+          { value: 'new-system', label: 'New system', testID: 'scope-new-system' },
+          { value: 'component-replacement', label: 'Replacing a part', testID: 'scope-component-replacement' },
+        ]}
+      />
       {PART_SLOTS.map((slot) => (
         <PartPicker key={slot} slot={slot} />
       ))}
@@ -40,8 +39,6 @@ export function CheckForm({ onCheck, busy }: { onCheck(): void; busy: boolean })
 
 const styles = StyleSheet.create({
   form: { gap: spacing.lg },
-  scope: { gap: spacing.xs },
-  segment: { minHeight: TOUCH_TARGET },
   check: { minHeight: 64 },
   checkLabel: { fontSize: 20, lineHeight: 28 },
 });

@@ -22,7 +22,7 @@ export function CheckHeading({ actions }: { actions: ReactNode }) {
   return (
     <View style={styles.header}>
       <View style={styles.titles}>
-        <Text variant="headlineMedium" accessibilityRole="header">
+        <Text variant="headlineMedium" role="heading" aria-level={1}>
           Check
         </Text>
         <Text variant="bodyMedium" style={{ color: theme.colors.onSurfaceVariant }}>

@@ -1,5 +1,5 @@
 import { onlineManager } from '@tanstack/react-query';
-import { useRef, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
@@ -25,10 +25,18 @@ export function CheckScreen() {
   const scroll = useRef<ScrollView>(null);
   const resultY = useRef(0);
   const [confirmReset, setConfirmReset] = useState(false);
-
-  const showResult = () => {
-    if (!wide) setTimeout(() => scroll.current?.scrollTo({ y: resultY.current, animated: true }), 50);
+  // Set when a check answers on the phone; cleared once the page has scrolled to the verdict.
+  const scrollPending = useRef(false);
+  const scrollToVerdict = () => {
+    if (!scrollPending.current || resultY.current <= 0) return;
+    scrollPending.current = false;
+    scroll.current?.scrollTo({ y: Math.max(0, resultY.current - spacing.md), animated: true });
   };
+  // A result of the same height lays out at the same place (no new onLayout): scroll after the paint too.
+  useEffect(() => {
+    const t = setTimeout(scrollToVerdict, 80);
+    return () => clearTimeout(t);
+  }, [form.outcome]);
 
   const onCheck = () => {
     const built = buildCheckRequest(form);
@@ -43,7 +51,7 @@ export function CheckScreen() {
         const outcome = runner.onDevice(input);
         if (runner.mutation.status !== 'idle') runner.mutation.reset();
         updateCheckForm((s) => ({ ...s, errors: {}, outcome }));
-        showResult();
+        scrollPending.current = !wide;
         return;
       } catch {
         // Falls through to the mutation, which reports the problem in words.
@@ -52,8 +60,8 @@ export function CheckScreen() {
     if (Object.keys(form.errors).length) updateCheckForm((s) => ({ ...s, errors: {} }));
     runner.mutation.mutate(input, {
       onSuccess: (outcome) => {
+        scrollPending.current = !wide;
         updateCheckForm((s) => ({ ...s, outcome }));
-        showResult();
       },
     });
   };
@@ -72,7 +80,12 @@ export function CheckScreen() {
     </>
   );
   const result = form.outcome ? (
-    <View onLayout={(e) => (resultY.current = e.nativeEvent.layout.y)}>
+    <View
+      onLayout={(e) => {
+        resultY.current = e.nativeEvent.layout.y;
+        scrollToVerdict();
+      }}
+    >
       <CheckResultView outcome={form.outcome} systemRefrigerant={refrigerant} />
     </View>
   ) : null;

@@ -1,7 +1,8 @@
 import { StyleSheet, View } from 'react-native';
-import { Chip, Text } from 'react-native-paper';
-import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { Text } from 'react-native-paper';
+import { spacing } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { ToggleChip } from '@/components/ui/toggle-chip';
 import type { Option } from './field-types';
 
 interface Props {
@@ -11,13 +12,15 @@ interface Props {
   value: string;
   onChange(value: string): void;
   multi?: boolean;
+  /** Marks a fact the check needs ("required" said in words, not only a star). */
+  required?: boolean;
   error?: string;
   hint?: string;
   testID?: string;
 }
 
 /** Choices as big chips (no dropdown to aim at); tapping the chosen one again clears it. */
-export function ChoiceChips({ label, options, value, onChange, multi, error, hint, testID }: Props) {
+export function ChoiceChips({ label, options, value, onChange, multi, required, error, hint, testID }: Props) {
   const theme = useTandemTheme();
   const chosen = value === '' ? [] : value.split(';');
   const toggle = (v: string) => {
@@ -25,30 +28,19 @@ export function ChoiceChips({ label, options, value, onChange, multi, error, hin
     const next = chosen.includes(v) ? chosen.filter((c) => c !== v) : [...chosen, v];
     onChange(next.join(';'));
   };
+  const name = required ? `${label} (required)` : label;
   return (
     <View style={styles.field} testID={testID}>
-      <Text variant="labelLarge">{label}</Text>
-      <View style={styles.row}>
-        {options.map((o) => {
-          const selected = chosen.includes(o.value);
-          return (
-            <Chip
-              key={o.value}
-              selected={selected}
-              showSelectedOverlay
-              onPress={() => toggle(o.value)}
-              style={styles.chip}
-              accessibilityLabel={`${label}: ${o.label}`}
-              accessibilityState={{ selected }}
-              testID={testID ? `${testID}-${o.value}` : undefined}
-            >
-              {o.label}
-            </Chip>
-          );
-        })}
+      <Text variant="labelLarge" aria-hidden>
+        {name}
+      </Text>
+      <View role="group" aria-label={name} style={styles.row}>
+        {options.map((o) => (
+          <ToggleChip key={o.value} label={o.label} selected={chosen.includes(o.value)} onPress={() => toggle(o.value)} testID={testID ? `${testID}-${o.value}` : undefined} />
+        ))}
       </View>
       {error ? (
-        <Text variant="bodySmall" style={{ color: theme.colors.error }}>
+        <Text variant="bodySmall" style={{ color: theme.colors.error }} role="alert" testID={testID ? `${testID}-error` : undefined}>
           ⚠ {error}
         </Text>
       ) : hint ? (
@@ -61,5 +53,4 @@ export function ChoiceChips({ label, options, value, onChange, multi, error, hin
 const styles = StyleSheet.create({
   field: { gap: spacing.xs },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
-  chip: { minHeight: TOUCH_TARGET - 8, justifyContent: 'center' },
 });

@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
+import { citationWords, valueWords } from './value-label';
 
 interface BreakerRange {
   mcaAmps: number;
@@ -10,13 +11,13 @@ interface BreakerRange {
 
 const signed = (oz: number) => (oz > 0 ? `add ${oz} oz` : oz < 0 ? `remove ${-oz} oz` : 'no change');
 
+/** The regional minimum in words: "Southeast region, split heat pump: SEER2 at least 14.3 · …" (no codes or keys). */
 function regional(value: unknown): string {
   if (!value || typeof value !== 'object') return String(value);
-  // The shared efficiency module's own record: show its figures as "key value" pairs.
-  return Object.entries(value as Record<string, unknown>)
-    .filter(([, v]) => v !== undefined && v !== null && typeof v !== 'object')
-    .map(([k, v]) => `${k} ${v}`)
-    .join(' · ');
+  const m = value as Record<string, unknown>;
+  const floors = ['seer2', 'eer2', 'hspf2'].filter((k) => typeof m[k] === 'number').map((k) => `${k.toUpperCase()} at least ${m[k]}`);
+  const where = [m.regionName ? `${m.regionName} region` : '', valueWords('productClass', m.productClass)?.toLowerCase() ?? ''].filter(Boolean).join(', ');
+  return `${where}: ${floors.join(' · ')}${typeof m.basis === 'string' ? ` (${citationWords(m.basis)})` : ''}`;
 }
 
 function rated(value: unknown): string {
@@ -41,7 +42,7 @@ export function ComputedBlock({ computed }: { computed: Record<string, unknown> 
   if (!rows.length) return null;
   return (
     <View style={styles.box} testID="computed">
-      <Text variant="titleMedium" accessibilityRole="header">
+      <Text variant="titleMedium" role="heading" aria-level={2}>
         Numbers
       </Text>
       {rows.map(([label, value]) => (

@@ -2,18 +2,20 @@ import { StyleSheet, View } from 'react-native';
 import { Text } from 'react-native-paper';
 import type { Coverage } from '@/shared/rules/types';
 import { spacing } from '@/constants/theme';
+import { familyWords } from './value-label';
 
 /** What could not be checked for want of facts, so a short form never reads as a clean pass. */
 export function CoverageBlock({ coverage }: { coverage: Coverage }) {
   if (!coverage.notChecked.length) return null;
   return (
     <View style={styles.box} testID="coverage">
-      <Text variant="titleMedium" accessibilityRole="header">
-        Not checked
+      <Text variant="titleMedium" role="heading" aria-level={2}>
+        Not checked ({coverage.notChecked.length})
       </Text>
+      <Text variant="bodyMedium">Give these facts to check more:</Text>
       {coverage.notChecked.map((n) => (
         <Text key={`${n.family}-${n.missing}`} variant="bodyMedium">
-          Not checked: {n.family} — {n.missing} not given
+          • {familyWords(n.family)}: {n.missing} not given
         </Text>
       ))}
     </View>

@@ -1,3 +1,5 @@
+import { codeWords } from './value-label';
+
 /** How the check form draws one field: descriptors, not hand-written inputs per field. */
 export type FieldType = 'number' | 'text' | 'date' | 'choice' | 'multi' | 'bool';
 
@@ -14,11 +16,14 @@ export interface FieldDesc {
   options?: readonly Option[];
   /** Shown before "More nameplate fields" is opened. */
   essential?: boolean;
+  /** The check cannot run without it: marked "required" beside the label. */
+  required?: boolean;
   hint?: string;
 }
 
+/** Options from a schema's codes, shown in words (never the raw code: "above-ceiling" reads "Above a ceiling"). */
 const opts = (values: readonly (string | number)[], labels?: Record<string, string>): Option[] =>
-  values.map((v) => ({ value: String(v), label: labels?.[String(v)] ?? String(v) }));
+  values.map((v) => ({ value: String(v), label: labels?.[String(v)] ?? codeWords(String(v)) }));
 export { opts };
 
 /** Standard copper tube ODs on residential line sets (in). Sizes: ASTM B280 ACR tube (common trade sizes). */

@@ -1,36 +1,31 @@
 import { StyleSheet, View } from 'react-native';
-import { Icon, Text } from 'react-native-paper';
-import type { Finding } from '@/shared/rules/types';
+import { Text } from 'react-native-paper';
+import type { Finding, Severity } from '@/shared/rules/types';
 import { spacing } from '@/constants/theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import { FindingRow } from './finding-row';
 import { SEVERITY_GROUPS } from './verdict-words';
 
-/** Findings grouped as Blockers, Cautions and Notes (empty groups left out). */
-export function FindingGroups({ findings }: { findings: Finding[] }) {
+/** One severity's findings under its heading ("Blockers (2)"); nothing when there are none. */
+export function FindingGroup({ severity, findings }: { severity: Severity; findings: Finding[] }) {
+  const g = SEVERITY_GROUPS.find((s) => s.severity === severity)!;
+  const items = findings.filter((f) => f.severity === severity);
+  if (!items.length) return null;
   return (
-    <View style={styles.groups}>
-      {SEVERITY_GROUPS.map((g) => {
-        const items = findings.filter((f) => f.severity === g.severity);
-        if (!items.length) return null;
-        return (
-          <View key={g.severity} testID={`group-${g.severity}`}>
-            <View style={styles.head}>
-              <Icon source={g.icon} size={22} />
-              <Text variant="titleMedium" accessibilityRole="header">
-                {g.heading} ({items.length})
-              </Text>
-            </View>
-            {items.map((f, i) => (
-              <FindingRow key={`${f.ruleId}-${i}`} finding={f} />
-            ))}
-          </View>
-        );
-      })}
+    <View testID={`group-${g.severity}`}>
+      <View style={styles.head}>
+        <DecorativeIcon source={g.icon} size={22} />
+        <Text variant="titleMedium" role="heading" aria-level={2}>
+          {g.heading} ({items.length})
+        </Text>
+      </View>
+      {items.map((f, i) => (
+        <FindingRow key={`${f.ruleId}-${i}`} finding={f} />
+      ))}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  groups: { gap: spacing.lg },
   head: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, paddingVertical: spacing.xs },
 });

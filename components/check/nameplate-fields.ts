@@ -22,7 +22,8 @@ import type { PartSlot } from './part-slots';
 
 type Desc = Omit<FieldDesc, 'key'>;
 const identity = {
-  model: { label: 'Model', type: 'text' },
+  // The model first and always shown: it names the part on the record and in the findings.
+  model: { label: 'Model', type: 'text', essential: true },
   brand: { label: 'Brand', type: 'text' },
   description: { label: 'Description', type: 'text' },
 } as const satisfies Record<string, Desc>;
@@ -126,15 +127,22 @@ export const SPEC_SCHEMAS = {
 
 const LABELS: Record<PartSlot, Record<string, Desc>> = { outdoor: OUTDOOR, indoorCoil: COIL, airHandler: AIR_HANDLER, metering: METERING };
 
-/** The nameplate form's fields for a part, in the shared schema's field order. */
-export function nameplateFields(slot: PartSlot): FieldDesc[] {
-  return Object.keys(SPEC_SCHEMAS[slot].shape).map((key) => ({ key, ...LABELS[slot][key] }));
+/** True when the shared schema refuses the field left out: the check cannot run without it. */
+function isRequired(slot: PartSlot, key: string): boolean {
+  const shape = SPEC_SCHEMAS[slot].shape as Record<string, { safeParse(v: unknown): { success: boolean } }>;
+  return !shape[key].safeParse(undefined).success;
 }
 
-/** Starting values a tech edits rather than types from nothing. */
-export const NAMEPLATE_DEFAULTS: Record<PartSlot, FieldValues> = {
-  outdoor: { systemType: 'ac', refrigerant: 'R-410A', nominalTons: '3' },
-  indoorCoil: { refrigerants: 'R-410A', meteringType: 'txv', meteringRefrigerant: 'R-410A' },
-  airHandler: { kind: 'air-handler' },
-  metering: { type: 'txv', refrigerant: 'R-410A' },
-};
+/** The nameplate form's fields for a part, in the shared schema's field order; required ones are always shown. */
+export function nameplateFields(slot: PartSlot): FieldDesc[] {
+  return Object.keys(SPEC_SCHEMAS[slot].shape).map((key) => {
+    const required = isRequired(slot, key);
+    return { key, ...LABELS[slot][key], required, essential: required || LABELS[slot][key].essential };
+  });
+}
+
+/**
+ * A part typed from its nameplate starts empty: no refrigerant, size or metering preset, so nothing a
+ * hurried tech leaves untouched can pass for a fact read off the unit.
+ */
+export const NAMEPLATE_DEFAULTS: Record<PartSlot, FieldValues> = { outdoor: {}, indoorCoil: {}, airHandler: {}, metering: {} };

@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { List } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import { SECTIONS, type SectionKey } from './check-sections';
 import { setSectionField, useCheckForm } from './check-store';
 import { SpecField } from './spec-field';
@@ -17,7 +18,13 @@ export function OptionalSection({ section }: { section: SectionKey }) {
       title={def.title}
       titleNumberOfLines={2}
       description={hasError ? 'Needs attention' : filled ? `${filled} given` : 'Not given'}
-      left={(p) => <List.Icon {...p} icon={hasError ? 'alert-circle-outline' : def.icon} />}
+      left={(p) => (
+        <View aria-hidden>
+          <List.Icon {...p} icon={hasError ? 'alert-circle-outline' : def.icon} />
+        </View>
+      )}
+      // Paper draws its own chevron as an unnamed image; ours is hidden from assistive tech (the button says expanded).
+      right={({ isExpanded }) => <DecorativeIcon source={isExpanded ? 'chevron-up' : 'chevron-down'} size={24} />}
       testID={`section-${section}`}
       style={styles.header}
     >

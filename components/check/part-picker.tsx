@@ -1,8 +1,10 @@
 import { StyleSheet, View } from 'react-native';
-import { Button, Card, SegmentedButtons, Switch, Text } from 'react-native-paper';
+import { Button, Card, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { useIsWide } from '@/hooks/use-layout';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { SwitchRow } from '@/components/ui/switch-row';
+import { ToggleGroup } from '@/components/ui/toggle-group';
 import { CatalogSearch } from './catalog-search';
 import { setPart, useCheckForm } from './check-store';
 import { NameplateForm } from './nameplate-form';
@@ -18,16 +20,18 @@ export function PartPicker({ slot }: { slot: PartSlot }) {
   return (
     <Card mode="outlined" testID={`part-${slot}`}>
       <Card.Content style={styles.content}>
-        <Text variant="titleMedium" accessibilityRole="header">
+        <Text variant="titleMedium" role="heading" aria-level={2}>
           {info.title}
         </Text>
-        <SegmentedButtons
+        <ToggleGroup
+          label={`Where the ${info.title.toLowerCase().replace(' (optional)', '')} comes from`}
+          showLabel={false}
           value={part.mode}
-          onValueChange={(mode) => setPart(slot, { mode: mode as 'catalog' | 'typed' })}
-          buttons={[
-            { value: 'catalog', label: 'Catalog', icon: wide ? 'magnify' : undefined, style: styles.segment, testID: `${slot}-mode-catalog` },
+          onChange={(mode) => setPart(slot, { mode })}
+          options={[
+            { value: 'catalog', label: 'Catalog', testID: `${slot}-mode-catalog` },
             // A phone's half-width button holds only the short words.
-            { value: 'typed', label: wide ? 'Type from nameplate' : 'From nameplate', accessibilityLabel: 'Type from nameplate', icon: wide ? 'form-textbox' : undefined, style: styles.segment, testID: `${slot}-mode-typed` },
+            { value: 'typed', label: wide ? 'Type from nameplate' : 'From nameplate', testID: `${slot}-mode-typed` },
           ]}
         />
         {part.mode === 'catalog' && part.picked ? (
@@ -47,13 +51,12 @@ export function PartPicker({ slot }: { slot: PartSlot }) {
             Leave out the {info.title.toLowerCase().replace(' (optional)', '')}
           </Button>
         ) : null}
-        {error ? <Text style={{ color: theme.colors.error }}>⚠ {error}</Text> : null}
-        <View style={styles.kept}>
-          <Text variant="bodyLarge" style={styles.flex} nativeID={`${slot}-kept-label`}>
-            Kept from the old system
+        {error ? (
+          <Text style={{ color: theme.colors.error }} role="alert">
+            ⚠ {error}
           </Text>
-          <Switch value={part.kept} onValueChange={(kept) => setPart(slot, { kept })} accessibilityLabelledBy={`${slot}-kept-label`} accessibilityLabel={`${info.title} kept from the old system`} testID={`${slot}-kept`} />
-        </View>
+        ) : null}
+        <SwitchRow label="Kept from the old system" value={part.kept} onChange={(kept) => setPart(slot, { kept })} testID={`${slot}-kept`} />
       </Card.Content>
     </Card>
   );
@@ -61,9 +64,7 @@ export function PartPicker({ slot }: { slot: PartSlot }) {
 
 const styles = StyleSheet.create({
   content: { gap: spacing.md },
-  segment: { minHeight: TOUCH_TARGET },
   picked: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
   flex: { flex: 1 },
   button: { minHeight: TOUCH_TARGET },
-  kept: { flexDirection: 'row', alignItems: 'center', minHeight: TOUCH_TARGET, gap: spacing.sm },
 });

@@ -21,6 +21,7 @@ export function SpecField({ field, value, onChange, error, testID }: Props) {
         label={field.label}
         options={field.type === 'bool' ? YES_NO : (field.options ?? [])}
         multi={field.type === 'multi'}
+        required={field.required}
         value={value}
         onChange={onChange}
         error={error}
@@ -31,7 +32,7 @@ export function SpecField({ field, value, onChange, error, testID }: Props) {
   }
   return (
     <FormField
-      label={field.label}
+      label={field.required ? `${field.label} (required)` : field.label}
       value={value}
       onChangeText={onChange}
       error={error}

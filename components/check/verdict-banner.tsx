@@ -1,8 +1,10 @@
 import { StyleSheet, View } from 'react-native';
-import { Icon, Text } from 'react-native-paper';
+import { Text } from 'react-native-paper';
+import { isMissingFacts } from '@/shared/rules/define-rule';
 import type { CheckResult } from '@/shared/rules/types';
 import { spacing } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import { verdictWords } from './verdict-words';
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
@@ -13,16 +15,19 @@ export function VerdictBanner({ result }: { result: CheckResult }) {
   const { word, icon, tone } = verdictWords(result);
   const bg = { blocker: theme.status.blockerContainer, caution: theme.status.cautionContainer, info: theme.status.infoContainer, ok: theme.status.okContainer }[tone];
   const fg = { blocker: theme.status.blocker, caution: theme.status.caution, info: theme.status.info, ok: theme.status.ok }[tone];
-  const count = (s: string) => result.findings.filter((f) => f.severity === s).length;
+  // "Facts not given" notes are counted as not checked, as the result lists them.
+  const count = (s: string) => result.findings.filter((f) => f.severity === s && !isMissingFacts(f)).length;
+  const notChecked = result.coverage.notChecked.length;
   return (
     <View style={[styles.banner, { backgroundColor: bg, borderColor: fg }]} accessibilityRole="alert" testID="verdict-banner">
-      <Icon source={icon} size={40} color={fg} />
+      <DecorativeIcon source={icon} size={40} color={fg} />
       <View style={styles.words}>
         <Text variant="headlineSmall" style={{ color: theme.colors.onSurface }} testID="verdict-word">
           {word}
         </Text>
         <Text variant="bodyMedium" style={{ color: theme.colors.onSurface }}>
           {plural(count('blocker'), 'blocker')} · {plural(count('caution'), 'caution')} · {plural(count('info'), 'note')}
+          {notChecked ? ` · ${notChecked} not checked` : ''}
         </Text>
       </View>
     </View>

@@ -21,3 +21,13 @@ export const BASIS_WORDS: Record<Finding['basis']['kind'], string> = {
   regulation: 'Regulation',
   'common-practice': 'Common practice',
 };
+
+/**
+ * A finding's title as shown: "Not allowed" belongs to regulation blockers only (the verdict says
+ * "Not allowed" for those); any other finding reads as an ordinary problem under "Not compatible".
+ */
+export function findingTitle(finding: Pick<Finding, 'ruleId' | 'title'>): string {
+  if (finding.ruleId.startsWith('regulation.')) return finding.title;
+  const rest = finding.title.replace(/^Not allowed:\s*/i, '');
+  return rest === finding.title ? rest : rest.charAt(0).toUpperCase() + rest.slice(1);
+}

@@ -1,9 +1,10 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { Button, Card, Chip, Menu, Text } from 'react-native-paper';
+import { Button, Card, Menu, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import type { HeaderProblem } from '@/hooks/use-imports';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { ToggleChip } from '@/components/ui/toggle-chip';
 import { fieldLabel } from './import-labels';
 
 interface Props {
@@ -42,14 +43,10 @@ const CHIP_LIMIT = 8;
 
 function FieldChips({ column, value, fields, onChange }: { column: string; value?: string; fields: string[]; onChange(field?: string): void }) {
   return (
-    <View style={styles.chips}>
-      <Chip selected={!value} showSelectedOverlay onPress={() => onChange(undefined)} style={styles.chip} testID={`map-${column}-none`}>
-        Not used
-      </Chip>
+    <View style={styles.chips} role="group" aria-label={`Column “${column}”`}>
+      <ToggleChip label="Not used" selected={!value} onPress={() => onChange(undefined)} testID={`map-${column}-none`} />
       {fields.map((f) => (
-        <Chip key={f} selected={value === f} showSelectedOverlay onPress={() => onChange(f)} style={styles.chip} testID={`map-${column}-${f}`}>
-          {fieldLabel(f)}
-        </Chip>
+        <ToggleChip key={f} label={fieldLabel(f)} selected={value === f} onPress={() => onChange(f)} testID={`map-${column}-${f}`} />
       ))}
     </View>
   );
@@ -70,7 +67,7 @@ export function ColumnMappingForm({ problem, distributor, busy, onRetry }: Props
   return (
     <Card mode="outlined" testID="column-mapping">
       <Card.Content style={styles.gap}>
-        <Text variant="titleLarge" accessibilityRole="header">
+        <Text variant="titleLarge" role="heading" aria-level={2}>
           Match the columns
         </Text>
         <Text variant="bodyMedium">
@@ -115,6 +112,5 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', gap: spacing.sm, paddingVertical: spacing.xs, borderBottomWidth: StyleSheet.hairlineWidth },
   column: { flex: 1, minWidth: 120 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.xs },
-  chip: { minHeight: TOUCH_TARGET - 8, justifyContent: 'center' },
   touch: { minHeight: TOUCH_TARGET },
 });

@@ -1,8 +1,9 @@
 import { StyleSheet, View } from 'react-native';
-import { Button, DataTable, Icon, Text } from 'react-native-paper';
+import { Button, DataTable, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import type { ImportView } from '@/hooks/use-imports';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import { dateTime, IMPORT_KIND_LABELS, STATUS_ICONS, STATUS_LABELS } from './import-labels';
 
 interface Props {
@@ -18,7 +19,7 @@ function Status({ entry }: { entry: ImportView }) {
   const theme = useTandemTheme();
   return (
     <View style={styles.status}>
-      <Icon source={STATUS_ICONS[entry.status]} size={18} color={theme.colors.onSurface} />
+      <DecorativeIcon source={STATUS_ICONS[entry.status]} size={18} color={theme.colors.onSurface} />
       <Text variant="labelLarge">{STATUS_LABELS[entry.status]}</Text>
     </View>
   );

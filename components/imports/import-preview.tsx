@@ -23,7 +23,7 @@ export function ImportPreview({ preview, onCommitted, onDiscard }: Props) {
   return (
     <Card mode="outlined" testID="import-preview">
       <Card.Content style={styles.gap}>
-        <Text variant="titleLarge" accessibilityRole="header">
+        <Text variant="titleLarge" role="heading" aria-level={2}>
           {committed ? 'Committed' : 'Preview'}: {preview.fileName}
         </Text>
         <Text variant="bodyMedium">{what}</Text>

@@ -1,9 +1,10 @@
 import { StyleSheet, View } from 'react-native';
-import { DataTable, Icon, Text } from 'react-native-paper';
+import { DataTable, Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
 import type { ImportRowError } from '@/hooks/use-imports';
 import { useIsWide } from '@/hooks/use-layout';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 
 /** The rows the importer refused: a table on a wide screen, one block per problem on a phone. */
 export function RejectedRows({ errors, rejected }: { errors: ImportRowError[]; rejected: number }) {
@@ -12,8 +13,8 @@ export function RejectedRows({ errors, rejected }: { errors: ImportRowError[]; r
   if (errors.length === 0) return <Text variant="bodyMedium">Every row is valid.</Text>;
   const heading = (
     <View style={styles.heading}>
-      <Icon source="alert-octagon-outline" size={22} color={theme.status.blocker} />
-      <Text variant="titleMedium" accessibilityRole="header">
+      <DecorativeIcon source="alert-octagon-outline" size={22} color={theme.status.blocker} />
+      <Text variant="titleMedium" role="heading" aria-level={3}>
         Rejected rows ({rejected})
       </Text>
     </View>

@@ -1,9 +1,13 @@
+import { MIN_TARGET_PX } from '@/constants/theme';
 import { Button, Text } from 'react-native-paper';
 import { errorText } from '@/hooks/error-text';
 import { useRevertImport, type ImportView } from '@/hooks/use-imports';
 import { AppDialog } from '@/components/ui/app-dialog';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { IMPORT_KIND_LABELS } from './import-labels';
+
+/** Dialog buttons reach the shared 48 px minimum. */
+const TARGET = { minHeight: MIN_TARGET_PX };
 
 /** Asks before undoing an import: what it inserted goes, what it updated comes back as it was. */
 export function RevertDialog({ target, onDismiss }: { target: ImportView | null; onDismiss(): void }) {
@@ -20,7 +24,7 @@ export function RevertDialog({ target, onDismiss }: { target: ImportView | null;
       testID="revert-dialog"
       actions={
         <>
-          <Button onPress={close} testID="revert-cancel">
+          <Button contentStyle={TARGET} onPress={close} testID="revert-cancel">
             Keep it
           </Button>
           <Button

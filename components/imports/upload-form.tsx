@@ -1,8 +1,9 @@
 import { StyleSheet, View } from 'react-native';
-import { Button, Chip, Text } from 'react-native-paper';
+import { Button, Text } from 'react-native-paper';
 import { IMPORT_KINDS, type ImportKind } from '@/shared/schemas/equipment';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { FormField } from '@/components/ui/form-field';
+import { ToggleChip } from '@/components/ui/toggle-chip';
 import { IMPORT_KIND_LABELS } from './import-labels';
 import type { PickedFile } from './pick-csv';
 
@@ -27,12 +28,12 @@ export function UploadForm({ value, knownDistributors, busy, onChange, onPick, o
   const ready = value.picked !== null && (!needsDistributor || value.distributor.trim() !== '');
   return (
     <View style={styles.gap} testID="upload-form">
-      <Text variant="labelLarge">What the file holds</Text>
-      <View style={styles.chips}>
+      <Text variant="labelLarge" aria-hidden>
+        What the file holds
+      </Text>
+      <View style={styles.chips} role="group" aria-label="What the file holds">
         {IMPORT_KINDS.map((k) => (
-          <Chip key={k} selected={value.kind === k} showSelectedOverlay onPress={() => onChange({ ...value, kind: k })} style={styles.chip} testID={`import-kind-${k}`}>
-            {IMPORT_KIND_LABELS[k]}
-          </Chip>
+          <ToggleChip key={k} label={IMPORT_KIND_LABELS[k]} selected={value.kind === k} onPress={() => onChange({ ...value, kind: k })} testID={`import-kind-${k}`} />
         ))}
       </View>
       {needsDistributor ? (
@@ -45,11 +46,9 @@ export function UploadForm({ value, knownDistributors, busy, onChange, onPick, o
             testID="import-distributor"
           />
           {knownDistributors.length > 0 ? (
-            <View style={styles.chips}>
+            <View style={styles.chips} role="group" aria-label="Distributors seen before">
               {knownDistributors.map((d) => (
-                <Chip key={d} icon="store-outline" selected={value.distributor === d} onPress={() => onChange({ ...value, distributor: d })} style={styles.chip} testID={`known-distributor-${d}`}>
-                  {d}
-                </Chip>
+                <ToggleChip key={d} icon="store-outline" label={d} selected={value.distributor === d} onPress={() => onChange({ ...value, distributor: d })} testID={`known-distributor-${d}`} />
               ))}
             </View>
           ) : null}
@@ -79,7 +78,6 @@ function formatSize(bytes: number): string {
 const styles = StyleSheet.create({
   gap: { gap: spacing.sm },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
-  chip: { minHeight: TOUCH_TARGET - 8, justifyContent: 'center' },
   fileRow: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', gap: spacing.md },
   fileName: { flex: 1, minWidth: 140 },
   touch: { minHeight: TOUCH_TARGET },

@@ -6,6 +6,7 @@ import { navItemsFor } from '@/constants/navigation';
 import { spacing } from '@/constants/theme';
 import { useCurrentUser } from '@/hooks/use-session';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { ROLE_LABELS } from '@/components/account/role-labels';
 import { NavButton } from './nav-button';
 
 function useNav() {
@@ -24,7 +25,9 @@ export function BottomTabs() {
   const { items, segment, go } = useNav();
   return (
     <View
-      accessibilityRole="tablist"
+      // Plain links in a navigation landmark: a tablist would need tabs and tab panels (axe aria-required-children).
+      role="navigation"
+      aria-label="Sections"
       testID="bottom-tabs"
       style={[styles.tabs, { backgroundColor: theme.colors.surface, borderTopColor: theme.colors.outlineVariant, paddingBottom: insets.bottom }]}
     >
@@ -40,7 +43,7 @@ export function SideRail() {
   const theme = useTandemTheme();
   const { items, segment, go, user } = useNav();
   return (
-    <View testID="side-rail" style={[styles.rail, { backgroundColor: theme.colors.surface, borderRightColor: theme.colors.outlineVariant }]}>
+    <View testID="side-rail" role="navigation" aria-label="Sections" style={[styles.rail, { backgroundColor: theme.colors.surface, borderRightColor: theme.colors.outlineVariant }]}>
       <Text variant="headlineSmall" style={[styles.brand, { color: theme.colors.primary }]}>
         Tandem
       </Text>
@@ -52,7 +55,7 @@ export function SideRail() {
       <View style={styles.railFooter}>
         <Text variant="labelMedium">{user.name}</Text>
         <Text variant="bodySmall" style={{ color: theme.colors.onSurfaceVariant }}>
-          {user.role}
+          {ROLE_LABELS[user.role]}
         </Text>
       </View>
     </View>

@@ -1,6 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import { Icon, Text } from 'react-native-paper';
-import { TOUCH_TARGET } from '@/constants/theme';
+import { Text } from 'react-native-paper';
+import { MIN_TARGET_PX } from '@/constants/theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import type { NavItem } from '@/constants/navigation';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
 
@@ -19,14 +20,13 @@ export function NavButton({ item, active, onPress, layout }: Props) {
   return (
     <Pressable
       accessibilityRole="link"
-      accessibilityState={{ selected: active }}
-      accessibilityLabel={item.label}
+      aria-current={active ? 'page' : undefined}
       testID={`nav-${item.segment}`}
       onPress={onPress}
       style={[styles.base, layout === 'rail' ? styles.rail : styles.tab]}
     >
       <View style={[styles.pill, layout === 'rail' && styles.railPill, active && { backgroundColor: theme.colors.primaryContainer }]}>
-        <Icon source={item.icon} size={24} color={color} />
+        <DecorativeIcon source={item.icon} size={24} color={color} />
         {layout === 'rail' ? (
           <Text variant="labelLarge" style={{ color, fontFamily: active ? 'Inter-Bold' : 'Inter-Medium' }}>
             {item.label}
@@ -43,7 +43,7 @@ export function NavButton({ item, active, onPress, layout }: Props) {
 }
 
 const styles = StyleSheet.create({
-  base: { minHeight: TOUCH_TARGET, justifyContent: 'center' },
+  base: { minHeight: MIN_TARGET_PX, minWidth: MIN_TARGET_PX, justifyContent: 'center' },
   tab: { flex: 1, alignItems: 'center', paddingVertical: 6, gap: 2 },
   rail: { alignSelf: 'stretch' },
   pill: { paddingHorizontal: 16, paddingVertical: 4, borderRadius: 16, alignItems: 'center' },

@@ -74,7 +74,7 @@ export function RulesPanel() {
           <Button mode="text" icon="restore" onPress={resetDefaults} contentStyle={styles.button}>
             Put the default thresholds back
           </Button>
-          <Text variant="titleMedium" accessibilityRole="header">
+          <Text variant="titleMedium" role="heading" aria-level={2}>
             Rebate tier
           </Text>
           <Text variant="bodySmall">The tier your shop sells to; leave every box empty to check none.</Text>
@@ -92,7 +92,7 @@ export function RulesPanel() {
               />
             ))}
           </View>
-          <Text variant="titleMedium" accessibilityRole="header">
+          <Text variant="titleMedium" role="heading" aria-level={2}>
             Refrigerant transition rules
           </Text>
           <Text variant="bodySmall">

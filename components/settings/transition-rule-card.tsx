@@ -3,6 +3,7 @@ import { Card, Text } from 'react-native-paper';
 import type { TransitionRule } from '@/shared/rules/types';
 import { spacing } from '@/constants/theme';
 import { FormField } from '@/components/ui/form-field';
+import { citationWords } from '@/components/check/value-label';
 
 interface Props {
   rule: TransitionRule;
@@ -19,12 +20,11 @@ export function TransitionRuleCard({ rule, index, errors, onChange }: Props) {
   return (
     <Card mode="outlined" testID={`transition-rule-${rule.id}`}>
       <Card.Content style={styles.content}>
-        <Text variant="titleMedium">
+        <Text variant="titleMedium" role="heading" aria-level={3}>
           {rule.severity === 'blocker' ? 'Not allowed' : 'Caution'}: {rule.refrigerants.join(', ')} in {SCOPE_WORDS[rule.scope]}
         </Text>
-        <Text variant="bodySmall">
-          {rule.id} · {rule.citation}
-        </Text>
+        {/* The rule's id stays in the data and the test ids; the office reads the regulation it follows. */}
+        <Text variant="bodySmall">{citationWords(rule.citation)}</Text>
         <View style={styles.dates}>
           <FormField style={styles.date} label="Installs from (YYYY-MM-DD)" value={rule.installFrom} onChangeText={(installFrom) => onChange({ installFrom })} error={err('installFrom')} testID={`rule-${rule.id}-installFrom`} />
           <FormField

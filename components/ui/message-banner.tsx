@@ -1,7 +1,8 @@
 import { StyleSheet, View } from 'react-native';
-import { Icon, Text } from 'react-native-paper';
+import { Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 
 type Tone = 'error' | 'success' | 'info';
 
@@ -17,7 +18,7 @@ export function MessageBanner({ tone, children, testID }: { tone: Tone; children
   }[tone];
   return (
     <View accessibilityRole="alert" testID={testID} style={[styles.banner, { backgroundColor: palette.bg }]}>
-      <Icon source={ICONS[tone]} size={22} color={palette.fg} />
+      <DecorativeIcon source={ICONS[tone]} size={22} color={palette.fg} />
       <Text variant="bodyMedium" style={[styles.text, { color: palette.fg }]}>
         {children}
       </Text>

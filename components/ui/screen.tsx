@@ -21,7 +21,7 @@ export function Screen({ title, subtitle, actions, children, scroll = true }: Pr
     <View style={styles.inner}>
       <View style={styles.header}>
         <View style={styles.titles}>
-          <Text variant="headlineMedium" accessibilityRole="header">
+          <Text variant="headlineMedium" role="heading" aria-level={1}>
             {title}
           </Text>
           {subtitle ? (

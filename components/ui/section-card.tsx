@@ -8,7 +8,7 @@ export function SectionCard({ title, children, testID }: { title: string; childr
   return (
     <Card mode="outlined" testID={testID}>
       <Card.Content style={styles.content}>
-        <Text variant="titleLarge" accessibilityRole="header">
+        <Text variant="titleLarge" role="heading" aria-level={2}>
           {title}
         </Text>
         {children}

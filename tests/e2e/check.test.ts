@@ -62,9 +62,11 @@ describe.each(['phone', 'wide'] as ViewportName[])('the driveway check at the %s
     await page.getByTestId('offline-note').scrollIntoViewIfNeeded();
     await screenshot(page, `check-offline-${viewport}`);
 
-    // The nameplate form for a part in no catalog: fields with units, defaults filled in.
+    // The nameplate form for a part in no catalog starts empty (no size or refrigerant preset), the model first.
     await page.getByTestId('outdoor-mode-typed').click();
-    await expect.poll(() => page.getByTestId('outdoor-field-nominalTons').inputValue()).toBe('3');
+    await expect.poll(() => page.getByTestId('outdoor-field-model').isVisible()).toBe(true);
+    expect(await page.getByTestId('outdoor-field-nominalTons').inputValue()).toBe('');
+    expect(await page.getByTestId('outdoor-field-refrigerant').locator('[aria-pressed="true"]').count()).toBe(0);
     await page.getByTestId('part-outdoor').scrollIntoViewIfNeeded();
     await screenshot(page, `check-nameplate-${viewport}`);
     await page.context().close();

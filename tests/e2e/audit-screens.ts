@@ -1,0 +1,180 @@
+import type { Page } from 'playwright-core';
+import { expect } from 'vitest';
+import { account, signIn } from './browser';
+import { adminToken, importCsv } from './api-setup';
+
+/**
+ * Every screen the accessibility and target-size audits visit, in one list: add a screen here
+ * (Readings, Jobs…) and both audits cover it at both viewports.
+ * Models here are invented and unique to the audits.
+ */
+
+export interface AuditScreen {
+  name: string;
+  /** Who is signed in; null for the signed-out screens. */
+  role: 'tech' | 'estimator' | 'admin' | null;
+  /** Brings the page to the state to audit (the page is already signed in as `role`). */
+  open(page: Page): Promise<void>;
+}
+
+const OUTDOOR = 'AUD-HP36-410';
+const COIL = 'AUD-COIL-R22';
+// A heat pump on R-410A and a coil whose factory TXV is for R-22: the metering device does not fit
+// (common practice: a metering device rated for the system's refrigerant), which gives a blocker,
+// and the short form leaves cautions and notes (facts not given).
+const OUTDOOR_CSV = [
+  'model,system_type,refrigerant,nominal_tons,metering_required,mca_amps,mocp_amps,seer2,eer2,hspf2',
+  `${OUTDOOR},heat-pump,R-410A,3,txv,21.2,35,14.3,11.2,7.5`,
+].join('\n');
+const COIL_CSV = ['model,min_tons,max_tons,refrigerants,metering_type,metering_refrigerant,metering_bidirectional', `${COIL},2.5,3.5,R-22,txv,R-22,yes`].join('\n');
+const PREVIEW_CSV = ['model,system_type,refrigerant,nominal_tons', 'AUD-PREVIEW-1,ac,R-454B,2', 'AUD-PREVIEW-2,ac,R-454B,not-a-number'].join('\n');
+
+/** Puts the audits' parts in the catalog (once per run). */
+export async function seedAuditData(): Promise<void> {
+  const token = await adminToken();
+  await importCsv(token, 'outdoor-units', OUTDOOR_CSV, 'audit-outdoor.csv');
+  await importCsv(token, 'indoor-coils', COIL_CSV, 'audit-coils.csv');
+}
+
+async function visible(page: Page, testId: string) {
+  await expect.poll(() => page.getByTestId(testId).first().isVisible(), { timeout: 15_000 }).toBe(true);
+}
+
+async function pick(page: Page, slot: string, model: string) {
+  await page.getByTestId(`${slot}-search`).fill(model);
+  await page.getByTestId(`${slot}-result-${model}`).click({ timeout: 15_000 });
+  await expect.poll(() => page.getByTestId(`${slot}-picked`).textContent()).toContain(model);
+}
+
+export const AUDIT_SCREENS: AuditScreen[] = [
+  {
+    name: 'sign-in',
+    role: null,
+    open: async (page) => {
+      await page.goto('/sign-in');
+      await visible(page, 'sign-in-email');
+    },
+  },
+  {
+    name: 'check-empty',
+    role: 'tech',
+    open: async (page) => {
+      await page.goto('/check');
+      await visible(page, 'run-check');
+    },
+  },
+  {
+    name: 'check-result',
+    role: 'tech',
+    open: async (page) => {
+      await page.goto('/check');
+      await pick(page, 'outdoor', OUTDOOR);
+      await pick(page, 'indoorCoil', COIL);
+      await page.getByTestId('indoorCoil-kept').click();
+      await page.getByTestId('scope-component-replacement').click();
+      await page.getByTestId('run-check').click();
+      await visible(page, 'group-blocker');
+      await visible(page, 'group-info');
+      // The Safety block opened, and one finding opened to its details.
+      const safetyToggle = page.getByTestId('safety-toggle');
+      if (await safetyToggle.count()) {
+        if ((await safetyToggle.getAttribute('aria-expanded')) !== 'true') await safetyToggle.click();
+      }
+      await page.getByTestId('finding-refrigerant.metering-device').click();
+      await visible(page, 'finding-detail-refrigerant.metering-device');
+    },
+  },
+  {
+    name: 'check-nameplate',
+    role: 'tech',
+    open: async (page) => {
+      await page.goto('/check');
+      await page.getByTestId('outdoor-mode-typed').click();
+      await visible(page, 'outdoor-field-model');
+    },
+  },
+  {
+    name: 'catalog-list',
+    role: 'estimator',
+    open: async (page) => {
+      await page.goto('/catalog');
+      await page.getByTestId('catalog-search').fill('AUD-');
+      await visible(page, `catalog-item-${OUTDOOR}`);
+    },
+  },
+  {
+    name: 'catalog-detail',
+    role: 'estimator',
+    open: async (page) => {
+      await page.goto('/catalog');
+      await page.getByTestId('catalog-search').fill(OUTDOOR);
+      await visible(page, `catalog-item-${OUTDOOR}`);
+      await page.getByTestId(`catalog-item-${OUTDOOR}`).first().click();
+      await visible(page, 'catalog-specs');
+    },
+  },
+  {
+    name: 'account',
+    role: 'tech',
+    open: async (page) => {
+      await page.goto('/account');
+      await visible(page, 'account-role');
+    },
+  },
+  {
+    name: 'admin-users',
+    role: 'admin',
+    open: async (page) => {
+      await page.goto('/admin/users');
+      await visible(page, `user-row-${account('tech').email}`);
+    },
+  },
+  {
+    name: 'admin-users-add-dialog',
+    role: 'admin',
+    open: async (page) => {
+      await page.goto('/admin/users');
+      await visible(page, 'add-user');
+      await page.getByTestId('add-user').click();
+      await visible(page, 'add-user-dialog');
+    },
+  },
+  {
+    name: 'admin-imports-preview',
+    role: 'admin',
+    open: async (page) => {
+      await page.goto('/admin/imports');
+      await visible(page, 'import-pick');
+      await page.getByTestId('import-kind-outdoor-units').click();
+      const chooser = page.waitForEvent('filechooser');
+      await page.getByTestId('import-pick').click();
+      await (await chooser).setFiles({ name: 'audit-preview.csv', mimeType: 'text/csv', buffer: Buffer.from(PREVIEW_CSV, 'utf8') });
+      await expect.poll(() => page.getByTestId('import-file-name').textContent(), { timeout: 15_000 }).toContain('audit-preview.csv');
+      await page.getByTestId('import-upload').click();
+      await visible(page, 'import-preview');
+    },
+  },
+  {
+    name: 'admin-rules',
+    role: 'admin',
+    open: async (page) => {
+      await page.goto('/admin/rules');
+      await visible(page, 'save-rules');
+      await visible(page, 'setting-cfmPerTonMin');
+    },
+  },
+  {
+    name: 'not-found',
+    role: 'tech',
+    open: async (page) => {
+      await page.goto('/no-such-place-here');
+      await page.waitForLoadState('networkidle');
+      await page.waitForTimeout(500);
+    },
+  },
+];
+
+/** Signs in (or not) for a screen; returns nothing, the page keeps its session in storage. */
+export async function signInFor(page: Page, role: AuditScreen['role']): Promise<void> {
+  if (role) await signIn(page, account(role));
+}
