@@ -1,38 +1,21 @@
 import Papa from 'papaparse';
 import { AppError } from '../lib/errors';
+import { sniffText } from './content-sniff';
 
 export const MAX_FILE_BYTES = 20 * 1024 * 1024;
 export const MAX_ROWS = 200_000;
 const EXPECTED = 'Expected a CSV text file: a header row, then one row per item, separated by commas.';
 
-/** Turns an upload into text, refusing what is not a CSV: empty (422), too large (413), binary (415). */
+/** Turns an upload into text, refusing what is not a CSV: empty (422), too large (413), binary or undecodable (415). */
 export function decodeCsv(buffer: Buffer): string {
   if (buffer.length > MAX_FILE_BYTES) {
     throw new AppError('too-large', `The file is larger than 20 MB. Split it into smaller files. ${EXPECTED}`, 413);
   }
   if (buffer.length === 0) throw new AppError('empty-file', `The file is empty. ${EXPECTED}`, 422);
-  if (looksBinary(buffer)) {
-    throw new AppError('not-csv', `The file is not text (it holds binary data, e.g. a spreadsheet or an image). Save it as CSV. ${EXPECTED}`, 415);
-  }
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(buffer);
-  } catch {
-    // Older spreadsheet exports write Windows-1252; latin1 reads its letters near enough for models and prices.
-    text = buffer.toString('latin1');
-  }
+  let text = sniffText(buffer);
   if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
   if (text.trim() === '') throw new AppError('empty-file', `The file holds no rows. ${EXPECTED}`, 422);
   return text;
-}
-
-/** NUL bytes anywhere, or many control characters in the first 8 KB, mean this is no text file. */
-function looksBinary(buffer: Buffer): boolean {
-  if (buffer.includes(0)) return true;
-  const head = buffer.subarray(0, 8192);
-  let control = 0;
-  for (const byte of head) if (byte < 9 || (byte > 13 && byte < 32)) control++;
-  return control > head.length * 0.05;
 }
 
 /** Comma unless the header line has none and uses tabs or semicolons. */
