@@ -69,7 +69,11 @@ function decode(buffer: Buffer): string {
   }
 }
 
-const windows1252 = new TextDecoder('windows-1252');
+/** Windows-1252's letters at 0x80–0x9F (WHATWG Encoding index); Node's small ICU decodes that range as Latin-1 controls. */
+const CP1252_HIGH = '\u20ac\u0081\u201a\u0192\u201e\u2026\u2020\u2021\u02c6\u2030\u0160\u2039\u0152\u008d\u017d\u008f\u0090\u2018\u2019\u201c\u201d\u2022\u2013\u2014\u02dc\u2122\u0161\u203a\u0153\u009d\u017e\u0178';
+const windows1252 = {
+  decode: (bytes: Buffer) => bytes.toString('latin1').replace(/[\u0080-\u009f]/g, (c) => CP1252_HIGH[c.charCodeAt(0) - 0x80]),
+};
 
 function strict(encoding: string, bytes: Buffer): string {
   try {
