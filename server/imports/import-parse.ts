@@ -62,7 +62,7 @@ const keyField = (kind: ImportKind) => (kind === 'rated-combinations' ? 'outdoor
 /**
  * Reads and validates a whole upload: header matched to fields (with the mapping), each row through
  * the kind's zod schema, duplicates inside the file reported against the row they repeat. A price
- * file is read twice in memory: first the whole price column decides the decimal mark, then rows.
+ * file's whole price column decides its decimal mark before any row is read.
  */
 export function parseImportFile(
   buffer: Buffer,
@@ -71,6 +71,34 @@ export function parseImportFile(
   today?: string,
   decimal: DecimalChoice = {},
 ): ParsedFile {
+  const steps = parseSteps(buffer, kind, mapping, today, decimal);
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+  }
+}
+
+/** Rows validated between two yields to the event loop: a few milliseconds of work, so checks are not held up. */
+const ROWS_PER_SLICE = 250;
+const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
+
+/** parseImportFile in slices of ROWS_PER_SLICE rows that yield to the event loop in between (the request path). */
+export async function parseImportFileInSlices(
+  buffer: Buffer,
+  kind: ImportKind,
+  mapping: Record<string, string> = {},
+  today?: string,
+  decimal: DecimalChoice = {},
+): Promise<ParsedFile> {
+  const steps = parseSteps(buffer, kind, mapping, today, decimal);
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+    await nextTurn();
+  }
+}
+
+function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, string>, today: string | undefined, decimal: DecimalChoice): Generator<void, ParsedFile> {
   const text = decodeCsv(buffer);
   const rows: ParsedRow[] = [];
   const errors: ImportRowError[] = [];
@@ -134,6 +162,7 @@ export function parseImportFile(
 
   const pending: { cells: string[]; line: number }[] = [];
   let priceColumn = -1;
+  // Rows are read whole first (a price file's decimal mark comes from its whole column), then validated in slices.
   const { rows: rowCount } = readCsv(text, {
     header(cells) {
       headers = cells.map((c) => c.trim());
@@ -143,10 +172,10 @@ export function parseImportFile(
       priceColumn = kind === 'prices' ? header.columns.indexOf('price') : -1;
     },
     row(cells, line) {
-      if (priceColumn >= 0) pending.push({ cells, line });
-      else validate(cells, line);
+      pending.push({ cells, line });
     },
   });
+  yield;
   if (!header) throw new AppError('empty-file', 'The file holds no header row.', 422);
   if (rowCount === 0) throw new AppError('empty-file', 'The file has a header but no rows.', 422, { foundColumns: header.foundColumns });
 
@@ -158,7 +187,10 @@ export function parseImportFile(
     else if (detected.convention) [decimalConvention, decimalSource] = [detected.convention, 'file'];
     else if (decimal.saved) [decimalConvention, decimalSource] = [decimal.saved, 'saved'];
     schema = asRowSchema(priceRowSchema(today, decimalConvention));
-    for (const p of pending) validate(p.cells, p.line);
+  }
+  for (let i = 0; i < pending.length; i++) {
+    validate(pending[i].cells, pending[i].line);
+    if (i % ROWS_PER_SLICE === ROWS_PER_SLICE - 1) yield;
   }
   return { kind, rows, errors, errorsTotal, decimalConvention, decimalSource, rowCount, rejected, presentFields, header };
 }

@@ -8,7 +8,7 @@ import { AppError, conflict, notFound } from '../lib/errors';
 import { User } from '../users/user.entity';
 import { ColumnMapping } from './column-mapping.entity';
 import { applyCatalogPlan, applyPricePlan } from './import-apply';
-import { parseImportFile, type ParsedFile, type ParsedRow } from './import-parse';
+import { parseImportFileInSlices, type ParsedFile, type ParsedRow } from './import-parse';
 import { planCatalog, planPrices, type ImportPlan } from './import-plan';
 import { revertImportRows } from './import-revert';
 import { toImportDetail, toImportView, type ImportDetail, type ImportView } from './import-view';
@@ -46,7 +46,7 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
   const known = distributorName ? await ctx.dataSource.getRepository(Distributor).findOneBy({ name: distributorName }) : null;
   const saved = known ? await ctx.dataSource.manager.findOneBy(ColumnMapping, { distributorId: known.id, kind: input.kind }) : null;
   const mapping = { ...(saved?.mapping ?? {}), ...(input.mapping ?? {}) };
-  const parsed = parseImportFile(input.buffer, input.kind, mapping, input.today, { chosen: input.decimalConvention, saved: saved?.decimalConvention });
+  const parsed = await parseImportFileInSlices(input.buffer, input.kind, mapping, input.today, { chosen: input.decimalConvention, saved: saved?.decimalConvention });
 
   if (!input.dryRun && parsed.rejected > 0) {
     throw new AppError('rows-rejected', `${parsed.rejected} of ${parsed.rowCount} rows are not valid; nothing was imported. Fix them, or upload as a preview and commit the valid rows.`, 422, {
