@@ -8,7 +8,8 @@ import { decodeCsv, readCsv } from './csv-file';
 import { fieldsOf, matchHeaders, toSnake, type HeaderMatch } from './header-map';
 import type { ImportRowError } from './import.entity';
 import { detectConvention } from './price-number';
-import { priceRowSchema } from './price-row';
+import { priceRowSchema, quickPriceRow, type PriceRow } from './price-row';
+import { todayIso } from '../catalog/dates';
 
 /** A valid row: its line in the file, its key and the values of the fields the file has columns for. */
 export interface ParsedRow {
@@ -119,6 +120,7 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
   };
 
   let schema: z.ZodType<Record<string, unknown>> = kind === 'prices' ? asRowSchema(priceRowSchema(today)) : KINDS[kind].schema;
+  let quickRow: ((input: Record<string, string>) => PriceRow | null) | null = null;
   const validate = (cells: string[], line: number) => {
     // Blank cells are left out: the shared schemas' optional fields accept a missing key, not ''.
     const input: Record<string, string> = {};
@@ -135,7 +137,8 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
         break;
       }
     }
-    const result = schema.safeParse(input);
+    const quick = quickRow ? quickRow(input) : null;
+    const result = quick ? { success: true as const, data: quick as Record<string, unknown> } : schema.safeParse(input);
     if (!result.success) {
       for (const issue of result.error.issues) {
         const field = String(issue.path[0] ?? '');
@@ -187,6 +190,8 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
     else if (detected.convention) [decimalConvention, decimalSource] = [detected.convention, 'file'];
     else if (decimal.saved) [decimalConvention, decimalSource] = [decimal.saved, 'saved'];
     schema = asRowSchema(priceRowSchema(today, decimalConvention));
+    const day = today ?? todayIso();
+    quickRow = (input) => quickPriceRow(input, day, decimalConvention);
   }
   for (let i = 0; i < pending.length; i++) {
     validate(pending[i].cells, pending[i].line);
