@@ -27,10 +27,20 @@ function delimiterOf(text: string): string {
   return ',';
 }
 
+/** Plain words for papaparse's row errors (its codes are not for users). */
+function quoteProblem(code: string): string {
+  if (code === 'MissingQuotes') return 'a quoted cell is never closed, so the rest of the file was read into it; close the quote (write "" for a quote inside a cell)';
+  if (code === 'InvalidQuotes') return 'text follows a closing quote in this row; quote the whole cell and write "" for a quote inside it';
+  return 'this row could not be read as CSV';
+}
+
 export interface CsvVisitor {
   header(cells: string[]): void;
-  /** One data row; `line` is its 1-based line in the file (the header is line 1 when it is the first line). */
-  row(cells: string[], line: number): void;
+  /**
+   * One data row; `line` is its 1-based line in the file (the header is line 1 when it is the first line).
+   * `problem` says why the row can not be trusted as read (a quote never closed swallows the rows after it).
+   */
+  row(cells: string[], line: number, problem?: string): void;
 }
 
 /** Streams the rows of a CSV text through the visitor, skipping blank lines; over MAX_ROWS rows is a 413. */
@@ -46,7 +56,11 @@ export function readCsv(text: string, visitor: CsvVisitor): { rows: number } {
     skipEmptyLines: false,
     step: (result, parser) => {
       // The row's line is 1 + the newlines before where it starts (quoted fields may span lines).
-      for (let i = counted; i < rowStart; i++) if (text.charCodeAt(i) === 10) line++;
+      // A line ends at LF, CRLF or a lone CR (old spreadsheet exports): papaparse accepts all three.
+      for (let i = counted; i < rowStart; i++) {
+        const c = text.charCodeAt(i);
+        if (c === 10 || (c === 13 && text.charCodeAt(i + 1) !== 10)) line++;
+      }
       counted = rowStart;
       const rowLine = line;
       rowStart = result.meta.cursor;
@@ -62,7 +76,7 @@ export function readCsv(text: string, visitor: CsvVisitor): { rows: number } {
         parser.abort();
         return;
       }
-      visitor.row(cells, rowLine);
+      visitor.row(cells, rowLine, result.errors.length > 0 ? quoteProblem(result.errors[0].code) : undefined);
     },
   });
   if (tooMany) throw new AppError('too-many-rows', `The file has more than ${MAX_ROWS.toLocaleString('en-US')} rows. Split it into smaller files.`, 413);

@@ -121,7 +121,11 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
 
   let schema: z.ZodType<Record<string, unknown>> = kind === 'prices' ? asRowSchema(priceRowSchema(today)) : KINDS[kind].schema;
   let quickRow: ((input: Record<string, string>) => PriceRow | null) | null = null;
-  const validate = (cells: string[], line: number) => {
+  const validate = (cells: string[], line: number, problem?: string) => {
+    if (problem) {
+      report([{ row: line, column: '', value: '', message: problem }]);
+      return;
+    }
     // Blank cells are left out: the shared schemas' optional fields accept a missing key, not ''.
     const input: Record<string, string> = {};
     const columns = header!.columns;
@@ -163,7 +167,7 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
     if (rowErrors.length > 0) report(rowErrors);
   };
 
-  const pending: { cells: string[]; line: number }[] = [];
+  const pending: { cells: string[]; line: number; problem?: string }[] = [];
   let priceColumn = -1;
   // Rows are read whole first (a price file's decimal mark comes from its whole column), then validated in slices.
   const { rows: rowCount } = readCsv(text, {
@@ -174,8 +178,8 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
       presentFields = header.columns.filter((c): c is string => c !== null);
       priceColumn = kind === 'prices' ? header.columns.indexOf('price') : -1;
     },
-    row(cells, line) {
-      pending.push({ cells, line });
+    row(cells, line, problem) {
+      pending.push({ cells, line, problem });
     },
   });
   yield;
@@ -194,7 +198,7 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
     quickRow = (input) => quickPriceRow(input, day, decimalConvention);
   }
   for (let i = 0; i < pending.length; i++) {
-    validate(pending[i].cells, pending[i].line);
+    validate(pending[i].cells, pending[i].line, pending[i].problem);
     if (i % ROWS_PER_SLICE === ROWS_PER_SLICE - 1) yield;
   }
   return { kind, rows, errors, errorsTotal, decimalConvention, decimalSource, rowCount, rejected, presentFields, header };
