@@ -1,7 +1,9 @@
 /**
  * Kill -9 during a large price commit, then restart: the fault suite (tests/server/imports) runs a
- * few rounds, the soak (`npm run bench -- --soak`) many. The server runs as its own process exactly
- * as `npm run server` starts it (tsx with the server's tsconfig), on a temp database and a free port.
+ * few rounds, the soak (`npm run bench -- --soak`) many. The server runs as its own process on a
+ * temp database and a free port: server/index.ts bundled once with esbuild (the server's tsconfig,
+ * packages left external), because a tsx start takes seconds per restart on a busy machine and the
+ * suite restarts it after every kill. tsx emits no decorator metadata either, so both run the same code.
  */
 import 'reflect-metadata';
 import { spawn, type ChildProcess } from 'node:child_process';
@@ -11,6 +13,7 @@ import path from 'node:path';
 import { createInterface } from 'node:readline';
 import Database from 'better-sqlite3';
 import bcrypt from 'bcryptjs';
+import { build } from 'esbuild';
 import { signToken } from '../server/auth/tokens';
 import { openDatabase } from '../server/db/data-source';
 import { User } from '../server/users/user.entity';
@@ -38,13 +41,16 @@ interface Running {
   port: number;
 }
 
-/** Starts server/index.ts on a free port and resolves once it listens. */
-function startServer(env: NodeJS.ProcessEnv): Promise<Running> {
-  const child = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server/index.ts')], {
-    cwd: ROOT,
-    env: { ...process.env, ...env, TSX_TSCONFIG_PATH: path.join(ROOT, 'server/tsconfig.json') },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
+/** Bundles server/index.ts under node_modules/.cache (so its packages resolve from the project). */
+async function bundleServer(): Promise<string> {
+  const outfile = path.join(ROOT, 'node_modules/.cache/tandem-kill', `server-${process.pid}.cjs`);
+  await build({ entryPoints: [path.join(ROOT, 'server/index.ts')], bundle: true, platform: 'node', format: 'cjs', packages: 'external', tsconfig: path.join(ROOT, 'server/tsconfig.json'), outfile, logLevel: 'warning' });
+  return outfile;
+}
+
+/** Starts the bundled server on a free port and resolves once it listens. */
+function startServer(entry: string, env: NodeJS.ProcessEnv): Promise<Running> {
+  const child = spawn(process.execPath, [entry], { cwd: ROOT, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
   return new Promise((resolve, reject) => {
     const timer = setTimeout(() => reject(new Error('server did not start within 60 s')), 60_000);
     createInterface({ input: child.stdout! }).on('line', (line) => {
@@ -110,7 +116,8 @@ export async function killDuringCommits(rounds: number, rows: number, maxKillMs:
   await setup.destroy();
   const token = signToken(secret, { userId: admin.id, role: 'admin' });
   const report: KillReport = { rounds: [], committed: 0, absent: 0 };
-  let server = await startServer(env);
+  const entry = await bundleServer();
+  let server = await startServer(entry, env);
   try {
     for (let round = 0; round < rounds; round++) {
       const form = new FormData();
@@ -130,7 +137,7 @@ export async function killDuringCommits(rounds: number, rows: number, maxKillMs:
       await killHard(server.child);
       await sent;
       // Restart on the file the killed process left (migrations and WAL recovery run at start).
-      server = await startServer(env);
+      server = await startServer(entry, env);
       const found = inspect(databasePath);
       report.rounds.push({ killAfterMs, answered, integrity: found.integrity, partial: found.partial });
     }
@@ -140,6 +147,7 @@ export async function killDuringCommits(rounds: number, rows: number, maxKillMs:
   } finally {
     await killHard(server.child);
     rmSync(dir, { recursive: true, force: true });
+    rmSync(entry, { force: true });
   }
   return report;
 }

@@ -5,8 +5,8 @@ import { killDuringCommits } from '../../../bench/kill-harness';
 // file, and find SQLite's integrity check "ok" (SQLite docs, PRAGMA integrity_check) and the import
 // whole or absent. Ten rounds here; `npm run bench -- --soak` runs fifty.
 describe('kill -9 during a price commit', () => {
-  it('when the server is killed at random moments of a 20,000-row commit, then every restart finds an intact database and each import whole or absent', async () => {
-    const report = await killDuringCommits(10, 20_000, 2_500);
+  it('when the server is killed at random moments of a 10,000-row commit, then every restart finds an intact database and each import whole or absent', async () => {
+    const report = await killDuringCommits(10, 10_000, 1_500);
     for (const round of report.rounds) {
       expect(round.integrity, `killed after ${round.killAfterMs} ms`).toBe('ok');
       expect(round.partial, `killed after ${round.killAfterMs} ms`).toEqual([]);
