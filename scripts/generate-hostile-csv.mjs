@@ -7,6 +7,7 @@
 // Expected values are worked out by hand from the file formats (see each case's note), never by running the importer.
 // Over-limit files (over 20 MB, over 200,000 rows) are built at test time instead of committed.
 import { mkdirSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { Buffer } from 'node:buffer';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 

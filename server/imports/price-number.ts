@@ -17,7 +17,6 @@ export type PriceReading =
   | { kind: 'ambiguous'; cents: Partial<Record<DecimalConvention, number>> }
   | { kind: 'unreadable'; reason: string };
 
-const GROUPING = /[ \u00a0\u202f']/g;
 const SPACES = /^[\s\u00a0\u202f]+|[\s\u00a0\u202f]+$/g;
 /** Currency marks a distributor may leave in the cell; the currency itself is a column of its own. */
 const CURRENCY = /^(?:US\$|USD|\$)\s*|\s*(?:USD|\$)$/i;
