@@ -88,6 +88,12 @@ export function invalidateCatalogIndex(dataSource: DataSource): void {
   versions.delete(dataSource);
 }
 
+/** Forgets every cached index and version: after a write that rolled back, nothing cached is trusted. */
+export function dropCatalogIndex(dataSource: DataSource): void {
+  versions.delete(dataSource);
+  cache.delete(dataSource);
+}
+
 /** The kind's index, rebuilt when an import has committed or reverted since it was built. */
 export async function kindIndex(dataSource: DataSource, kind: CatalogKind): Promise<KindIndex> {
   let perSource = cache.get(dataSource);

@@ -1,7 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { ImportKind } from '../../shared/schemas/equipment';
 import type { DecimalConvention, ImportErrorPage } from '../../shared/schemas/imports';
-import { invalidateCatalogIndex } from '../catalog/catalog-index';
+import { dropCatalogIndex, invalidateCatalogIndex } from '../catalog/catalog-index';
 import { withWriteLock } from '../db/write-transaction';
 import { Distributor } from '../catalog/distributor.entity';
 import type { AppContext } from '../context';
@@ -58,7 +58,7 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
     });
   }
 
-  const view = await withWriteLock(ctx, async (manager) => {
+  const view = await writeCatalog(ctx, async (manager) => {
     const distributor = distributorName ? await ensureDistributor(manager, distributorName) : null;
     const newMapping = input.mapping && Object.keys(input.mapping).length > 0;
     // A convention the file showed or the admin chose is remembered for this distributor's next file.
@@ -94,7 +94,7 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
 
 /** Applies a preview's valid rows in one transaction (planned again against the tables as they are now). */
 export async function commitImport(ctx: AppContext, id: number): Promise<ImportDetail> {
-  const view = await withWriteLock(ctx, async (manager) => {
+  const view = await writeCatalog(ctx, async (manager) => {
     const record = await manager.findOneBy(ImportRecord, { id });
     if (!record) throw notFound('Import');
     if (record.status !== 'preview') throw conflict(`This import is already ${record.status}; only a preview can be committed.`);
@@ -111,7 +111,7 @@ export async function commitImport(ctx: AppContext, id: number): Promise<ImportD
 
 /** Reverts a committed import in one transaction. */
 export async function revertImport(ctx: AppContext, id: number): Promise<ImportDetail> {
-  const view = await withWriteLock(ctx, async (manager) => {
+  const view = await writeCatalog(ctx, async (manager) => {
     const record = await manager.findOneBy(ImportRecord, { id });
     if (!record) throw notFound('Import');
     if (record.status !== 'committed') throw conflict(`This import is ${record.status}; only a committed import can be reverted.`);
@@ -160,6 +160,20 @@ export async function importErrors(ctx: AppContext, id: number): Promise<{ fileN
   const record = await ctx.dataSource.getRepository(ImportRecord).findOne({ where: { id }, select: ['id', 'fileName', 'errors'] });
   if (!record) throw notFound('Import');
   return { fileName: record.fileName, errors: record.errors ?? [] };
+}
+
+/**
+ * One catalog write under the write lock. Checks may read the catalog between its statements (one
+ * shared SQLite connection), so a write that rolls back drops every cached index: none may keep rows
+ * that never committed.
+ */
+async function writeCatalog<T>(ctx: AppContext, work: (manager: EntityManager) => Promise<T>): Promise<T> {
+  try {
+    return await withWriteLock(ctx, work);
+  } catch (err) {
+    dropCatalogIndex(ctx.dataSource);
+    throw err;
+  }
 }
 
 function planFor(manager: EntityManager, kind: ImportKind, distributorId: number | null, rows: ParsedRow[]): Promise<ImportPlan> {
