@@ -113,10 +113,11 @@ export const text = (max = 200) => z.preprocess((v) => {
 }, z.string().min(1).max(max));
 
 const DAYS_IN_MONTH = [31, 29, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+const ISO_DATE_SHAPE = /^\d{4}-\d{2}-\d{2}$/;
 
 /** Whether a YYYY-MM-DD text names a real day (Gregorian leap years); arithmetic, not Date: it runs per CSV row. */
 export function isRealIsoDate(value: string): boolean {
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(value)) return false;
+  if (!ISO_DATE_SHAPE.test(value)) return false;
   const year = Number(value.slice(0, 4));
   const month = Number(value.slice(5, 7));
   const day = Number(value.slice(8, 10));
@@ -133,8 +134,9 @@ export const isoDate = z.preprocess(
   },
   z
     .string({ error: 'expected a date as YYYY-MM-DD' })
-    .regex(/^\d{4}-\d{2}-\d{2}$/, { error: 'expected a date as YYYY-MM-DD' })
-    .refine(isRealIsoDate, { error: 'not a real calendar date' }),
+    .regex(ISO_DATE_SHAPE, { error: 'expected a date as YYYY-MM-DD' })
+    // Only a well-formed date is checked against the calendar, so a malformed one reports one problem.
+    .refine((v) => !ISO_DATE_SHAPE.test(v) || isRealIsoDate(v), { error: 'not a real calendar date' }),
 );
 
 /** Whether a model (or part) name has at least one letter or digit: "-./" normalises to nothing and matches nothing. */

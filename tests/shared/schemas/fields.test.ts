@@ -50,3 +50,11 @@ describe('hasModelCharacters', () => {
     expect(hasModelCharacters(model)).toBe(ok);
   });
 });
+
+describe('isoDate problems', () => {
+  it('when a date is malformed, then it reports one problem, not a second calendar one', () => {
+    const result = z.object({ d: isoDate }).safeParse({ d: '1/1/2010' });
+    expect(result.success).toBe(false);
+    expect(result.error?.issues).toHaveLength(1);
+  });
+});
