@@ -105,8 +105,11 @@ function inspect(databasePath: string): { integrity: string; partial: string[]; 
   }
 }
 
-/** Runs `rounds` kill-and-restart rounds of a `rows`-row price commit; kills land at random moments up to `maxKillMs`. */
-export async function killDuringCommits(rounds: number, rows: number, maxKillMs: number, random: () => number = Math.random): Promise<KillReport> {
+/**
+ * Runs `rounds` kill-and-restart rounds of a `rows`-row price commit. One commit is timed first, unkilled, so
+ * the kills land at random moments from the upload's start to 1.3 times that long: before, during and after the commit.
+ */
+export async function killDuringCommits(rounds: number, rows: number, random: () => number = Math.random): Promise<KillReport> {
   const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-kill-'));
   const databasePath = path.join(dir, 'kill.sqlite');
   const secret = 'kill-suite-secret-'.padEnd(48, 'x');
@@ -118,15 +121,23 @@ export async function killDuringCommits(rounds: number, rows: number, maxKillMs:
   const report: KillReport = { rounds: [], committed: 0, absent: 0 };
   const entry = await bundleServer();
   let server = await startServer(entry, env);
+  const send = (round: number) => {
+    const form = new FormData();
+    form.append('kind', 'prices');
+    form.append('distributor', 'Kill Supply');
+    form.append('dryRun', 'false');
+    form.append('file', priceFile(rows, round), 'kill.csv');
+    return fetch(`http://127.0.0.1:${server.port}/api/imports`, { method: 'POST', headers: { Authorization: `Bearer ${token}` }, body: form });
+  };
   try {
+    const startedMs = performance.now();
+    const calibration = await send(rounds);
+    await calibration.arrayBuffer();
+    if (calibration.status !== 201) throw new Error(`the unkilled commit answered ${calibration.status}`);
+    const maxKillMs = 1.3 * (performance.now() - startedMs);
     for (let round = 0; round < rounds; round++) {
-      const form = new FormData();
-      form.append('kind', 'prices');
-      form.append('distributor', 'Kill Supply');
-      form.append('dryRun', 'false');
-      form.append('file', priceFile(rows, round), 'kill.csv');
       let answered = false;
-      const sent = fetch(`http://127.0.0.1:${server.port}/api/imports`, { method: 'POST', headers: { Authorization: `Bearer ${token}` }, body: form })
+      const sent = send(round)
         .then(async (res) => {
           await res.arrayBuffer();
           answered = true;
@@ -142,8 +153,8 @@ export async function killDuringCommits(rounds: number, rows: number, maxKillMs:
       report.rounds.push({ killAfterMs, answered, integrity: found.integrity, partial: found.partial });
     }
     const final = inspect(databasePath);
-    report.committed = final.committed;
-    report.absent = rounds - final.committed;
+    report.committed = final.committed - 1; // less the unkilled calibration commit
+    report.absent = rounds - report.committed;
   } finally {
     await killHard(server.child);
     rmSync(dir, { recursive: true, force: true });

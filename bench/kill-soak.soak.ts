@@ -5,7 +5,7 @@ const ROUNDS = 50;
 
 /** Soak (`npm run bench -- --soak`): 50 kill -9 rounds during 20,000-row price commits, each followed by a restart. */
 export async function run(): Promise<Measure[]> {
-  const report = await killDuringCommits(ROUNDS, 20_000, 2_500);
+  const report = await killDuringCommits(ROUNDS, 20_000);
   const bad = report.rounds.filter((r) => r.integrity !== 'ok' || r.partial.length > 0);
   for (const r of bad) console.error(`killed after ${r.killAfterMs} ms: integrity ${r.integrity}; ${r.partial.join('; ')}`);
   const before = report.rounds.filter((r) => !r.answered).length;
