@@ -59,10 +59,15 @@ export function parseTrustProxy(raw: string): TrustProxy {
   const value = raw.trim();
   if (value === '' || value === 'false' || value === '0') return false;
   if (/^[0-9]+$/.test(value)) return Number(value);
-  const entries = value.split(',').map((entry) => entry.trim()).filter(Boolean);
+  const entries = value
+    .split(',')
+    .map((entry) => entry.trim())
+    .filter(Boolean);
   const bad = entries.filter((entry) => !isProxyEntry(entry));
   if (bad.length > 0 || entries.length === 0) {
-    throw new Error(`Invalid configuration: TANDEM_TRUST_PROXY must be false, a hop count, or proxy addresses/subnets (not "${bad.join(', ') || value}").`);
+    throw new Error(
+      `Invalid configuration: TANDEM_TRUST_PROXY must be false, a hop count, or proxy addresses/subnets (not "${bad.join(', ') || value}").`,
+    );
   }
   return entries;
 }

@@ -116,10 +116,12 @@ export function UserRow({ user, isMe, wide, onChange, onResetPassword }: Props) 
     // A plain row, not DataTable.Row: that one is a ripple marked aria-disabled without onPress, which
     // makes the buttons inside read as disabled to assistive tech.
     <View testID={`user-row-${user.email}`} style={[styles.tableRow, { borderBottomColor: theme.colors.outlineVariant }, !user.active && styles.inactive]}>
-      <DataTable.Cell style={styles.nameCol}>{identity}</DataTable.Cell>
-      <DataTable.Cell>
+      <View style={[styles.cell, styles.nameCol]}>{identity}</View>
+      {/* Plain cells: DataTable.Cell is a ripple marked aria-disabled (the menu button inside read as
+          disabled) and clips its content to one line (the own-row reason ran over the next cell). */}
+      <View style={styles.cell}>
         <RoleMenu user={user} isMe={isMe} onChange={onChange} />
-      </DataTable.Cell>
+      </View>
       <DataTable.Cell>{status}</DataTable.Cell>
       <View style={[styles.actionCol, styles.actions]}>
         <ActiveToggle user={user} isMe={isMe} onChange={onChange} />
@@ -130,8 +132,9 @@ export function UserRow({ user, isMe, wide, onChange, onResetPassword }: Props) 
 }
 
 const styles = StyleSheet.create({
-  identity: { paddingVertical: spacing.xs },
+  identity: { paddingVertical: spacing.xs, flexShrink: 1 },
   nameCol: { flex: 2 },
+  cell: { flex: 1, flexDirection: 'row', alignItems: 'center' },
   actionCol: { flex: 1.6, justifyContent: 'flex-end' },
   actions: { flexDirection: 'row', alignItems: 'center' },
   tableRow: { flexDirection: 'row', alignItems: 'center', minHeight: TOUCH_TARGET, paddingHorizontal: spacing.lg, borderBottomWidth: StyleSheet.hairlineWidth },

@@ -35,7 +35,10 @@ const tooManySignIns = () => new AppError('too-many-attempts', 'Too many failed 
  */
 export function signInLimits(ctx: AppContext): RequestHandler[] {
   const limit = ctx.config.signInLimit;
-  const emailOf = (req: Request) => String((req.body as { email?: unknown } | undefined)?.email ?? '').trim().toLowerCase();
+  const emailOf = (req: Request) =>
+    String((req.body as { email?: unknown } | undefined)?.email ?? '')
+      .trim()
+      .toLowerCase();
   return [
     failureLimiter(limit * 3, (req) => `ip:${clientKey(req)}`, tooManySignIns),
     failureLimiter(limit, (req) => `account:${clientKey(req)}:${emailOf(req)}`, tooManySignIns),

@@ -2,7 +2,8 @@ import { roleAtLeast, type Role } from '../../shared/schemas/auth';
 import type { CurrentPrice } from './prices.service';
 
 /** What a role sees of one distributor's current price: estimators and admins the amount, techs only that it is stocked. */
-export type VisiblePrice = Partial<Pick<CurrentPrice, 'priceCents' | 'currency'>> & Pick<CurrentPrice, 'distributor' | 'effectiveFrom'> & { inStock: true };
+export type VisiblePrice = Partial<Pick<CurrentPrice, 'priceCents' | 'currency'>> &
+  Pick<CurrentPrice, 'distributor' | 'effectiveFrom'> & { inStock: true };
 
 /** Whether a role may see distributor prices (Issue 7: pricing stays with the office). */
 export const seesPrices = (role: Role) => roleAtLeast(role, 'estimator');

@@ -4,11 +4,12 @@ import path from 'node:path';
 import { DataSource } from 'typeorm';
 import { entities } from './entities';
 import { migrations } from './migrations';
+import { lockPlainTransactions } from './write-transaction';
 
 /** The SQLite data source (WAL, foreign keys on). Migrations run at start; no synchronize. */
 export function createDataSource(databasePath: string): DataSource {
   if (databasePath !== ':memory:') mkdirSync(path.dirname(databasePath), { recursive: true });
-  return new DataSource({
+  const dataSource = new DataSource({
     type: 'better-sqlite3',
     database: databasePath,
     enableWAL: databasePath !== ':memory:',
@@ -21,6 +22,8 @@ export function createDataSource(databasePath: string): DataSource {
       db.pragma('busy_timeout = 5000');
     },
   });
+  lockPlainTransactions(dataSource);
+  return dataSource;
 }
 
 /** Opens the database and brings its schema up to date. */

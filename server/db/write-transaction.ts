@@ -1,3 +1,4 @@
+import { AsyncLocalStorage } from 'node:async_hooks';
 import type { DataSource, EntityManager, QueryRunner } from 'typeorm';
 import { AppError } from '../lib/errors';
 
@@ -27,8 +28,15 @@ const serializable: WriteLockStrategy = (dataSource, work) => dataSource.transac
 
 // The tail of each DataSource's queue of writers: a writer waits for the one before it to finish.
 const queues = new WeakMap<DataSource, Promise<unknown>>();
+// The manager of the write transaction the current async call chain holds, so a nested call
+// (a service that locks, called from another that already does) runs inside it instead of deadlocking.
+// `open` turns false at commit/rollback: a callback started inside the work that runs later is not nested.
+const held = new AsyncLocalStorage<{ dataSource: DataSource; manager: EntityManager; open: boolean }>();
 
 const sqliteImmediate: WriteLockStrategy = async (dataSource, work) => {
+  const outer = held.getStore();
+  // Nested: a SAVEPOINT inside the transaction already held (its failure undoes only its own writes).
+  if (outer?.open && outer.dataSource === dataSource) return outer.manager.transaction(work);
   const previous = queues.get(dataSource) ?? Promise.resolve();
   let release!: () => void;
   const mine = new Promise<void>((resolve) => (release = resolve));
@@ -59,14 +67,31 @@ async function runImmediate<T>(dataSource: DataSource, work: (manager: EntityMan
   await runner.query('BEGIN IMMEDIATE TRANSACTION');
   flags.isTransactionActive = true;
   flags.transactionDepth = 1;
+  const store = { dataSource, manager: runner.manager, open: true };
   try {
-    const result = await work(runner.manager);
+    const result = await held.run(store, () => work(runner.manager));
+    store.open = false;
     await runner.commitTransaction();
     return result;
   } catch (err) {
+    store.open = false;
     await rollbackQuietly(runner, flags);
     throw err;
   }
+}
+
+/**
+ * Sends the DataSource's own `transaction()` (and so every plain `dataSource.transaction(...)` in
+ * the code) through the same queue and lock, so a writer that was not converted can not nest inside
+ * another's transaction. SQLite only; called once where the DataSource is created.
+ */
+export function lockPlainTransactions(dataSource: DataSource): void {
+  if (strategyFor(dataSource) !== sqliteImmediate) return;
+  const manager = dataSource.manager;
+  manager.transaction = ((isolationOrWork: unknown, maybeWork?: unknown) => {
+    const work = (typeof isolationOrWork === 'function' ? isolationOrWork : maybeWork) as (m: EntityManager) => Promise<unknown>;
+    return sqliteImmediate(dataSource, work);
+  }) as EntityManager['transaction'];
 }
 
 async function waitUntilIdle(runner: QueryRunner) {

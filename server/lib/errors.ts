@@ -85,7 +85,8 @@ function toAppError(err: unknown): AppError {
   if (parserError) return new AppError(...parserError);
   if (e.code === 'LIMIT_FILE_SIZE' || e.code === 'LIMIT_FIELD_VALUE') return new AppError('too-large', 'The request is too large.', 413);
   if (typeof e.code === 'string' && e.code.startsWith('LIMIT_')) return new AppError('bad-upload', 'The upload is malformed.', 400);
-  if (isMultipartParseError(e)) return new AppError('bad-upload', 'The upload could not be read: the form data is malformed or cut off.', 400);
+  if (isMultipartParseError(e))
+    return new AppError('bad-upload', 'The upload could not be read: the form data is malformed or cut off.', 400);
   const unique = uniqueViolation(e);
   if (unique) return unique;
   const status = e.status ?? e.statusCode;

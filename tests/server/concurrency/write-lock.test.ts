@@ -1,5 +1,6 @@
 import { setTimeout as sleep } from 'node:timers/promises';
 import Database from 'better-sqlite3';
+import type { EntityManager } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { withWriteLock } from '../../../server/db/write-transaction';
 import { User } from '../../../server/users/user.entity';
@@ -13,9 +14,13 @@ afterAll(async () => {
   await t.close();
 });
 
+type Transaction = (work: (manager: EntityManager) => Promise<void>) => Promise<void>;
+const locked: Transaction = (work) => withWriteLock(t.ctx, work);
+const plain: Transaction = (work) => t.ctx.dataSource.transaction(work);
+
 /** Read a user's name, yield to the event loop (as bcrypt or any await would), then append a mark. */
-async function appendMark(mark: string) {
-  await withWriteLock(t.ctx, async (manager) => {
+async function appendMark(mark: string, transaction: Transaction = locked) {
+  await transaction(async (manager) => {
     const repo = manager.getRepository(User);
     const user = await repo.findOneByOrFail({ id: t.users.tech.id });
     await sleep(3);
@@ -32,6 +37,37 @@ describe('withWriteLock', () => {
       const { name } = await t.ctx.dataSource.getRepository(User).findOneByOrFail({ id: t.users.tech.id });
       expect(name.length).toBe(3);
     }
+  });
+
+  it('when plain dataSource.transaction() writers race, then they are queued the same way (20 rounds)', async () => {
+    for (let round = 0; round < 20; round++) {
+      await t.ctx.dataSource.getRepository(User).update({ id: t.users.tech.id }, { name: 'n' });
+      await Promise.all([appendMark('a', plain), appendMark('b', locked), appendMark('c', plain)]);
+      const { name } = await t.ctx.dataSource.getRepository(User).findOneByOrFail({ id: t.users.tech.id });
+      expect(name.length).toBe(4);
+    }
+  });
+
+  it('when a locked service calls another that locks, then the inner runs inside (no deadlock) and its failure undoes only its own writes', async () => {
+    const repo = t.ctx.dataSource.getRepository(User);
+    await repo.update({ id: t.users.tech.id }, { name: 'outer' });
+    await withWriteLock(t.ctx, async (manager) => {
+      await manager.getRepository(User).update({ id: t.users.tech.id }, { name: 'outer-2' });
+      await withWriteLock(t.ctx, async (inner) => {
+        await inner.getRepository(User).update({ id: t.users.estimator.id }, { name: 'inner-ok' });
+      });
+      const failed = withWriteLock(t.ctx, async (inner) => {
+        await inner.getRepository(User).update({ id: t.users.tech.id }, { name: 'inner-failed' });
+        throw new Error('inner refused');
+      });
+      await expect(failed).rejects.toThrow('inner refused');
+      await t.ctx.dataSource.transaction(async (inner) => {
+        await inner.getRepository(User).update({ id: t.users.admin.id }, { name: 'plain-inner' });
+      });
+    });
+    expect((await repo.findOneByOrFail({ id: t.users.tech.id })).name).toBe('outer-2');
+    expect((await repo.findOneByOrFail({ id: t.users.estimator.id })).name).toBe('inner-ok');
+    expect((await repo.findOneByOrFail({ id: t.users.admin.id })).name).toBe('plain-inner');
   });
 
   it('when the work throws, then its writes are rolled back and the next writer still runs', async () => {

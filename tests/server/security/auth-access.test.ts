@@ -29,7 +29,8 @@ beforeAll(async () => {
   unitIds = units.map((u: { id: number }) => u.id);
   const repo = t.ctx.dataSource.getRepository(User);
   const passwordHash = await bcrypt.hash('filler-password-1', 4);
-  for (let i = 0; i < 20; i++) await repo.save(repo.create({ email: `filler.${i}@test.invalid`, name: `Filler ${i}`, role: 'tech', passwordHash, active: true }));
+  for (let i = 0; i < 20; i++)
+    await repo.save(repo.create({ email: `filler.${i}@test.invalid`, name: `Filler ${i}`, role: 'tech', passwordHash, active: true }));
 });
 afterAll(async () => {
   await t.close();
@@ -46,17 +47,47 @@ describe('tokens', () => {
     ['a garbled token', () => 'not-a-token'],
     ['three garbage segments', () => 'aaa.bbb.ccc'],
     ['an empty bearer', () => ''],
-    ['an expired token', () => jwt.sign({ role: 'admin', exp: Math.floor(Date.now() / 1000) - 60 }, t.ctx.config.jwtSecret, { subject: String(t.users.admin.id), algorithm: 'HS256' })],
-    ['a token signed with another secret', () => jwt.sign({ role: 'admin' }, 'another-secret-of-enough-length!', { subject: String(t.users.admin.id), algorithm: 'HS256', expiresIn: '1h' })],
-    ['an alg:none token', () => `${b64({ alg: 'none', typ: 'JWT' })}.${b64({ sub: String(t.users.admin.id), role: 'admin', exp: inAnHour() })}.`],
-    ['a token with no exp', () => jwt.sign({ role: 'admin' }, t.ctx.config.jwtSecret, { subject: String(t.users.admin.id), algorithm: 'HS256' })],
-    ['an HS512 token (only HS256 is accepted)', () => jwt.sign({ role: 'admin' }, t.ctx.config.jwtSecret, { subject: String(t.users.admin.id), algorithm: 'HS512', expiresIn: '1h' })],
-    ['a token whose role was raised after signing', () => {
-      const [header, , signature] = t.tokenFor('tech').split('.');
-      return `${header}.${b64({ sub: String(t.users.tech.id), role: 'admin', exp: inAnHour() })}.${signature}`;
-    }],
+    [
+      'an expired token',
+      () =>
+        jwt.sign({ role: 'admin', exp: Math.floor(Date.now() / 1000) - 60 }, t.ctx.config.jwtSecret, {
+          subject: String(t.users.admin.id),
+          algorithm: 'HS256',
+        }),
+    ],
+    [
+      'a token signed with another secret',
+      () =>
+        jwt.sign({ role: 'admin' }, 'another-secret-of-enough-length!', {
+          subject: String(t.users.admin.id),
+          algorithm: 'HS256',
+          expiresIn: '1h',
+        }),
+    ],
+    [
+      'an alg:none token',
+      () => `${b64({ alg: 'none', typ: 'JWT' })}.${b64({ sub: String(t.users.admin.id), role: 'admin', exp: inAnHour() })}.`,
+    ],
+    [
+      'a token with no exp',
+      () => jwt.sign({ role: 'admin' }, t.ctx.config.jwtSecret, { subject: String(t.users.admin.id), algorithm: 'HS256' }),
+    ],
+    [
+      'an HS512 token (only HS256 is accepted)',
+      () => jwt.sign({ role: 'admin' }, t.ctx.config.jwtSecret, { subject: String(t.users.admin.id), algorithm: 'HS512', expiresIn: '1h' }),
+    ],
+    [
+      'a token whose role was raised after signing',
+      () => {
+        const [header, , signature] = t.tokenFor('tech').split('.');
+        return `${header}.${b64({ sub: String(t.users.tech.id), role: 'admin', exp: inAnHour() })}.${signature}`;
+      },
+    ],
     ['a token for a user that does not exist', () => signToken(t.ctx.config.jwtSecret, { userId: 999_999, role: 'admin' })],
-    ['a token with a non-canonical subject', () => jwt.sign({ role: 'admin' }, t.ctx.config.jwtSecret, { subject: `0${t.users.admin.id}`, algorithm: 'HS256', expiresIn: '1h' })],
+    [
+      'a token with a non-canonical subject',
+      () => jwt.sign({ role: 'admin' }, t.ctx.config.jwtSecret, { subject: `0${t.users.admin.id}`, algorithm: 'HS256', expiresIn: '1h' }),
+    ],
   ];
 
   it.each(tokens)('when the request carries %s, then 401 with no leak', async (_name, make) => {
@@ -121,7 +152,9 @@ describe('admin routes by role', () => {
     ['get', '/api/imports/templates/prices'],
     ['put', '/api/settings/rules'],
   ];
-  const cases = ADMIN_ROUTES.flatMap(([method, path]) => (['none', 'tech', 'estimator', 'admin'] as const).map((role) => [method, path, role] as const));
+  const cases = ADMIN_ROUTES.flatMap(([method, path]) =>
+    (['none', 'tech', 'estimator', 'admin'] as const).map((role) => [method, path, role] as const),
+  );
 
   it.each(cases)('when %s %s is called as %s, then only an admin gets past the guard', async (method, path, role) => {
     const req = request(t.app)[method](path);
@@ -136,7 +169,19 @@ describe('admin routes by role', () => {
 
 describe('ids in paths', () => {
   /** Spellings of n that a lenient parser (Number(), parseInt) reads as n or as another item. */
-  const spellings = (n: number) => [`0${n}`, `0x${n.toString(16)}`, `${n}.0`, `+${n}`, `%20${n}`, `${n}%20`, `-${n}`, `${n}e0`, `0b${n.toString(2)}`, `${n}abc`, `${n}%00`];
+  const spellings = (n: number) => [
+    `0${n}`,
+    `0x${n.toString(16)}`,
+    `${n}.0`,
+    `+${n}`,
+    `%20${n}`,
+    `${n}%20`,
+    `-${n}`,
+    `${n}e0`,
+    `0b${n.toString(2)}`,
+    `${n}abc`,
+    `${n}%00`,
+  ];
   const others = ['0', '-0', 'abc', '99999999999999999999', '1e1', '%E0%A4%A'];
 
   it('when the canonical id is used, then the item is found (control)', async () => {
@@ -170,17 +215,39 @@ describe('ids in paths', () => {
 });
 
 describe('hostile query parameters on catalog search', () => {
-  const PAYLOADS = ["' OR 1=1 --", '"; DROP TABLE users; --', '; rm -rf /', '$(id)', '`id`', '| cat /etc/passwd', '%00', '\u0000', '../../etc/passwd', '${7*7}', '<script>x</script>', "1' UNION SELECT email FROM users --"];
+  const PAYLOADS = [
+    "' OR 1=1 --",
+    '"; DROP TABLE users; --',
+    '; rm -rf /',
+    '$(id)',
+    '`id`',
+    '| cat /etc/passwd',
+    '%00',
+    '\u0000',
+    '../../etc/passwd',
+    '${7*7}',
+    '<script>x</script>',
+    "1' UNION SELECT email FROM users --",
+  ];
   const PARAMS = ['q', 'refrigerant', 'tons', 'page', 'pageSize'];
   const cases = PARAMS.flatMap((param) => PAYLOADS.map((payload) => [param, payload] as const));
 
   it.each(cases)('when %s is %j, then 2xx or 4xx with no leak', async (param, payload) => {
-    const res = await request(t.app).get('/api/catalog/outdoor-units').query({ [param]: payload }).set(as('tech'));
+    const res = await request(t.app)
+      .get('/api/catalog/outdoor-units')
+      .query({ [param]: payload })
+      .set(as('tech'));
     expect(res.status).toBeLessThan(500);
     expect([200, 400]).toContain(res.status);
     const text = JSON.stringify(res.body);
     expect(text).not.toMatch(LEAK);
     expect(text).not.toMatch(/@test\.invalid|passwordHash|root:/);
+  });
+
+  it.each(PARAMS)('when %s is repeated (an array), then 400, not a 500', async (param) => {
+    const res = await request(t.app).get(`/api/catalog/outdoor-units?${param}=1&${param}=2`).set(as('tech'));
+    expect(res.status).toBe(400);
+    expect(JSON.stringify(res.body)).not.toMatch(LEAK);
   });
 
   it('when all of that has run, then the users table is intact', async () => {
@@ -197,7 +264,15 @@ describe('admins and their own account (Issue 7)', () => {
     ['deactivate themselves', { active: false }, 'active'],
   ])('when an admin tries to %s (another admin exists), then 409 with a plain reason and nothing changes', async (_name, patch, field) => {
     const repo = t.ctx.dataSource.getRepository(User);
-    const other = await repo.save(repo.create({ email: `other.admin.${field}.${Date.now()}@test.invalid`, name: 'Other', role: 'admin', passwordHash: 'x', active: true }));
+    const other = await repo.save(
+      repo.create({
+        email: `other.admin.${field}.${Date.now()}@test.invalid`,
+        name: 'Other',
+        role: 'admin',
+        passwordHash: 'x',
+        active: true,
+      }),
+    );
     const res = await request(t.app).patch(self()).set(as('admin')).send(patch);
     expect(res.status).toBe(409);
     expect(res.body.error.message).toMatch(/your own/i);
@@ -216,7 +291,14 @@ describe('admins and their own account (Issue 7)', () => {
 describe('prices by role', () => {
   beforeAll(async () => {
     // An invented distributor and price: only who sees the amount is under test.
-    await uploadImport(t.ctx, { buffer: Buffer.from('model,price,effective_from\nZX-101,1234.50,2020-01-01\n'), fileName: 'p.csv', kind: 'prices', distributor: 'Harbor Supply', dryRun: false, userId: t.users.admin.id });
+    await uploadImport(t.ctx, {
+      buffer: Buffer.from('model,price,effective_from\nZX-101,1234.50,2020-01-01\n'),
+      fileName: 'p.csv',
+      kind: 'prices',
+      distributor: 'Harbor Supply',
+      dryRun: false,
+      userId: t.users.admin.id,
+    });
   });
 
   it.each([

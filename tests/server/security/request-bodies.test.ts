@@ -36,8 +36,16 @@ describe('JSON bodies', () => {
     ['plain text', 415, () => signIn().set('Content-Type', 'text/plain').send('email=a&password=b')],
     ['a form-encoded body', 415, () => signIn().type('form').send({ email: 'a@test.invalid', password: 'b' })],
     ['XML', 415, () => signIn().set('Content-Type', 'application/xml').send('<a/>')],
-    ['JSON in a character set the server does not read', 415, () => signIn().set('Content-Type', 'application/json; charset=iso-8859-1').send('{}')],
-    ['a content encoding the server does not read', 415, () => signIn().set('Content-Type', 'application/json').set('Content-Encoding', 'compress').send('{}')],
+    [
+      'JSON in a character set the server does not read',
+      415,
+      () => signIn().set('Content-Type', 'application/json; charset=iso-8859-1').send('{}'),
+    ],
+    [
+      'a content encoding the server does not read',
+      415,
+      () => signIn().set('Content-Type', 'application/json').set('Content-Encoding', 'compress').send('{}'),
+    ],
     ['form data sent to a JSON route', 415, () => signIn().field('email', 'a@test.invalid').field('password', 'b')],
     ['a JSON array', 422, () => signIn().send([1, 2])],
     ['wrong types in the fields', 422, () => signIn().send({ email: 42, password: { $ne: null } })],
@@ -49,10 +57,32 @@ describe('JSON bodies', () => {
   });
 
   it.each([
-    ['PUT /api/settings/rules as text', 415, () => request(t.app).put('/api/settings/rules').set(as('admin')).set('Content-Type', 'text/plain').send('x')],
-    ['POST /api/users with a number for the role', 422, () => request(t.app).post('/api/users').set(as('admin')).send({ email: 'n@test.invalid', name: 'N', role: 7, password: 'long-enough-1' })],
-    ['PATCH /api/users/:id with a prototype key', 422, () => request(t.app).patch(`/api/users/${t.users.tech.id}`).set(as('admin')).set('Content-Type', 'application/json').send('{"__proto__":{"role":"admin"}}')],
-    ['POST /api/checks with invalid JSON', 400, () => request(t.app).post('/api/checks').set(as('tech')).set('Content-Type', 'application/json').send('{]')],
+    [
+      'PUT /api/settings/rules as text',
+      415,
+      () => request(t.app).put('/api/settings/rules').set(as('admin')).set('Content-Type', 'text/plain').send('x'),
+    ],
+    [
+      'POST /api/users with a number for the role',
+      422,
+      () =>
+        request(t.app).post('/api/users').set(as('admin')).send({ email: 'n@test.invalid', name: 'N', role: 7, password: 'long-enough-1' }),
+    ],
+    [
+      'PATCH /api/users/:id with a prototype key',
+      422,
+      () =>
+        request(t.app)
+          .patch(`/api/users/${t.users.tech.id}`)
+          .set(as('admin'))
+          .set('Content-Type', 'application/json')
+          .send('{"__proto__":{"role":"admin"}}'),
+    ],
+    [
+      'POST /api/checks with invalid JSON',
+      400,
+      () => request(t.app).post('/api/checks').set(as('tech')).set('Content-Type', 'application/json').send('{]'),
+    ],
   ] as const)('when %s, then %i', async (_name, status, send) => {
     expectErrorShape(await send(), status);
   });
@@ -68,12 +98,32 @@ describe('multipart uploads', () => {
   const PART = '--XB\r\nContent-Disposition: form-data; name="file"; filename="a.csv"\r\nContent-Type: text/csv\r\n\r\n';
   const cases: [name: string, status: number, send: () => request.Test][] = [
     ['no boundary', 400, () => upload().set('Content-Type', 'multipart/form-data').send('abc')],
-    ['a body cut off mid-part', 400, () => upload().set('Content-Type', 'multipart/form-data; boundary=XB').send(`${PART}model,price\nA,1`)],
-    ['a body cut off in the part headers', 400, () => upload().set('Content-Type', 'multipart/form-data; boundary=XB').send('--XB\r\nContent-Disposition: form-da')],
-    ['garbage after the boundary line', 400, () => upload().set('Content-Type', 'multipart/form-data; boundary=XB').send('--XB\r\n\u0000\u0001garbage')],
+    [
+      'a body cut off mid-part',
+      400,
+      () => upload().set('Content-Type', 'multipart/form-data; boundary=XB').send(`${PART}model,price\nA,1`),
+    ],
+    [
+      'a body cut off in the part headers',
+      400,
+      () => upload().set('Content-Type', 'multipart/form-data; boundary=XB').send('--XB\r\nContent-Disposition: form-da'),
+    ],
+    [
+      'garbage after the boundary line',
+      400,
+      () => upload().set('Content-Type', 'multipart/form-data; boundary=XB').send('--XB\r\n\u0000\u0001garbage'),
+    ],
     ['no parts at all', 400, () => upload().set('Content-Type', 'multipart/form-data; boundary=XB').send('nothing here')],
-    ['a file in an unexpected field', 400, () => upload().field('kind', 'prices').attach('other', Buffer.from('model,price\nA,1\n'), 'a.csv')],
-    ['two files', 400, () => upload().field('kind', 'prices').attach('file', Buffer.from('a\n'), 'a.csv').attach('file', Buffer.from('b\n'), 'b.csv')],
+    [
+      'a file in an unexpected field',
+      400,
+      () => upload().field('kind', 'prices').attach('other', Buffer.from('model,price\nA,1\n'), 'a.csv'),
+    ],
+    [
+      'two files',
+      400,
+      () => upload().field('kind', 'prices').attach('file', Buffer.from('a\n'), 'a.csv').attach('file', Buffer.from('b\n'), 'b.csv'),
+    ],
   ];
 
   it.each(cases)('when the upload has %s, then %i in the error shape', async (_name, status, send) => {
