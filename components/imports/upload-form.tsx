@@ -4,13 +4,16 @@ import { IMPORT_KINDS, type ImportKind } from '@/shared/schemas/equipment';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { FormField } from '@/components/ui/form-field';
 import { ToggleChip } from '@/components/ui/toggle-chip';
-import { IMPORT_KIND_LABELS } from './import-labels';
+import type { DecimalConvention } from '@/hooks/use-imports';
+import { DECIMAL_CHOICES, IMPORT_KIND_LABELS } from './import-labels';
 import type { PickedFile } from './pick-csv';
 
 export interface UploadChoice {
   kind: ImportKind;
   distributor: string;
   picked: PickedFile | null;
+  /** Price files: how amounts are written; 'auto' reads it from the file. */
+  decimal: 'auto' | DecimalConvention;
 }
 
 interface Props {
@@ -52,6 +55,12 @@ export function UploadForm({ value, knownDistributors, busy, onChange, onPick, o
               ))}
             </View>
           ) : null}
+          <Text variant="labelLarge">How the prices are written</Text>
+          <View style={styles.chips} role="group" aria-label="How the prices are written">
+            {DECIMAL_CHOICES.map(([d, label]) => (
+              <ToggleChip key={d} label={label} selected={value.decimal === d} onPress={() => onChange({ ...value, decimal: d })} testID={`import-decimal-${d}`} />
+            ))}
+          </View>
         </View>
       ) : null}
       <View style={styles.fileRow}>

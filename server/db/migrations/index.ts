@@ -2,6 +2,7 @@ import { Users1764650000000 } from './1764650000000-users';
 import { Catalog1764700000000 } from './1764700000000-catalog';
 import { RuleSettings1764800000000 } from './1764800000000-rule-settings';
 import { EngineSecondPass1764900000000 } from './1764900000000-engine-second-pass';
+import { ImportBounds1764950000000 } from './1764950000000-import-bounds';
 import { Jobs1765000000000 } from './1765000000000-jobs';
 
 /** Every migration, in order. Add new ones at the end (one file per change, named by timestamp). */
@@ -10,5 +11,6 @@ export const migrations = [
   Catalog1764700000000,
   RuleSettings1764800000000,
   EngineSecondPass1764900000000,
+  ImportBounds1764950000000,
   Jobs1765000000000,
 ];
