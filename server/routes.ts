@@ -9,9 +9,23 @@ import { jobsRouter } from './jobs/jobs.routes';
 import { systemsRouter } from './systems/systems.routes';
 import { attachmentsRouter } from './attachments/attachments.routes';
 import { outboxRouter } from './mail/outbox.routes';
+import { refrigerantsRouter } from './refrigerants/refrigerants.routes';
+import { commissioningRouter } from './commissioning/commissioning.routes';
 
 /**
  * The API's resource routers, mounted under /api/<prefix>. Each module adds its line here.
  * (Auth and health are mounted by createApp itself.)
  */
-export const apiRoutes: [string, (ctx: AppContext) => Router][] = [['users', usersRouter], ['catalog', catalogRouter], ['imports', importsRouter], ['checks', checksRouter], ['settings', settingsRouter], ['jobs', jobsRouter], ['systems', systemsRouter], ['attachments', attachmentsRouter], ['outbox', outboxRouter]];
+export const apiRoutes: [string, (ctx: AppContext) => Router][] = [
+  ['users', usersRouter],
+  ['catalog', catalogRouter],
+  ['imports', importsRouter],
+  ['checks', checksRouter],
+  ['settings', settingsRouter],
+  ['jobs', jobsRouter],
+  ['systems', systemsRouter],
+  ['attachments', attachmentsRouter],
+  ['outbox', outboxRouter],
+  ['refrigerants', refrigerantsRouter],
+  ['commissioning', commissioningRouter],
+];

@@ -16,13 +16,24 @@ export const SETTING_FIELDS: { key: keyof Omit<RuleSettings, 'rebateTier'>; labe
   { key: 'defaultMaxLiftFt', label: 'Default max lift (ft)' },
 ];
 
+/** Start-up readings settings, shown in their own section of Admin → Rules. */
+export const COMMISSIONING_SETTING_FIELDS: typeof SETTING_FIELDS = [
+  { key: 'superheatToleranceF', label: 'Superheat margin, ± (°F)' },
+  { key: 'subcoolingToleranceF', label: 'Subcooling margin, ± (°F)' },
+  { key: 'evacuationTargetMicrons', label: 'Evacuation target (microns)' },
+  { key: 'decayLimitMicrons', label: 'Decay test: highest reading after the hold (microns)' },
+  { key: 'decayHoldMinutes', label: 'Decay test hold (minutes)' },
+];
+
+const ALL_SETTING_FIELDS = [...SETTING_FIELDS, ...COMMISSIONING_SETTING_FIELDS];
+
 const text = (n: number | undefined) => (n === undefined ? '' : String(n));
 const num = (s: string) => (s.trim() === '' ? undefined : Number(s.replace(/,/g, '')));
 
 export function draftOf(data: RulesSettingsResponse): RulesDraft {
   const t = data.settings.rebateTier;
   return {
-    settings: Object.fromEntries(SETTING_FIELDS.map((f) => [f.key, text(data.settings[f.key])])),
+    settings: Object.fromEntries(ALL_SETTING_FIELDS.map((f) => [f.key, text(data.settings[f.key])])),
     tier: { name: t?.name ?? '', seer2: text(t?.seer2), eer2: text(t?.eer2), hspf2: text(t?.hspf2) },
     rules: data.transitionRules.map((r) => ({ ...r })),
   };
@@ -31,7 +42,7 @@ export function draftOf(data: RulesSettingsResponse): RulesDraft {
 /** Validates the draft with the server's own schema; errors keyed by path ("settings.cfmPerTonMax"). */
 export function bodyOf(draft: RulesDraft): { ok: true; body: RulesSettingsBody } | { ok: false; errors: Record<string, string> } {
   const tierGiven = Object.values(draft.tier).some((v) => v.trim() !== '');
-  const settings: Record<string, unknown> = Object.fromEntries(SETTING_FIELDS.map((f) => [f.key, num(draft.settings[f.key] ?? '')]));
+  const settings: Record<string, unknown> = Object.fromEntries(ALL_SETTING_FIELDS.map((f) => [f.key, num(draft.settings[f.key] ?? '')]));
   if (tierGiven) {
     settings.rebateTier = { name: draft.tier.name, seer2: num(draft.tier.seer2), eer2: num(draft.tier.eer2), hspf2: num(draft.tier.hspf2) };
   }

@@ -9,6 +9,7 @@ import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
 import { bodyOf, draftOf, SETTING_FIELDS, type RulesDraft } from './rules-draft';
 import { TransitionRuleCard } from './transition-rule-card';
+import { CommissioningSettings } from './commissioning-settings';
 
 /** Admin → Rules: the shop's thresholds and the refrigerant transition rules checks run with. */
 export function RulesPanel() {
@@ -64,6 +65,12 @@ export function RulesPanel() {
               />
             ))}
           </View>
+          <CommissioningSettings
+            values={draft.settings}
+            defaults={query.data?.defaults}
+            errors={errors}
+            onChange={(key, v) => setDraft({ ...draft, settings: { ...draft.settings, [key]: v } })}
+          />
           <Button mode="text" icon="restore" onPress={resetDefaults} contentStyle={styles.button}>
             Put the default thresholds back
           </Button>

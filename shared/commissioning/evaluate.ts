@@ -1,3 +1,4 @@
+import { isA2L } from '../refrigerants';
 import { bubblePointF, dewPointF, SaturationRangeError } from '../refrigerants/saturation';
 import { PsychrometricInputError, wetBulbF } from '../psychrometrics/wet-bulb';
 import type { CommissioningEvaluateInput, CommissioningEvaluateResult } from '../schemas/commissioning';
@@ -56,8 +57,19 @@ function indoorWetBulb(input: CommissioningEvaluateInput, altitudeFt: number): {
   return {};
 }
 
+// The usual cautions for charging work (DESIGN: safety), shown with every verdict.
+export const CHARGING_CAUTION =
+  'Refrigerant work is for certified technicians only, with gauges and hoses rated for the refrigerant; follow the installation instructions — local codes and the authority having jurisdiction take precedence.';
+export const A2L_CAUTION =
+  'A2L refrigerant (mildly flammable): keep ignition sources away, ventilate the area, and use recovery equipment and cylinders rated for A2L refrigerants.';
+
 /** Superheat, subcooling, targets and verdict in °F for one set of start-up readings. */
 export function evaluateReadings(input: CommissioningEvaluateInput, settingsInput: CommissioningSettingsInput = {}): CommissioningEvaluateResult {
+  const result = judgeReadings(input, settingsInput);
+  return { ...result, cautions: isA2L(input.refrigerant) ? [CHARGING_CAUTION, A2L_CAUTION] : [CHARGING_CAUTION] };
+}
+
+function judgeReadings(input: CommissioningEvaluateInput, settingsInput: CommissioningSettingsInput): CommissioningEvaluateResult {
   const settings = resolveCommissioningSettings(settingsInput);
   const altitudeFt = input.altitudeFt ?? 0;
   const suctionSatF = round1(saturation(() => dewPointF(input.suctionPsig, input.refrigerant, altitudeFt), 'suctionPsig'));

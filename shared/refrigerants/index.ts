@@ -47,6 +47,7 @@ export {
   dewPointF,
   dewPressurePsig,
   glideF,
+  glideAtDewF,
   saturationRange,
   SaturationRangeError,
   SATURATION_MAX_F,

@@ -63,6 +63,37 @@ function pureLnPhi(Z: number, A: number, B: number): number {
   return Z - 1 - Math.log(Z - B) - (A / (2 * SQRT2 * B)) * attractionLog(Z, B);
 }
 
+/** Attraction parameter a in kPa·L²/mol² of the 1976 paper's generalized α(T) (Soave form in ω) at tempK. */
+export function standardAttraction(c: PrComponent, tempK: number): number {
+  const m = 0.37464 + 1.54226 * c.acentric - 0.26992 * c.acentric ** 2;
+  const alpha = (1 + m * (1 - Math.sqrt(tempK / c.criticalTempK))) ** 2;
+  return ((0.45724 * (R * c.criticalTempK) ** 2) / c.criticalPressureKpa) * alpha;
+}
+
+/**
+ * Saturation pressure in kPa of a pure fluid in PR for a given attraction a (kPa·L²/mol²) at tempK:
+ * the pressure where liquid and vapor fugacities are equal (Newton on ln p, d ln(φL/φV)/d ln p = ZL − ZV).
+ */
+export function prPureSaturationKpa(c: PrComponent, tempK: number, attraction: number, estimateKpa: number): number {
+  const rt = R * tempK;
+  let lnP = Math.log(estimateKpa);
+  for (let iter = 0; iter < 100; iter++) {
+    const p = Math.exp(lnP);
+    const A = (attraction * p) / (rt * rt);
+    const B = (coVolume(c) * p) / rt;
+    const [zl, zv] = prRoots(A, B);
+    if (zv - zl < 1e-9) {
+      lnP += zl > 0.3 ? 0.05 : -0.05;
+      continue;
+    }
+    const g = pureLnPhi(zl, A, B) - pureLnPhi(zv, A, B);
+    const step = g / (zl - zv);
+    lnP -= step;
+    if (Math.abs(step) < 1e-12) break;
+  }
+  return Math.exp(lnP);
+}
+
 /**
  * The attraction parameter a in kPa·L²/mol² that makes PR's liquid and vapor fugacities equal at the
  * component's reference vapor pressure at tempK (Newton on A; dg/dA is exact because Z is stationary).
@@ -71,9 +102,7 @@ export function matchedAttraction(c: PrComponent, tempK: number): number {
   const pKpa = c.vaporPressureKpa(tempK);
   const rt = R * tempK;
   const B = (coVolume(c) * pKpa) / rt;
-  const m = 0.37464 + 1.54226 * c.acentric - 0.26992 * c.acentric ** 2;
-  const alpha = (1 + m * (1 - Math.sqrt(tempK / c.criticalTempK))) ** 2;
-  let A = ((0.45724 * (R * c.criticalTempK) ** 2) / c.criticalPressureKpa) * alpha * (pKpa / (rt * rt));
+  let A = standardAttraction(c, tempK) * (pKpa / (rt * rt));
   for (let iter = 0; iter < 100; iter++) {
     const [zl, zv] = prRoots(A, B);
     if (zv - zl < 1e-9) {
@@ -85,7 +114,7 @@ export function matchedAttraction(c: PrComponent, tempK: number): number {
     const dg = -(attractionLog(zl, B) - attractionLog(zv, B)) / (2 * SQRT2 * B);
     const step = g / dg;
     A -= step;
-    if (Math.abs(step) < 1e-13 * A) break;
+    if (Math.abs(step) < 1e-11 * A) break;
   }
   return (A * rt * rt) / pKpa;
 }
@@ -119,12 +148,29 @@ function phaseLnPhi(a: number[], b: number[], kij: PrMixture['kij'], z: readonly
   return { lnPhi };
 }
 
-function componentTerms(mix: PrMixture, tempK: number) {
-  const a = mix.components.map((c) => matchedAttraction(c, tempK));
-  const b = mix.components.map(coVolume);
-  const psat = mix.components.map((c) => c.vaporPressureKpa(tempK));
-  return { a, b, psat };
+interface ComponentTerms {
+  tempK: number;
+  a: number[];
+  b: number[];
+  psat: number[];
 }
+
+/** Pure-component terms at one temperature; the last set is kept since bubble and dew ask for the same T in turn. */
+let lastTerms: { mix: PrMixture; terms: ComponentTerms } | undefined;
+function componentTerms(mix: PrMixture, tempK: number): ComponentTerms {
+  if (lastTerms && lastTerms.mix === mix && lastTerms.terms.tempK === tempK) return lastTerms.terms;
+  const terms = {
+    tempK,
+    a: mix.components.map((c) => matchedAttraction(c, tempK)),
+    b: mix.components.map(coVolume),
+    psat: mix.components.map((c) => c.vaporPressureKpa(tempK)),
+  };
+  lastTerms = { mix, terms };
+  return terms;
+}
+
+/** Successive substitution stops when Σ x·K (or Σ y/K) is this close to 1 (pressure to ~1e-11 relative). */
+const FLASH_TOLERANCE = 1e-11;
 
 /** Bubble-point pressure in kPa (absolute) of the mixture's liquid at a temperature in K. */
 export function prBubblePressureKpa(mix: PrMixture, tempK: number): number {
@@ -139,7 +185,7 @@ export function prBubblePressureKpa(mix: PrMixture, tempK: number): number {
     const s = kx.reduce((t, v) => t + v, 0);
     y = kx.map((v) => v / s);
     p *= s;
-    if (Math.abs(s - 1) < 1e-13) break;
+    if (Math.abs(s - 1) < FLASH_TOLERANCE) break;
   }
   return p;
 }
@@ -157,7 +203,7 @@ export function prDewPressureKpa(mix: PrMixture, tempK: number): number {
     const s = yk.reduce((t, v) => t + v, 0);
     x = yk.map((v) => v / s);
     p /= s;
-    if (Math.abs(s - 1) < 1e-13) break;
+    if (Math.abs(s - 1) < FLASH_TOLERANCE) break;
   }
   return p;
 }

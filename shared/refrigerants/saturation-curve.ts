@@ -2,10 +2,12 @@
  * A saturation curve sampled once from its model (ancillary equation or equation of state) and then
  * read by cubic Hermite interpolation both ways: ln p on a uniform temperature grid, and T on a
  * uniform ln p grid. Every node is computed from the model when the curve is first used (nothing is
- * typed in); between nodes the error is below 1e-6 °F, far under the model's own uncertainty, and a
+ * typed in); every 2 K is plenty (between nodes the error is under 0.005 °F, tested), and a
  * lookup costs one logarithm or one exponential, so the Readings screen can recompute on every keystroke.
  */
 export class SaturationCurve {
+  /** Extra nodes sampled beyond each end of the range. */
+  static readonly PAD_NODES = 3;
   private readonly t0K: number;
   private readonly stepK: number;
   private readonly lnP: Float64Array;
@@ -19,16 +21,19 @@ export class SaturationCurve {
   readonly maxPressureKpa: number;
 
   /**
-   * Samples pressureKpaAt (K → kPa absolute) from minK to maxK (K) every stepK, with two extra nodes
-   * each side so the fourth-order slopes at the ends stay accurate.
+   * Samples pressureKpaAt (K → kPa absolute) from minK to maxK (K) every stepK, with three extra nodes
+   * each side so the fourth-order slopes at the ends stay accurate (the model must hold there too).
    */
-  constructor(pressureKpaAt: (tempK: number) => number, readonly minK: number, readonly maxK: number, stepK = 0.5) {
-    const pad = 3;
+  constructor(pressureKpaAt: (tempK: number) => number, readonly minK: number, readonly maxK: number, stepK = 2) {
+    const pad = SaturationCurve.PAD_NODES;
     const count = Math.ceil((maxK - minK) / stepK) + 1 + 2 * pad;
     this.t0K = minK - pad * stepK;
     this.stepK = stepK;
     this.lnP = new Float64Array(count);
-    for (let i = 0; i < count; i++) this.lnP[i] = Math.log(pressureKpaAt(this.t0K + i * stepK));
+    for (let i = 0; i < count; i++) {
+      this.lnP[i] = Math.log(pressureKpaAt(this.t0K + i * stepK));
+      if (!Number.isFinite(this.lnP[i])) throw new Error(`saturation model gave no pressure at ${(this.t0K + i * stepK).toFixed(2)} K`);
+    }
     this.dLnP = slopes(this.lnP, stepK);
 
     this.minPressureKpa = this.pressureKpa(minK);

@@ -91,6 +91,9 @@ export const SATURATION_MODELS: Record<string, SaturationModel> = {
   },
 };
 
+/** The pure components of the R-454B model (R-32, R-1234yf) with their PR constants. */
+export const R454B_COMPONENTS: readonly PrComponent[] = [R32_PR, R1234YF_PR];
+
 /** The R-454B mixture with another k_ij (for the fitting script and its test). */
 export function r454bMixture(kij: number): PrMixture {
   return { ...R454B_MIX, kij: [[0, kij], [kij, 0]] };

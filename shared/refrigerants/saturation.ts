@@ -71,10 +71,12 @@ function curvesFor(refrigerant: string): Curves {
   const maxF = Math.min(SATURATION_MAX_F, kelvinToF(model.criticalTempK) - 5);
   const minK = fToKelvin(SATURATION_MIN_F);
   const maxK = fToKelvin(maxF);
+  // 2 K between nodes, closer when the padding nodes would otherwise reach the critical point.
+  const stepK = Math.min(2, (model.criticalTempK - maxK) / (SaturationCurve.PAD_NODES + 1));
   const curves: Curves = {
     model,
-    bubble: new SaturationCurve((t) => model.bubblePressureKpa(t), minK, maxK),
-    dew: new SaturationCurve((t) => model.dewPressureKpa(t), minK, maxK),
+    bubble: new SaturationCurve((t) => model.bubblePressureKpa(t), minK, maxK, stepK),
+    dew: new SaturationCurve((t) => model.dewPressureKpa(t), minK, maxK, stepK),
     maxF,
   };
   CURVES.set(model.id, curves);
@@ -91,34 +93,39 @@ function checkTemp(tempF: number, curves: Curves): number {
   return fToKelvin(tempF);
 }
 
-function absoluteKpa(psig: number, altitudeFt: number, refrigerant: string, curve: SaturationCurve, model: SaturationModel): number {
+function absoluteKpa(psig: number, altitudeFt: number, side: 'bubble' | 'dew', c: Curves): number {
   if (!Number.isFinite(psig)) throw new SaturationRangeError('psig', 'enter the pressure in psig');
-  const psia = psig + atmosphericPsia(altitudeFt);
-  if (psia <= 0) throw new SaturationRangeError('psig', `${round1(psig)} psig is below zero absolute pressure`);
-  const kpa = psia * KPA_PER_PSI;
   const atm = atmosphericPsia(altitudeFt);
-  const lowPsig = curve.minPressureKpa / KPA_PER_PSI - atm;
-  const highPsig = curve.maxPressureKpa / KPA_PER_PSI - atm;
+  const psia = psig + atm;
+  if (psia <= 0) throw new SaturationRangeError('psig', `${round1(psig)} psig is below zero absolute pressure (${round1(-atm)} psig here)`);
+  const kpa = psia * KPA_PER_PSI;
+  const curve = side === 'bubble' ? c.bubble : c.dew;
   const slack = 1e-9 * kpa;
-  if (kpa < curve.minPressureKpa - slack || kpa > curve.maxPressureKpa + slack) {
-    const why = kpa >= model.criticalPressureKpa ? `above the critical pressure of ${model.id}` : `outside the ${refrigerant} chart (${round1(lowPsig)} to ${round1(highPsig)} psig here)`;
+  if (kpa < curve.minPressureKpa - slack) {
+    const lowPsig = curve.minPressureKpa / KPA_PER_PSI - atm;
+    throw new SaturationRangeError('psig', `${round1(psig)} psig is below the ${c.model.id} chart, which starts at ${round2(lowPsig)} psig (${SATURATION_MIN_F} °F)`);
+  }
+  if (kpa > curve.maxPressureKpa + slack) {
+    const highPsig = curve.maxPressureKpa / KPA_PER_PSI - atm;
+    const why = kpa >= c.model.criticalPressureKpa ? `above the critical pressure of ${c.model.id}` : `above the ${c.model.id} chart, which ends at ${round2(highPsig)} psig (${round1(c.maxF)} °F)`;
     throw new SaturationRangeError('psig', `${round1(psig)} psig is ${why}`);
   }
   return kpa;
 }
 
 const round1 = (v: number) => Math.round(v * 10) / 10;
+const round2 = (v: number) => Math.round(v * 100) / 100;
 
 /** Bubble point in °F (saturated liquid; for subcooling) at a gauge pressure in psig, altitude in ft. */
 export function bubblePointF(psig: number, refrigerant: string, altitudeFt = 0): number {
   const c = curvesFor(refrigerant);
-  return kelvinToF(c.bubble.tempK(absoluteKpa(psig, altitudeFt, c.model.id, c.bubble, c.model)));
+  return kelvinToF(c.bubble.tempK(absoluteKpa(psig, altitudeFt, 'bubble', c)));
 }
 
 /** Dew point in °F (saturated vapor; for superheat) at a gauge pressure in psig, altitude in ft. */
 export function dewPointF(psig: number, refrigerant: string, altitudeFt = 0): number {
   const c = curvesFor(refrigerant);
-  return kelvinToF(c.dew.tempK(absoluteKpa(psig, altitudeFt, c.model.id, c.dew, c.model)));
+  return kelvinToF(c.dew.tempK(absoluteKpa(psig, altitudeFt, 'dew', c)));
 }
 
 /** Bubble-point gauge pressure in psig at a saturation temperature in °F, altitude in ft. */
@@ -136,6 +143,11 @@ export function dewPressurePsig(tempF: number, refrigerant: string, altitudeFt =
 /** Temperature glide in °F (dew − bubble) at a gauge pressure in psig; about 0 for a pure fluid. */
 export function glideF(psig: number, refrigerant: string, altitudeFt = 0): number {
   return dewPointF(psig, refrigerant, altitudeFt) - bubblePointF(psig, refrigerant, altitudeFt);
+}
+
+/** Glide in °F (dew − bubble) at the pressure whose dew point is dewF (°F), e.g. 40 °F for an evaporator; sea level. */
+export function glideAtDewF(dewF: number, refrigerant: string): number {
+  return glideF(dewPressurePsig(dewF, refrigerant), refrigerant);
 }
 
 /** The range the lookups accept for a refrigerant (°F, psia, psig at sea level). */

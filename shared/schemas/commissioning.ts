@@ -52,6 +52,8 @@ export interface CommissioningEvaluateResult {
   marginF?: number;
   /** Short plain reasons behind the verdict (for records and tests). */
   reasons?: string[];
+  /** Safety cautions for the work the advice leads to (certified technicians, A2L handling). */
+  cautions?: string[];
 }
 
 /** GET /api/refrigerants/:id/saturation query: exactly one of psig or tempF. */

@@ -28,9 +28,19 @@ export const RuleSettingsSchema = z
     defaultTargetSubcoolingF: z.number().min(0).max(30),
     defaultMaxLineLengthFt: z.number().min(5).max(500),
     defaultMaxLiftFt: z.number().min(0).max(300),
+    // Start-up readings (issue 9): the verdict's margins and the evacuation limits; blank keeps the default.
+    superheatToleranceF: optionalNumber(0.5, 15),
+    subcoolingToleranceF: optionalNumber(0.5, 10),
+    evacuationTargetMicrons: z.number().int().min(50).max(5000).optional(),
+    decayLimitMicrons: z.number().int().min(50).max(5000).optional(),
+    decayHoldMinutes: z.number().int().min(1).max(120).optional(),
     rebateTier: RebateTierSchema.optional(),
   })
-  .refine((s) => s.cfmPerTonMax > s.cfmPerTonMin, { error: 'cfmPerTonMax must be above cfmPerTonMin', path: ['cfmPerTonMax'] });
+  .refine((s) => s.cfmPerTonMax > s.cfmPerTonMin, { error: 'cfmPerTonMax must be above cfmPerTonMin', path: ['cfmPerTonMax'] })
+  .refine((s) => s.decayLimitMicrons === undefined || s.evacuationTargetMicrons === undefined || s.decayLimitMicrons > s.evacuationTargetMicrons, {
+    error: 'the decay test limit must be above the evacuation target',
+    path: ['decayLimitMicrons'],
+  });
 
 export const TransitionRuleSchema = z
   .object({

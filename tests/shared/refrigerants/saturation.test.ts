@@ -5,11 +5,13 @@ import {
   bubblePressurePsig,
   dewPointF,
   dewPressurePsig,
+  glideAtDewF,
   glideF,
   saturationRange,
   SaturationRangeError,
 } from '../../../shared/refrigerants';
 import { fToKelvin, KPA_PER_PSI } from '../../../shared/refrigerants/atmosphere';
+import { SATURATION_MODELS } from '../../../shared/refrigerants/saturation-models';
 import { referenceSaturationKpa } from './reference-eos';
 import { referenceValue } from './reference-values';
 
@@ -117,7 +119,7 @@ describe('glide of the blends', () => {
   it('when the glide is taken at dew points of 40 °F and 100 °F, then it matches the reference library', () => {
     // CoolProp 8.0.0 predefined mixtures, dew minus bubble at the same pressure — values.json PT-05 (±0.3 °F)
     const pt05 = referenceValue('PT-05').expected as Record<string, number>;
-    const glideAtDew = (refrigerant: string, dewF: number) => glideF(dewPressurePsig(dewF, refrigerant), refrigerant);
+    const glideAtDew = (refrigerant: string, dewF: number) => glideAtDewF(dewF, refrigerant);
     const cases: [string, number, number][] = [
       ['R-410A', 40, pt05['R-410A_F']],
       ['R-454B', 40, pt05['R-454B_F']],
@@ -211,7 +213,8 @@ describe('range errors', () => {
     expect(fieldOf(() => dewPointF(-12, 'R-32', 5000)).field).toBe('psig');
     expect(fieldOf(() => bubblePointF(900, 'R-410A')).field).toBe('psig');
     expect(fieldOf(() => bubblePointF(900, 'R-410A')).message).toMatch(/critical pressure/);
-    expect(fieldOf(() => bubblePointF(650, 'R-410A')).message).toMatch(/outside/);
+    expect(fieldOf(() => bubblePointF(650, 'R-410A')).message).toMatch(/above the R-410A chart, which ends at .* psig \(150 °F\)/);
+    expect(fieldOf(() => dewPointF(2, 'R-32')).message).toMatch(/below the R-32 chart, which starts at .* psig \(-40 °F\)/);
   });
 
   it('when the refrigerant is unknown, then the refrigerant field is named', () => {
@@ -231,6 +234,25 @@ describe('range errors', () => {
       expect(range.maxF).toBe(150);
       expect(range.criticalF).toBeGreaterThan(150);
       expect(range.maxDewPsig).toBeCloseTo(dewPressurePsig(150, r), 6);
+    }
+  });
+});
+
+describe('sampled curves against their models', () => {
+  it('when the curves are read between their nodes, then they match the model evaluated directly', () => {
+    // Interpolation check: the sampled curve adds no error that matters (0.005 °F ≈ 0.01 psi)
+    for (const [id, model] of Object.entries(SATURATION_MODELS)) {
+      for (let tempF = -39.3; tempF < 150; tempF += 3.7) {
+        const tempK = fToKelvin(tempF);
+        for (const [side, direct] of [
+          ['bubble', model.bubblePressureKpa(tempK)],
+          ['dew', model.dewPressureKpa(tempK)],
+        ] as const) {
+          const psig = direct / KPA_PER_PSI - SEA_LEVEL_PSIA;
+          const backF = side === 'bubble' ? bubblePointF(psig, id) : dewPointF(psig, id);
+          expect(Math.abs(backF - tempF), `${id} ${side} at ${tempF} °F`).toBeLessThan(0.005);
+        }
+      }
     }
   });
 });

@@ -1,0 +1,5 @@
+import { ReadingsScreen } from '@/components/readings/readings-screen';
+
+export default function ReadingsRoute() {
+  return <ReadingsScreen />;
+}
