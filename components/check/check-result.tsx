@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { Divider } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
+import { SaveToJob } from '@/components/jobs/save-to-job';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { SafetyNote } from '@/components/ui/safety-note';
 import type { CheckOutcome } from './check-store';
@@ -29,6 +30,7 @@ export function CheckResultView({ outcome, systemRefrigerant }: { outcome: Check
       <Divider />
       <ComputedBlock computed={result.computed} />
       <CoverageBlock coverage={result.coverage} />
+      <SaveToJob />
     </View>
   );
 }
