@@ -79,6 +79,19 @@ export interface SystemRecord {
   currentCheck?: { available: boolean; differs: boolean; verdict?: string; added: FindingKey[]; removed: FindingKey[]; message: string };
 }
 
+/** A record as a job's list shows it (GET /api/jobs/:id/systems). */
+export interface SystemSummary {
+  id: number;
+  status: SystemStatus;
+  revision: number;
+  label: string | null;
+  verdict: string;
+  outdoorModel: string | null;
+  indoorModel: string | null;
+  airHandlerModel: string | null;
+  updatedAt: string;
+}
+
 export interface OutboxEntry {
   id: number;
   systemId: number;
@@ -103,7 +116,7 @@ export const systemKeys = {
 export const jobSystemsQuery = (jobId: number) =>
   queryOptions({
     queryKey: systemKeys.byJob(jobId),
-    queryFn: ({ signal }) => api.get<{ items: SystemRecord[] }>(`/jobs/${jobId}/systems`, signal).then((r) => r.items),
+    queryFn: ({ signal }) => api.get<{ items: SystemSummary[] }>(`/jobs/${jobId}/systems`, signal).then((r) => r.items),
     staleTime: STALE.jobs,
   });
 

@@ -9,7 +9,7 @@ import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
 import { SectionCard } from '@/components/ui/section-card';
 import { PhotoThumb } from '@/components/systems/photo-thumb';
-import { RECORD_STATUS_WORDS, verdictText } from '@/components/systems/record-words';
+import { RECORD_STATUS_WORDS, verdictCodeText } from '@/components/systems/record-words';
 import { JOB_STATUS_WORDS, whenText } from './job-words';
 
 /** A job: the site and contact, its system records, its photos, and close / reopen. */
@@ -66,8 +66,8 @@ export function JobDetailScreen({ id }: { id: number }) {
             <Card.Content style={styles.row}>
               <Icon source="clipboard-text-outline" size={22} />
               <View style={styles.rowText}>
-                <Text variant="titleMedium">{s.label ?? `System record ${s.id}`}</Text>
-                <Text variant="bodyMedium">{`${verdictText(s.check)} · ${RECORD_STATUS_WORDS[s.status]} · revision ${s.revision}`}</Text>
+                <Text variant="titleMedium">{s.label ?? ([s.outdoorModel, s.indoorModel ?? s.airHandlerModel].filter(Boolean).join(' with ') || 'System record')}</Text>
+                <Text variant="bodyMedium">{`${verdictCodeText(s.verdict)} · ${RECORD_STATUS_WORDS[s.status]} · revision ${s.revision}`}</Text>
               </View>
             </Card.Content>
           </Card>

@@ -4,9 +4,7 @@ import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import type { SystemRecord } from '@/hooks/use-systems';
 import { SectionCard } from '@/components/ui/section-card';
 import { whenText } from '@/components/jobs/job-words';
-import { RECORD_STATUS_WORDS } from './record-words';
-
-const VERDICT_WORDS: Record<string, string> = { compatible: 'Compatible', 'compatible-with-cautions': 'Compatible with cautions', incompatible: 'Not compatible' };
+import { RECORD_STATUS_WORDS, verdictCodeText } from './record-words';
 
 /** Every revision of the record, newest first; each can be opened as it was saved. */
 export function HistoryCard({ record, viewing, onView }: { record: SystemRecord; viewing: number | null; onView(n: number | null): void }) {
@@ -17,7 +15,7 @@ export function HistoryCard({ record, viewing, onView }: { record: SystemRecord;
         <View key={r.revision} style={styles.row} testID={`revision-${r.revision}`}>
           <View style={styles.text}>
             <Text variant="titleSmall">{`Revision ${r.revision} · ${RECORD_STATUS_WORDS[r.status]}`}</Text>
-            <Text variant="bodySmall">{`${VERDICT_WORDS[r.verdict] ?? r.verdict} · saved ${whenText(r.savedAt)}${r.savedBy ? ` by ${r.savedBy.name}` : ''}`}</Text>
+            <Text variant="bodySmall">{`${verdictCodeText(r.verdict)} · saved ${whenText(r.savedAt)}${r.savedBy ? ` by ${r.savedBy.name}` : ''}`}</Text>
           </View>
           {r.revision === shown ? (
             <Text variant="labelLarge">Shown</Text>

@@ -140,8 +140,8 @@ export function RecordScreen({ id }: { id: number }) {
       <ScrollView style={styles.fill} contentContainerStyle={styles.columnContent} keyboardShouldPersistTaps="handled" testID="record-scroll">
         {heading}
         {banners}
-        {safety}
         {verdict}
+        {safety}
         {serials}
         {readings}
         {checklist}

@@ -11,6 +11,13 @@ export function verdictText(check: Pick<CheckResult, 'verdict' | 'findings'>): s
   return verdictWords(check).word;
 }
 
+const VERDICT_WORDS: Record<string, string> = { compatible: 'Compatible', 'compatible-with-cautions': 'Compatible with cautions', incompatible: 'Not compatible' };
+
+/** A stored verdict code in plain words (a list shows no findings, so no "Not allowed" here). */
+export function verdictCodeText(verdict: string): string {
+  return VERDICT_WORDS[verdict] ?? 'Unknown';
+}
+
 export const SERIAL_SLOTS = [
   { slot: 'outdoor', label: 'Outdoor unit' },
   { slot: 'indoorCoil', label: 'Indoor coil' },

@@ -72,6 +72,9 @@ describe('closing out an install on a phone (390×844)', () => {
     await expect.poll(() => page.url(), { timeout: 15_000 }).toContain('/check');
     await pick(page, 'outdoor', OUTDOOR);
     await pick(page, 'indoorCoil', COIL);
+    // A repair of an existing R-410A system: the 2025 new-system refrigerant limit (AIM Act technology
+    // transitions rule, 40 CFR 84 subpart B) does not block it.
+    await page.getByTestId('scope-component-replacement').click();
     await page.getByTestId('run-check').click();
     await expect.poll(() => page.getByTestId('verdict-word').textContent(), { timeout: 15_000 }).toMatch(/^Compatible/);
 
@@ -185,5 +188,5 @@ describe('closing out an install on a phone (390×844)', () => {
     await wide.getByTestId('jobs-search').fill('Sample Lane');
     await expect.poll(() => wide.getByTestId('jobs-list').textContent(), { timeout: 15_000 }).toContain('Robin Example');
     await shot(wide, 'jobs-wide');
-  });
+  }, 300_000);
 });
