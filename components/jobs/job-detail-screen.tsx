@@ -10,7 +10,7 @@ import { Screen } from '@/components/ui/screen';
 import { SectionCard } from '@/components/ui/section-card';
 import { PhotoThumb } from '@/components/systems/photo-thumb';
 import { RECORD_STATUS_WORDS, verdictCodeText } from '@/components/systems/record-words';
-import { JOB_STATUS_WORDS, whenText } from './job-words';
+import { fieldWord, JOB_STATUS_WORDS, whenText } from './job-words';
 
 /** A job: the site and contact, its system records, its photos, and close / reopen. */
 export function JobDetailScreen({ id }: { id: number }) {
@@ -81,7 +81,7 @@ export function JobDetailScreen({ id }: { id: number }) {
         <SectionCard title="Changes">
           {j.history.map((h, i) => (
             <Text key={i} variant="bodySmall">
-              {`${whenText(h.at)}${h.by ? ` · ${h.by.name}` : ''}: ${h.changes.map((c) => c.field).join(', ')}`}
+              {`${whenText(h.at)}${h.by ? ` · ${h.by.name}` : ''}: ${h.changes.map((c) => fieldWord(c.field)).join(', ')}`}
             </Text>
           ))}
         </SectionCard>

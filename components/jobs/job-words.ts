@@ -18,3 +18,18 @@ export function jobLine(job: Pick<Job, 'customerName' | 'siteAddress' | 'state'>
 export function pageCount(total: number, pageSize: number): number {
   return Math.max(1, Math.ceil(total / Math.max(1, pageSize)));
 }
+
+const FIELD_WORDS: Record<string, string> = {
+  customerName: 'customer',
+  siteAddress: 'site address',
+  state: 'state',
+  contactEmail: 'contact e-mail',
+  contactPhone: 'contact phone',
+  notes: 'notes',
+  status: 'status',
+};
+
+/** A changed job field in plain words ("contact e-mail"); an unknown one reads "details". */
+export function fieldWord(field: string): string {
+  return FIELD_WORDS[field] ?? 'details';
+}

@@ -5,7 +5,7 @@ import { initialReadingsDraft, liveReadings } from '../../components/readings/re
 import { DEFAULT_RULE_SETTINGS } from '../../shared/rules/settings';
 import { conflictRows, rebase } from '../../components/systems/record-conflict';
 import { readingBody } from '../../components/systems/reading-body';
-import { pageCount } from '../../components/jobs/job-words';
+import { fieldWord, pageCount } from '../../components/jobs/job-words';
 
 const row = (id: string, state: ChecklistRow['state'], note?: string): ChecklistRow => ({
   id,
@@ -80,5 +80,12 @@ describe('pageCount', () => {
   it('when 41 jobs are listed 20 a page, then there are 3 pages; an empty list still has one', () => {
     expect(pageCount(41, 20)).toBe(3);
     expect(pageCount(0, 20)).toBe(1);
+  });
+});
+
+describe('fieldWord', () => {
+  it('when a job change names a field, then the list shows it in plain words, never the raw key', () => {
+    expect(fieldWord('contactEmail')).toBe('contact e-mail');
+    expect(fieldWord('someNewField')).toBe('details');
   });
 });
