@@ -20,9 +20,16 @@ export function attachmentUpload(ctx: AppContext, router: Router) {
   const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: 1, fields: 5 } });
   router.post('/:id/attachments', upload.single('file'), async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    if (!req.file) throw new AppError('validation-failed', 'The request did not pass validation.', 422, [{ path: 'file', message: 'attach a photo' }]);
+    if (!req.file)
+      throw new AppError('validation-failed', 'The request did not pass validation.', 422, [{ path: 'file', message: 'attach a photo' }]);
     const fields = parseBody(UploadFieldsSchema, req.body ?? {});
-    const view = await saveAttachment(ctx, { jobId: id, ...fields, fileName: req.file.originalname, data: req.file.buffer, userId: currentUser(req).id });
+    const view = await saveAttachment(ctx, {
+      jobId: id,
+      ...fields,
+      fileName: req.file.originalname,
+      data: req.file.buffer,
+      userId: currentUser(req).id,
+    });
     res.status(201).json(view);
   });
   router.get('/:id/attachments', async (req, res) => {

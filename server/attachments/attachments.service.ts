@@ -35,8 +35,14 @@ export async function saveAttachment(ctx: AppContext, input: UploadInput): Promi
     const row = await withWriteLock(ctx, async (manager) => {
       if (input.systemId !== undefined) {
         const record = await manager.getRepository(SystemRecordRow).findOneBy({ id: input.systemId, jobId: input.jobId });
-        if (!record) throw new AppError('validation-failed', 'The request did not pass validation.', 422, [{ path: 'systemId', message: 'no record with this id on this job' }]);
-        if (record.status === 'final') throw new AppError('record-final', 'This record is final: start a new revision to add photos.', 409, { currentRevision: record.revision });
+        if (!record)
+          throw new AppError('validation-failed', 'The request did not pass validation.', 422, [
+            { path: 'systemId', message: 'no record with this id on this job' },
+          ]);
+        if (record.status === 'final')
+          throw new AppError('record-final', 'This record is final: start a new revision to add photos.', 409, {
+            currentRevision: record.revision,
+          });
       }
       return manager.getRepository(AttachmentRow).save({
         jobId: input.jobId,
@@ -80,6 +86,11 @@ export async function listAttachments(ctx: AppContext, jobId: number): Promise<A
  */
 export function displayName(sent: string, ext: string): string {
   const base = sent.split(/[\\/]/).pop() ?? '';
-  const stem = base.replace(/\.[^.]*$/, '').replace(/[^\w\- ]+/g, '').replace(/^[-\s]+/, '').trim().slice(0, 80);
+  const stem = base
+    .replace(/\.[^.]*$/, '')
+    .replace(/[^\w\- ]+/g, '')
+    .replace(/^[-\s]+/, '')
+    .trim()
+    .slice(0, 80);
   return `${stem || 'photo'}.${ext}`;
 }

@@ -7,4 +7,12 @@ import { JobChangeRow } from './job-change.entity';
 import { JobRow } from './job.entity';
 
 /** The entities of jobs and matched-system records (migration 1764900000000-jobs). */
-export const jobsEntities = [JobRow, JobChangeRow, SystemRecordRow, SystemRevisionRow, CommissioningReadingRow, AttachmentRow, OutboundEmailRow];
+export const jobsEntities = [
+  JobRow,
+  JobChangeRow,
+  SystemRecordRow,
+  SystemRevisionRow,
+  CommissioningReadingRow,
+  AttachmentRow,
+  OutboundEmailRow,
+];

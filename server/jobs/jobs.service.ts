@@ -26,14 +26,19 @@ export async function createJob(ctx: AppContext, body: JobCreate, userId: number
       createdAt: at,
       updatedAt: at,
     });
-    await manager.getRepository(JobChangeRow).save({ jobId: saved.id, userId, at, changes: [{ field: 'created', from: null, to: 'open' }] });
+    await manager
+      .getRepository(JobChangeRow)
+      .save({ jobId: saved.id, userId, at, changes: [{ field: 'created', from: null, to: 'open' }] });
     return saved;
   });
   return toJob(row, await userNames(ctx.dataSource.manager, [userId]));
 }
 
 /** Jobs newest first, searched by customer or address (case-insensitive substring), filtered by status. */
-export async function listJobs(ctx: AppContext, query: JobListQuery): Promise<{ items: Job[]; total: number; page: number; pageSize: number }> {
+export async function listJobs(
+  ctx: AppContext,
+  query: JobListQuery,
+): Promise<{ items: Job[]; total: number; page: number; pageSize: number }> {
   const qb = ctx.dataSource.getRepository(JobRow).createQueryBuilder('j');
   if (query.status) qb.andWhere('j.status = :status', { status: query.status });
   if (query.q) {
@@ -51,7 +56,10 @@ export async function listJobs(ctx: AppContext, query: JobListQuery): Promise<{ 
     .skip((query.page - 1) * query.pageSize)
     .take(query.pageSize)
     .getManyAndCount();
-  const names = await userNames(ctx.dataSource.manager, rows.map((r) => r.createdBy));
+  const names = await userNames(
+    ctx.dataSource.manager,
+    rows.map((r) => r.createdBy),
+  );
   return { items: rows.map((r) => toJob(r, names)), total, page: query.page, pageSize: query.pageSize };
 }
 

@@ -22,7 +22,12 @@ const MAX_MESSAGE_BYTES = 25 * 1024 * 1024;
  * Demo mode's mail service: an SMTP server on the loopback interface that keeps every message it
  * receives as an .eml file under the data dir, so a sent report can be opened without a real mail host.
  */
-export async function startLocalMailService(options: { dataDir: string; port: number; from?: string; onError?: (err: Error) => void }): Promise<LocalMailService> {
+export async function startLocalMailService(options: {
+  dataDir: string;
+  port: number;
+  from?: string;
+  onError?: (err: Error) => void;
+}): Promise<LocalMailService> {
   const dir = path.join(options.dataDir, 'mail');
   await mkdir(dir, { recursive: true });
   const server = new SMTPServer({

@@ -22,7 +22,9 @@ export function outboxView(row: OutboundEmailRow) {
 
 /** Every attempt, newest first, paged. */
 export async function listOutbox(ctx: AppContext, page: number, pageSize: number) {
-  const [rows, total] = await ctx.dataSource.getRepository(OutboundEmailRow).findAndCount({ order: { id: 'DESC' }, skip: (page - 1) * pageSize, take: pageSize });
+  const [rows, total] = await ctx.dataSource
+    .getRepository(OutboundEmailRow)
+    .findAndCount({ order: { id: 'DESC' }, skip: (page - 1) * pageSize, take: pageSize });
   return { items: rows.map(outboxView), total, page, pageSize };
 }
 

@@ -22,12 +22,19 @@ export const RESEND_WINDOW_MS = 60_000;
 export async function sendReport(ctx: AppContext, id: number, body: SendReport, userId: number) {
   const { record } = await loadCurrent(ctx.dataSource.manager, id);
   const smtp = ctx.config.smtp;
-  if (!smtp) throw new AppError('mail-not-configured', 'E-mail is not set up on this server: ask your office to add the SMTP settings.', 503);
+  if (!smtp)
+    throw new AppError('mail-not-configured', 'E-mail is not set up on this server: ask your office to add the SMTP settings.', 503);
   if (!body.confirm) {
     const since = new Date(Date.now() - RESEND_WINDOW_MS).toISOString();
-    const recent = await ctx.dataSource.getRepository(OutboundEmailRow).findOne({ where: { systemId: id, status: 'sent', createdAt: MoreThan(since) }, order: { id: 'DESC' } });
+    const recent = await ctx.dataSource
+      .getRepository(OutboundEmailRow)
+      .findOne({ where: { systemId: id, status: 'sent', createdAt: MoreThan(since) }, order: { id: 'DESC' } });
     if (recent) {
-      throw new AppError('recently-sent', `This report was sent to ${recent.to} less than a minute ago. Send it again?`, 409, { sentAt: recent.createdAt, to: recent.to, confirmWith: { confirm: true } });
+      throw new AppError('recently-sent', `This report was sent to ${recent.to} less than a minute ago. Send it again?`, 409, {
+        sentAt: recent.createdAt,
+        to: recent.to,
+        confirmWith: { confirm: true },
+      });
     }
   }
   const job = await ctx.dataSource.getRepository(JobRow).findOneByOrFail({ id: record.jobId });
@@ -48,13 +55,19 @@ export async function sendReport(ctx: AppContext, id: number, body: SendReport, 
     messageId = info.messageId;
   } catch (err) {
     const reason = err instanceof Error ? err.message.slice(0, 300) : 'unknown error';
-    await withWriteLock(ctx, (manager) => manager.getRepository(OutboundEmailRow).insert({ ...attempt, status: 'failed', messageId: null, error: reason, reportKey: null, reportFileName: null }));
+    await withWriteLock(ctx, (manager) =>
+      manager
+        .getRepository(OutboundEmailRow)
+        .insert({ ...attempt, status: 'failed', messageId: null, error: reason, reportKey: null, reportFileName: null }),
+    );
     ctx.logger.warn({ systemId: id, err: reason }, 'report e-mail failed');
     throw new AppError('mail-failed', 'The mail server did not accept the report. Nothing was sent; try again later.', 502, { reason });
   }
   const reportKey = await storageFor(ctx).put(report.pdf);
   const row = await withWriteLock(ctx, (manager) =>
-    manager.getRepository(OutboundEmailRow).save({ ...attempt, status: 'sent', messageId, error: null, reportKey, reportFileName: report.fileName }),
+    manager
+      .getRepository(OutboundEmailRow)
+      .save({ ...attempt, status: 'sent', messageId, error: null, reportKey, reportFileName: report.fileName }),
   );
   return outboxView(row);
 }

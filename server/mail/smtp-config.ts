@@ -21,8 +21,7 @@ export interface SmtpConfig {
   from: string;
 }
 
-const SmtpEnvSchema = z.object(SmtpEnvShape);
-type SmtpEnv = z.infer<typeof SmtpEnvSchema>;
+type SmtpEnv = z.infer<z.ZodObject<typeof SmtpEnvShape>>;
 
 /** The SMTP settings, or undefined when no host is set; a user without a password is a configuration error. */
 export function smtpConfigOf(e: SmtpEnv): SmtpConfig | undefined {

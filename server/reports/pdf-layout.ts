@@ -1,8 +1,18 @@
 import path from 'node:path';
+import { openSync } from 'fontkit';
 import PDFDocument from 'pdfkit';
 
 export const FONT = { regular: 'Inter', medium: 'Inter-Medium', bold: 'Inter-Bold' } as const;
 const FONT_DIR = path.resolve(__dirname, '../../assets/fonts');
+
+// Parsed once per process and shared by every document: parsing and shaping with a fresh font
+// per report cost about twice the rest of the render. pdfkit takes a fontkit font as a font source.
+let fonts: Record<keyof typeof FONT, Buffer> | undefined;
+function sharedFonts() {
+  const open = (file: string) => openSync(path.join(FONT_DIR, file)) as unknown as Buffer;
+  fonts ??= { regular: open('Inter_400Regular.ttf'), medium: open('Inter_600SemiBold.ttf'), bold: open('Inter_700Bold.ttf') };
+  return fonts;
+}
 
 /** Paper sizes in points (1/72 in): US Letter 8.5 × 11 in, ISO A4 210 × 297 mm. */
 export const PAPER = { letter: 'LETTER', a4: 'A4' } as const;
@@ -24,10 +34,16 @@ export class PdfLayout {
   readonly doc: PDFKit.PDFDocument;
 
   constructor(paper: Paper, info: { title: string; author: string }) {
-    this.doc = new PDFDocument({ size: PAPER[paper], margin: MARGIN_PT, bufferPages: true, info: { Title: info.title, Author: info.author } });
-    this.doc.registerFont(FONT.regular, path.join(FONT_DIR, 'Inter_400Regular.ttf'));
-    this.doc.registerFont(FONT.medium, path.join(FONT_DIR, 'Inter_600SemiBold.ttf'));
-    this.doc.registerFont(FONT.bold, path.join(FONT_DIR, 'Inter_700Bold.ttf'));
+    this.doc = new PDFDocument({
+      size: PAPER[paper],
+      margin: MARGIN_PT,
+      bufferPages: true,
+      info: { Title: info.title, Author: info.author },
+    });
+    const shared = sharedFonts();
+    this.doc.registerFont(FONT.regular, shared.regular);
+    this.doc.registerFont(FONT.medium, shared.medium);
+    this.doc.registerFont(FONT.bold, shared.bold);
     this.doc.font(FONT.regular).fontSize(8.5).fillColor(INK);
   }
 
@@ -53,7 +69,12 @@ export class PdfLayout {
     this.ensure(keepWithPt);
     this.doc.moveDown(0.35).font(FONT.bold).fontSize(9.5).fillColor(INK).text(text, this.left, this.doc.y, { width: this.width });
     const y = this.doc.y + 1;
-    this.doc.moveTo(this.left, y).lineTo(this.left + this.width, y).lineWidth(0.5).strokeColor(RULE).stroke();
+    this.doc
+      .moveTo(this.left, y)
+      .lineTo(this.left + this.width, y)
+      .lineWidth(0.5)
+      .strokeColor(RULE)
+      .stroke();
     this.doc.y = y + 3;
     this.doc.font(FONT.regular).fontSize(8.5);
   }
@@ -77,7 +98,11 @@ export class PdfLayout {
       const height = Math.max(...cells.map((cell, i) => this.doc.heightOfString(cell || ' ', { width: widths[i] - pad * 2 }))) + pad * 2;
       if (this.doc.y + height > this.bottom) {
         this.doc.addPage();
-        if (!header) drawRow(columns.map((c) => c.header), true);
+        if (!header)
+          drawRow(
+            columns.map((c) => c.header),
+            true,
+          );
         this.doc.font(header ? FONT.medium : FONT.regular).fontSize(header ? 6.5 : 7.5);
       }
       const top = this.doc.y;
@@ -86,11 +111,19 @@ export class PdfLayout {
         this.doc.fillColor(header ? MUTED : INK).text(cell, x + pad, top + pad, { width: widths[i] - pad * 2 });
         x += widths[i];
       });
-      this.doc.moveTo(this.left, top + height).lineTo(this.left + this.width, top + height).lineWidth(0.3).strokeColor(RULE).stroke();
+      this.doc
+        .moveTo(this.left, top + height)
+        .lineTo(this.left + this.width, top + height)
+        .lineWidth(0.3)
+        .strokeColor(RULE)
+        .stroke();
       this.doc.y = top + height;
       this.doc.x = this.left;
     };
-    drawRow(columns.map((c) => c.header), true);
+    drawRow(
+      columns.map((c) => c.header),
+      true,
+    );
     for (const row of rows) drawRow(row, false);
     this.doc.fillColor(INK).font(FONT.regular).fontSize(8.5);
   }
@@ -118,9 +151,17 @@ export class PdfLayout {
       try {
         this.doc.image(item.data, x, y, { fit: [cellPt, cellPt * 0.75], align: 'center', valign: 'center' });
       } catch {
-        this.doc.rect(x, y, cellPt, cellPt * 0.75).lineWidth(0.5).strokeColor(RULE).stroke();
+        this.doc
+          .rect(x, y, cellPt, cellPt * 0.75)
+          .lineWidth(0.5)
+          .strokeColor(RULE)
+          .stroke();
       }
-      this.doc.font(FONT.regular).fontSize(6.5).fillColor(MUTED).text(item.caption, x, y + cellPt * 0.75 + 1, { width: cellPt, ellipsis: true, lineBreak: false });
+      this.doc
+        .font(FONT.regular)
+        .fontSize(6.5)
+        .fillColor(MUTED)
+        .text(item.caption, x, y + cellPt * 0.75 + 1, { width: cellPt, ellipsis: true, lineBreak: false });
     });
     this.doc.x = this.left;
     this.doc.y = top;
@@ -142,8 +183,16 @@ export class PdfLayout {
     const each = (this.width - 24 * (labels.length - 1)) / labels.length;
     labels.forEach((label, i) => {
       const x = this.left + i * (each + 24);
-      this.doc.moveTo(x, top).lineTo(x + each, top).lineWidth(0.6).strokeColor(INK).stroke();
-      this.doc.fontSize(7.5).fillColor(MUTED).text(label, x, top + 3, { width: each });
+      this.doc
+        .moveTo(x, top)
+        .lineTo(x + each, top)
+        .lineWidth(0.6)
+        .strokeColor(INK)
+        .stroke();
+      this.doc
+        .fontSize(7.5)
+        .fillColor(MUTED)
+        .text(label, x, top + 3, { width: each });
     });
     this.doc.y = top + 16;
     this.doc.x = this.left;
@@ -165,7 +214,11 @@ export class PdfLayout {
       // Drawing below the bottom margin would add a page: lift the margin while writing the footer.
       const bottom = this.doc.page.margins.bottom;
       this.doc.page.margins.bottom = 0;
-      this.doc.font(FONT.regular).fontSize(7).fillColor(MUTED).text(footer(i + 1, range.count), this.left, y, { width: this.width, align: 'center', lineBreak: false });
+      this.doc
+        .font(FONT.regular)
+        .fontSize(7)
+        .fillColor(MUTED)
+        .text(footer(i + 1, range.count), this.left, y, { width: this.width, align: 'center', lineBreak: false });
       this.doc.page.margins.bottom = bottom;
     }
     this.doc.end();

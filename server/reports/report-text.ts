@@ -4,8 +4,17 @@ import type { SystemView } from '../systems/system-view';
 /** Plain words for the report (no internal codes on paper). */
 export const SEVERITY_WORDS: Record<Finding['severity'], string> = { blocker: 'Blocker', caution: 'Caution', info: 'Note' };
 export const STATE_WORDS = { done: 'Done', 'not-applicable': 'N/A', open: 'Open' } as const;
-export const READING_VERDICT_WORDS: Record<string, string> = { 'on-target': 'On target', 'off-target': 'Off target', 'not-evaluated': 'Not evaluated' };
-export const PART_LABELS = { outdoor: 'Outdoor unit', indoorCoil: 'Indoor coil', airHandler: 'Air handler / furnace', metering: 'Metering device' } as const;
+export const READING_VERDICT_WORDS: Record<string, string> = {
+  'on-target': 'On target',
+  'off-target': 'Off target',
+  'not-evaluated': 'Not evaluated',
+};
+export const PART_LABELS = {
+  outdoor: 'Outdoor unit',
+  indoorCoil: 'Indoor coil',
+  airHandler: 'Air handler / furnace',
+  metering: 'Metering device',
+} as const;
 
 export const SAFETY_NOTE =
   'Installation, brazing, pressure testing, refrigerant handling and electrical work are for licensed and certified people only. ' +
@@ -26,7 +35,11 @@ export function fmt(value: number | undefined | null, unit: string, digits = 1):
 export function regionalLine(record: SystemView): string {
   const min = record.check.computed.regionalMinimum as { regionName: string; seer2?: number; eer2?: number; hspf2?: number } | undefined;
   if (!min) return 'Regional minimum: not checked (site state or rated figures missing).';
-  const parts = [min.seer2 !== undefined ? `SEER2 ${min.seer2}` : '', min.eer2 !== undefined ? `EER2 ${min.eer2}` : '', min.hspf2 !== undefined ? `HSPF2 ${min.hspf2}` : ''].filter(Boolean);
+  const parts = [
+    min.seer2 !== undefined ? `SEER2 ${min.seer2}` : '',
+    min.eer2 !== undefined ? `EER2 ${min.eer2}` : '',
+    min.hspf2 !== undefined ? `HSPF2 ${min.hspf2}` : '',
+  ].filter(Boolean);
   const findings = record.check.findings.filter((f) => f.ruleId === 'efficiency.regional-minimum');
   const below = findings.some((f) => f.severity === 'blocker');
   const unchecked = findings.some((f) => f.values.missing !== undefined);

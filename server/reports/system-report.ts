@@ -4,7 +4,17 @@ import { PART_SLOTS } from '../systems/system-types';
 import type { SystemView } from '../systems/system-view';
 import { PdfLayout, type Paper } from './pdf-layout';
 import { loadReportData, type ReportData } from './report-data';
-import { dateTimeText, fmt, PART_LABELS, ratingLine, READING_VERDICT_WORDS, regionalLine, SAFETY_NOTE, SEVERITY_WORDS, STATE_WORDS } from './report-text';
+import {
+  dateTimeText,
+  fmt,
+  PART_LABELS,
+  ratingLine,
+  READING_VERDICT_WORDS,
+  regionalLine,
+  SAFETY_NOTE,
+  SEVERITY_WORDS,
+  STATE_WORDS,
+} from './report-text';
 import { verdictWord } from './verdict-words';
 
 export const ReportQuerySchema = z.object({
@@ -25,21 +35,26 @@ export async function drawReport(data: ReportData, paper: Paper): Promise<Buffer
   const layout = new PdfLayout(paper, { title: `Matched-system record — ${job.customerName}`, author: data.shopName });
   header(layout, data);
   layout.heading(`Result: ${verdictWord(record.check)}`);
-  layout.paragraph(`As it stood for this revision: checked ${dateTimeText(record.savedAt)} with rules version ${record.rulesVersion}.`, { muted: true });
+  layout.paragraph(`As it stood for this revision: checked ${dateTimeText(record.savedAt)} with rules version ${record.rulesVersion}.`, {
+    muted: true,
+  });
   parts(layout, record);
   layout.paragraph(ratingLine(record));
   layout.paragraph(regionalLine(record));
   findings(layout, record);
   readings(layout, record);
   checklist(layout, record);
-  layout.heading('Safety', 120);
+  layout.heading('Safety', data.photos.length > 0 ? 110 : 72);
   const photos = data.photos.map((p) => ({ data: p.data, caption: p.fileName }));
   layout.besideImages('Nameplate photos', photos, 76, () => {
     layout.paragraph(SAFETY_NOTE);
     layout.signatures(['Technician — name, signature, date', 'Customer — name, signature, date']);
   });
   const revisionText = `Revision ${record.revision}${record.status === 'final' ? '' : ' (draft)'}`;
-  return layout.finish((page, pages) => `${data.shopName} · ${job.customerName} · ${revisionText} · page ${page} of ${pages} · printed ${dateTimeText(data.generatedAt)}`);
+  return layout.finish(
+    (page, pages) =>
+      `${data.shopName} · ${job.customerName} · ${revisionText} · page ${page} of ${pages} · printed ${dateTimeText(data.generatedAt)}`,
+  );
 }
 
 function header(layout: PdfLayout, { shopName, job, record }: ReportData) {
@@ -55,7 +70,9 @@ function header(layout: PdfLayout, { shopName, job, record }: ReportData) {
   const contact = [job.contactEmail, job.contactPhone].filter(Boolean).join(' · ');
   layout.paragraph(`Customer: ${job.customerName}${contact ? ` (${contact})` : ''}`, { bold: true });
   const scope = record.request.scope === 'new-system' ? 'new system' : 'component replacement';
-  layout.paragraph(`Site: ${job.siteAddress} (${job.state})${record.label ? ` — ${record.label}` : ''} · Scope: ${scope}${record.parts.installDate ? ` · install date ${record.parts.installDate}` : ''}`);
+  layout.paragraph(
+    `Site: ${job.siteAddress} (${job.state})${record.label ? ` — ${record.label}` : ''} · Scope: ${scope}${record.parts.installDate ? ` · install date ${record.parts.installDate}` : ''}`,
+  );
 }
 
 function parts(layout: PdfLayout, record: SystemView) {
@@ -64,10 +81,31 @@ function parts(layout: PdfLayout, record: SystemView) {
   const rows = PART_SLOTS.flatMap((slot) => {
     const part = record.parts[slot];
     if (!part) return [];
-    const spec = part.spec as { brand?: string; model?: string; refrigerant?: string; refrigerants?: string[]; nominalTons?: number; minTons?: number; maxTons?: number };
+    const spec = part.spec as {
+      brand?: string;
+      model?: string;
+      refrigerant?: string;
+      refrigerants?: string[];
+      nominalTons?: number;
+      minTons?: number;
+      maxTons?: number;
+    };
     const ref = spec.refrigerant ?? spec.refrigerants?.join(', ') ?? '';
-    const size = spec.nominalTons !== undefined ? `${spec.nominalTons} ton` : spec.minTons !== undefined ? `${spec.minTons}–${spec.maxTons ?? spec.minTons} ton` : '';
-    return [[PART_LABELS[slot], [spec.brand, spec.model ?? '(model not given)'].filter(Boolean).join(' '), serials[slot] ?? '—', [ref, size].filter(Boolean).join(' · '), part.kept ? 'Kept' : 'New']];
+    const size =
+      spec.nominalTons !== undefined
+        ? `${spec.nominalTons} ton`
+        : spec.minTons !== undefined
+          ? `${spec.minTons}–${spec.maxTons ?? spec.minTons} ton`
+          : '';
+    return [
+      [
+        PART_LABELS[slot],
+        [spec.brand, spec.model ?? '(model not given)'].filter(Boolean).join(' '),
+        serials[slot] ?? '—',
+        [ref, size].filter(Boolean).join(' · '),
+        part.kept ? 'Kept' : 'New',
+      ],
+    ];
   });
   layout.table(
     [
@@ -94,7 +132,11 @@ function findings(layout: PdfLayout, record: SystemView) {
         { header: 'Finding', share: 0.65 },
         { header: 'Basis', share: 0.26 },
       ],
-      shown.map((f) => [SEVERITY_WORDS[f.severity], `${f.title}: ${f.detail}${f.fix && f.severity !== 'info' ? ` Fix: ${f.fix}` : ''}`, f.basis.citation]),
+      shown.map((f) => [
+        SEVERITY_WORDS[f.severity],
+        `${f.title}: ${f.detail}${f.fix && f.severity !== 'info' ? ` Fix: ${f.fix}` : ''}`,
+        f.basis.citation,
+      ]),
     );
   }
   if (missing.length > 0) {

@@ -25,13 +25,24 @@ const brief = (f: Finding): FindingKey => ({ ruleId: f.ruleId, severity: f.sever
  * Re-runs the stored record's check with today's catalog, settings and rules (nothing is saved) and
  * compares verdicts and findings, so a record can say when today's rules would answer differently.
  */
-export async function compareWithToday(ctx: AppContext, content: RecordContent, installDate: string, stored: CheckResult): Promise<CurrentCheck> {
+export async function compareWithToday(
+  ctx: AppContext,
+  content: RecordContent,
+  installDate: string,
+  stored: CheckResult,
+): Promise<CurrentCheck> {
   let today: CheckResult;
   try {
     today = (await takeSnapshot(ctx, content, installDate)).check;
   } catch (err) {
     if (!(err instanceof AppError)) throw err;
-    return { available: false, differs: false, added: [], removed: [], message: 'Today’s check could not be run: a catalog part of this record is no longer listed.' };
+    return {
+      available: false,
+      differs: false,
+      added: [],
+      removed: [],
+      message: 'Today’s check could not be run: a catalog part of this record is no longer listed.',
+    };
   }
   const before = new Set(stored.findings.map(keyOf));
   const now = new Set(today.findings.map(keyOf));

@@ -17,7 +17,9 @@ export function evaluateReading(body: ReadingCreate, settings: RuleSettings, par
       results.charge = evaluateReadings({ ...body.charge, ...(targetSubcoolingF !== undefined ? { targetSubcoolingF } : {}) }, settings);
     } catch (err) {
       if (!(err instanceof ReadingInputError)) throw err;
-      throw new AppError('validation-failed', 'The request did not pass validation.', 422, [{ path: `charge.${err.field}`, message: err.message }]);
+      throw new AppError('validation-failed', 'The request did not pass validation.', 422, [
+        { path: `charge.${err.field}`, message: err.message },
+      ]);
     }
   }
   if (body.evacuation) {

@@ -20,7 +20,10 @@ export async function addReading(ctx: AppContext, id: number, body: ReadingCreat
   const row = await withWriteLock(ctx, async (manager) => {
     const { record } = await loadCurrent(manager, id);
     if (record.status === 'final') {
-      throw new AppError('record-final', 'This record is final: start a new revision to add readings.', 409, { currentRevision: record.revision, status: record.status });
+      throw new AppError('record-final', 'This record is final: start a new revision to add readings.', 409, {
+        currentRevision: record.revision,
+        status: record.status,
+      });
     }
     return manager.getRepository(CommissioningReadingRow).save({
       systemId: id,

@@ -35,7 +35,10 @@ export async function takeSnapshot(ctx: AppContext, content: RecordContent, inst
 /** The cheapest current price of each catalog part (typed nameplate parts have no price). */
 async function priceSnapshot(ctx: AppContext, parts: ResolvedParts): Promise<PriceSnapshot> {
   const slots = PART_SLOTS.filter((slot) => parts[slot]?.id !== undefined && parts[slot]?.spec.model);
-  const prices = await currentPricesBatch(ctx, slots.map((slot) => parts[slot]!.spec.model!));
+  const prices = await currentPricesBatch(
+    ctx,
+    slots.map((slot) => parts[slot]!.spec.model!),
+  );
   const snapshot: PriceSnapshot = { asOf: today(), parts: {} };
   let totalCents = 0;
   for (const slot of slots) {

@@ -1,4 +1,10 @@
-import { applyChecklistStates, deriveChecklist, openChecklistItems, type ChecklistOptions, type ChecklistRow } from '../../shared/checklist/index';
+import {
+  applyChecklistStates,
+  deriveChecklist,
+  openChecklistItems,
+  type ChecklistOptions,
+  type ChecklistRow,
+} from '../../shared/checklist/index';
 import type { AttachmentRow } from '../attachments/attachment.entity';
 import { who } from '../lib/user-names';
 import type { CommissioningReadingRow } from './commissioning-reading.entity';
@@ -14,13 +20,32 @@ export function checklistOf(rev: SystemRevisionRow, options: ChecklistOptions = 
 
 /** A reading as the API answers it. */
 export function readingView(r: CommissioningReadingRow, names: Map<number, string>) {
-  return { id: r.id, revision: r.revision, takenAt: r.takenAt, takenBy: who(r.takenBy, names), label: r.label, input: r.input, results: r.results };
+  return {
+    id: r.id,
+    revision: r.revision,
+    takenAt: r.takenAt,
+    takenBy: who(r.takenBy, names),
+    label: r.label,
+    input: r.input,
+    results: r.results,
+  };
 }
 export type ReadingView = ReturnType<typeof readingView>;
 
 /** An attachment's public facts (never its storage key). */
 export function attachmentView(a: AttachmentRow) {
-  return { id: a.id, jobId: a.jobId, systemId: a.systemId, kind: a.kind, fileName: a.fileName, contentType: a.contentType, sizeBytes: a.sizeBytes, sha256: a.sha256, createdAt: a.createdAt, url: `/api/attachments/${a.id}` };
+  return {
+    id: a.id,
+    jobId: a.jobId,
+    systemId: a.systemId,
+    kind: a.kind,
+    fileName: a.fileName,
+    contentType: a.contentType,
+    sizeBytes: a.sizeBytes,
+    sha256: a.sha256,
+    createdAt: a.createdAt,
+    url: `/api/attachments/${a.id}`,
+  };
 }
 export type AttachmentView = ReturnType<typeof attachmentView>;
 
@@ -37,7 +62,13 @@ export interface RevisionSummary {
 export function systemView(
   record: SystemRecordRow,
   rev: SystemRevisionRow,
-  extra: { readings: CommissioningReadingRow[]; attachments: AttachmentRow[]; revisions: SystemRevisionRow[]; names: Map<number, string>; checklistOptions: ChecklistOptions },
+  extra: {
+    readings: CommissioningReadingRow[];
+    attachments: AttachmentRow[];
+    revisions: SystemRevisionRow[];
+    names: Map<number, string>;
+    checklistOptions: ChecklistOptions;
+  },
 ) {
   const { serials, checklist: _states, label, ...request } = rev.content;
   const checklist = checklistOf(rev, extra.checklistOptions);
@@ -64,9 +95,14 @@ export function systemView(
     finalizedBy: who(rev.finalizedBy, extra.names),
     readings: extra.readings.filter((r) => r.revision <= rev.revision).map((r) => readingView(r, extra.names)),
     attachments: extra.attachments.map(attachmentView),
-    revisions: extra.revisions.map(
-      (r): RevisionSummary => ({ revision: r.revision, status: r.status, verdict: r.verdict, savedAt: r.savedAt, savedBy: who(r.savedBy, extra.names), finalizedAt: r.finalizedAt }),
-    ),
+    revisions: extra.revisions.map((r): RevisionSummary => ({
+      revision: r.revision,
+      status: r.status,
+      verdict: r.verdict,
+      savedAt: r.savedAt,
+      savedBy: who(r.savedBy, extra.names),
+      finalizedAt: r.finalizedAt,
+    })),
     createdAt: record.createdAt,
     createdBy: who(record.createdBy, extra.names),
   };

@@ -32,7 +32,9 @@ export async function createSystem(ctx: AppContext, jobId: number, body: SystemC
   const snapshot = await takeSnapshot(ctx, body);
   const id = await withWriteLock(ctx, async (manager) => {
     const at = nowIso();
-    const record = await manager.getRepository(SystemRecordRow).save({ jobId, status: 'draft', revision: 1, createdBy: userId, createdAt: at, updatedAt: at });
+    const record = await manager
+      .getRepository(SystemRecordRow)
+      .save({ jobId, status: 'draft', revision: 1, createdBy: userId, createdAt: at, updatedAt: at });
     await insertRevision(manager, record.id, 1, body, snapshot, userId, at);
     return record.id;
   });
@@ -80,7 +82,10 @@ export async function finalizeSystem(ctx: AppContext, id: number, body: SystemFi
     const at = nowIso();
     await manager
       .getRepository(SystemRevisionRow)
-      .update({ id: revision.id }, { status: 'final', finalizedBy: userId, finalizedAt: at, openItemsReason: open.length > 0 ? body.openItemsReason : null });
+      .update(
+        { id: revision.id },
+        { status: 'final', finalizedBy: userId, finalizedAt: at, openItemsReason: open.length > 0 ? body.openItemsReason : null },
+      );
     await manager.getRepository(SystemRecordRow).update({ id }, { status: 'final', updatedAt: at });
   });
   return loadView(ctx, id);
@@ -142,7 +147,11 @@ export async function loadView(ctx: AppContext, id: number, n?: number): Promise
   ]);
   const rev = revisions.find((r) => r.revision === (n ?? record.revision));
   if (!rev) throw notFound('Revision');
-  const names = await userNames(manager, [record.createdBy, ...revisions.flatMap((r) => [r.savedBy, r.finalizedBy]), ...readings.map((r) => r.takenBy)]);
+  const names = await userNames(manager, [
+    record.createdBy,
+    ...revisions.flatMap((r) => [r.savedBy, r.finalizedBy]),
+    ...readings.map((r) => r.takenBy),
+  ]);
   return systemView(record, rev, { readings, attachments, revisions, names, checklistOptions: await checklistOptions(ctx) });
 }
 
@@ -154,35 +163,51 @@ async function checklistOptions(ctx: AppContext) {
 /** 409 unless the save started from the latest revision, and (for PATCH) the record is a draft. */
 export async function assertEditable(ctx: AppContext, record: SystemRecordRow, startedFrom: number, how: 'patch' | 'revise') {
   if (how === 'patch' && record.status === 'final') {
-    throw new AppError('record-final', 'This record is final: save the change as a new revision.', 409, { currentRevision: record.revision, status: record.status });
+    throw new AppError('record-final', 'This record is final: save the change as a new revision.', 409, {
+      currentRevision: record.revision,
+      status: record.status,
+    });
   }
   if (startedFrom !== record.revision) {
-    throw new AppError('stale-revision', `This record was saved by someone else since revision ${startedFrom}: review revision ${record.revision} and save again.`, 409, {
-      currentRevision: record.revision,
-      current: await loadView(ctx, record.id),
-    });
+    throw new AppError(
+      'stale-revision',
+      `This record was saved by someone else since revision ${startedFrom}: review revision ${record.revision} and save again.`,
+      409,
+      {
+        currentRevision: record.revision,
+        current: await loadView(ctx, record.id),
+      },
+    );
   }
 }
 
-async function insertRevision(manager: EntityManager, systemId: number, revision: number, content: RecordContent, snapshot: Snapshot, userId: number, at: string) {
+async function insertRevision(
+  manager: EntityManager,
+  systemId: number,
+  revision: number,
+  content: RecordContent,
+  snapshot: Snapshot,
+  userId: number,
+  at: string,
+) {
   const repo = manager.getRepository(SystemRevisionRow);
   await repo.save(
     repo.create({
-    systemId,
-    revision,
-    status: 'draft',
-    content,
-    check: snapshot.check,
-    rulesVersion: snapshot.check.rulesVersion,
-    verdict: snapshot.check.verdict,
-    parts: snapshot.parts,
-    ratedCombination: snapshot.ratedCombination,
-    prices: snapshot.prices,
-    savedBy: userId,
-    savedAt: at,
-    finalizedBy: null,
-    finalizedAt: null,
-    openItemsReason: null,
+      systemId,
+      revision,
+      status: 'draft',
+      content,
+      check: snapshot.check,
+      rulesVersion: snapshot.check.rulesVersion,
+      verdict: snapshot.check.verdict,
+      parts: snapshot.parts,
+      ratedCombination: snapshot.ratedCombination,
+      prices: snapshot.prices,
+      savedBy: userId,
+      savedAt: at,
+      finalizedBy: null,
+      finalizedAt: null,
+      openItemsReason: null,
     }),
   );
 }

@@ -38,7 +38,13 @@ export function deriveChecklist(p: Pairing, options: ChecklistOptions = {}): Che
     basis: 'common practice; installation instructions',
   });
   const lineSetFacts = oilChange(p);
-  if (lineSetFacts) items.push({ id: 'line-set-flush', title: 'Line set flushed or replaced', reason: lineSetFacts, basis: 'common practice; installation instructions' });
+  if (lineSetFacts)
+    items.push({
+      id: 'line-set-flush',
+      title: 'Line set flushed or replaced',
+      reason: lineSetFacts,
+      basis: 'common practice; installation instructions',
+    });
   items.push({
     id: 'nitrogen-purge',
     title: 'Nitrogen flowing while brazing',

@@ -12,8 +12,15 @@ export const JobCreateSchema = z
   .object({
     customerName: z.string().trim().min(1, { error: 'enter the customer' }).max(120),
     siteAddress: z.string().trim().min(1, { error: 'enter the site address' }).max(300),
-    state: z.string().trim().toUpperCase().regex(/^[A-Z]{2}$/, { error: 'state must be a two-letter code' }),
-    contactEmail: z.preprocess((v) => (typeof v === 'string' && v.trim() === '' ? undefined : v), z.email({ error: 'enter a valid e-mail' }).max(254).optional()),
+    state: z
+      .string()
+      .trim()
+      .toUpperCase()
+      .regex(/^[A-Z]{2}$/, { error: 'state must be a two-letter code' }),
+    contactEmail: z.preprocess(
+      (v) => (typeof v === 'string' && v.trim() === '' ? undefined : v),
+      z.email({ error: 'enter a valid e-mail' }).max(254).optional(),
+    ),
     contactPhone: optionalText(40).refine((v) => v === undefined || /^[0-9+()\-. ext]{7,40}$/i.test(v), { error: 'enter a phone number' }),
     notes: optionalText(4000),
   })
@@ -27,7 +34,15 @@ export const JobPatchSchema = z
     siteAddress: JobCreateSchema.shape.siteAddress.optional(),
     state: JobCreateSchema.shape.state.optional(),
     contactEmail: z.union([z.null(), z.email({ error: 'enter a valid e-mail' }).max(254)]).optional(),
-    contactPhone: z.union([z.null(), z.string().trim().regex(/^[0-9+()\-. ext]{7,40}$/i, { error: 'enter a phone number' })]).optional(),
+    contactPhone: z
+      .union([
+        z.null(),
+        z
+          .string()
+          .trim()
+          .regex(/^[0-9+()\-. ext]{7,40}$/i, { error: 'enter a phone number' }),
+      ])
+      .optional(),
     notes: z.union([z.null(), z.string().trim().max(4000)]).optional(),
     status: z.enum(JOB_STATUSES).optional(),
   })

@@ -10,7 +10,12 @@ import { CommissioningEvaluateSchema } from './commissioning';
 export const SYSTEM_STATUSES = ['draft', 'final'] as const;
 export type SystemStatus = (typeof SYSTEM_STATUSES)[number];
 
-const serial = z.string().trim().min(1).max(60).regex(/^[\w\-./ #]+$/, { error: 'letters, digits, spaces and - . / # only' });
+const serial = z
+  .string()
+  .trim()
+  .min(1)
+  .max(60)
+  .regex(/^[\w\-./ #]+$/, { error: 'letters, digits, spaces and - . / # only' });
 
 export const SerialsSchema = z
   .object({ outdoor: serial.optional(), indoorCoil: serial.optional(), airHandler: serial.optional(), metering: serial.optional() })
@@ -30,7 +35,10 @@ export const ChecklistEntrySchema = z
   });
 export type ChecklistEntry = z.infer<typeof ChecklistEntrySchema>;
 
-export const ChecklistStatesSchema = z.record(z.string().regex(/^[a-z0-9-]{1,40}$/, { error: 'unknown checklist item' }), ChecklistEntrySchema);
+export const ChecklistStatesSchema = z.record(
+  z.string().regex(/^[a-z0-9-]{1,40}$/, { error: 'unknown checklist item' }),
+  ChecklistEntrySchema,
+);
 export type ChecklistStates = z.infer<typeof ChecklistStatesSchema>;
 
 /** POST /api/jobs/:id/systems: a check body, serials, an optional label and initial checklist states. */
@@ -107,12 +115,19 @@ export const ReadingCreateSchema = z
     notes: z.string().trim().max(1000).optional(),
   })
   .strict()
-  .refine((r) => r.charge || r.evacuation || r.pressureTest, { error: 'enter charge readings, an evacuation or a pressure test', path: ['charge'] });
+  .refine((r) => r.charge || r.evacuation || r.pressureTest, {
+    error: 'enter charge readings, an evacuation or a pressure test',
+    path: ['charge'],
+  });
 export type ReadingCreate = z.infer<typeof ReadingCreateSchema>;
 
 /** POST /api/systems/:id/send. */
 export const SendReportSchema = z
-  .object({ to: z.email({ error: 'enter a valid e-mail' }).max(254), confirm: z.boolean().optional(), paper: z.enum(['letter', 'a4']).optional() })
+  .object({
+    to: z.email({ error: 'enter a valid e-mail' }).max(254),
+    confirm: z.boolean().optional(),
+    paper: z.enum(['letter', 'a4']).optional(),
+  })
   .strict();
 export type SendReport = z.infer<typeof SendReportSchema>;
 

@@ -4,7 +4,12 @@ import { Table, TableIndex } from 'typeorm';
 const id = { name: 'id', type: 'integer', isPrimary: true, isGenerated: true, generationStrategy: 'increment' as const };
 const at = (name: string, nullable = false) => ({ name, type: 'varchar', length: '30', isNullable: nullable });
 const ref = (name: string, nullable = false) => ({ name, type: 'integer', isNullable: nullable });
-const fk = (column: string, table: string, onDelete = 'RESTRICT') => ({ columnNames: [column], referencedTableName: table, referencedColumnNames: ['id'], onDelete });
+const fk = (column: string, table: string, onDelete = 'RESTRICT') => ({
+  columnNames: [column],
+  referencedTableName: table,
+  referencedColumnNames: ['id'],
+  onDelete,
+});
 
 /** Jobs with their change history, matched-system records and revisions, readings, attachments, sent e-mail. */
 export class Jobs1764900000000 implements MigrationInterface {
@@ -42,7 +47,15 @@ export class Jobs1764900000000 implements MigrationInterface {
     await queryRunner.createTable(
       new Table({
         name: 'system_records',
-        columns: [id, ref('jobId'), { name: 'status', type: 'varchar', length: '8' }, { name: 'revision', type: 'integer' }, ref('createdBy', true), at('createdAt'), at('updatedAt')],
+        columns: [
+          id,
+          ref('jobId'),
+          { name: 'status', type: 'varchar', length: '8' },
+          { name: 'revision', type: 'integer' },
+          ref('createdBy', true),
+          at('createdAt'),
+          at('updatedAt'),
+        ],
         foreignKeys: [fk('jobId', 'jobs'), fk('createdBy', 'users', 'SET NULL')],
         indices: [new TableIndex({ columnNames: ['jobId'] })],
       }),
@@ -68,7 +81,11 @@ export class Jobs1764900000000 implements MigrationInterface {
           at('finalizedAt', true),
           { name: 'openItemsReason', type: 'varchar', length: '500', isNullable: true },
         ],
-        foreignKeys: [fk('systemId', 'system_records', 'CASCADE'), fk('savedBy', 'users', 'SET NULL'), fk('finalizedBy', 'users', 'SET NULL')],
+        foreignKeys: [
+          fk('systemId', 'system_records', 'CASCADE'),
+          fk('savedBy', 'users', 'SET NULL'),
+          fk('finalizedBy', 'users', 'SET NULL'),
+        ],
         indices: [new TableIndex({ columnNames: ['systemId', 'revision'], isUnique: true })],
       }),
     );
@@ -82,7 +99,11 @@ export class Jobs1764900000000 implements MigrationInterface {
           at('takenAt'),
           ref('takenBy', true),
           { name: 'label', type: 'varchar', length: '80', isNullable: true },
-          ...['outdoorDbF', 'indoorDbF', 'indoorWbF', 'superheatF', 'subcoolingF'].map((name) => ({ name, type: 'real', isNullable: true })),
+          ...['outdoorDbF', 'indoorDbF', 'indoorWbF', 'superheatF', 'subcoolingF'].map((name) => ({
+            name,
+            type: 'real',
+            isNullable: true,
+          })),
           { name: 'chargeVerdict', type: 'varchar', length: '16', isNullable: true },
           { name: 'evacuationMicrons', type: 'real', isNullable: true },
           { name: 'evacuationPassed', type: 'boolean', isNullable: true },
@@ -139,7 +160,15 @@ export class Jobs1764900000000 implements MigrationInterface {
   }
 
   async down(queryRunner: QueryRunner): Promise<void> {
-    for (const table of ['outbound_emails', 'attachments', 'commissioning_readings', 'system_revisions', 'system_records', 'job_changes', 'jobs']) {
+    for (const table of [
+      'outbound_emails',
+      'attachments',
+      'commissioning_readings',
+      'system_revisions',
+      'system_records',
+      'job_changes',
+      'jobs',
+    ]) {
       await queryRunner.dropTable(table);
     }
   }

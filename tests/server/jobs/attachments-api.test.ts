@@ -34,15 +34,33 @@ const filesOnDisk = () => {
 
 // File signatures: PNG 89 50 4E 47 0D 0A 1A 0A (PNG spec §5.2); JPEG FF D8 FF (ITU T.81 SOI marker);
 // WebP "RIFF....WEBP" (RFC 9649); HEIC an ISO BMFF "ftyp" box with brand "heic" (ISO/IEC 23008-12).
-const webp = Buffer.concat([Buffer.from('RIFF'), Buffer.from([0x1a, 0, 0, 0]), Buffer.from('WEBPVP8 '), Buffer.from([0x0e, 0, 0, 0, 0x30, 0x01, 0, 0x9d, 0x01, 0x2a, 1, 0, 1, 0, 0, 0, 0, 0])]);
-const heic = Buffer.concat([Buffer.from([0, 0, 0, 0x18]), Buffer.from('ftypheic'), Buffer.from([0, 0, 0, 0]), Buffer.from('mif1heic'), Buffer.alloc(16)]);
+const webp = Buffer.concat([
+  Buffer.from('RIFF'),
+  Buffer.from([0x1a, 0, 0, 0]),
+  Buffer.from('WEBPVP8 '),
+  Buffer.from([0x0e, 0, 0, 0, 0x30, 0x01, 0, 0x9d, 0x01, 0x2a, 1, 0, 1, 0, 0, 0, 0, 0]),
+]);
+const heic = Buffer.concat([
+  Buffer.from([0, 0, 0, 0x18]),
+  Buffer.from('ftypheic'),
+  Buffer.from([0, 0, 0, 0]),
+  Buffer.from('mif1heic'),
+  Buffer.alloc(16),
+]);
 
 describe('POST /api/jobs/:id/attachments', () => {
   it('when a PNG nameplate photo is sent, then 201 with type, size and sha256 from the bytes, and only signed-in users can fetch it', async () => {
     const png = tinyPng();
     const made = (await request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send(recordBody(f)).expect(201)).body;
     const res = await upload(png, 'plate.png', { kind: 'nameplate', systemId: String(made.id) }).expect(201);
-    expect(res.body).toMatchObject({ jobId: f.jobId, systemId: made.id, kind: 'nameplate', contentType: 'image/png', sizeBytes: png.length, fileName: 'plate.png' });
+    expect(res.body).toMatchObject({
+      jobId: f.jobId,
+      systemId: made.id,
+      kind: 'nameplate',
+      contentType: 'image/png',
+      sizeBytes: png.length,
+      fileName: 'plate.png',
+    });
     expect(res.body.sha256).toBe(createHash('sha256').update(png).digest('hex'));
     expect(res.body.storageKey).toBeUndefined();
 
@@ -98,8 +116,17 @@ describe('POST /api/jobs/:id/attachments', () => {
     const made = (await request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send(recordBody(f)).expect(201)).body;
     await request(t.app).post(`/api/systems/${made.id}/finalize`).set(auth()).send({ revision: 1, openItemsReason: 'Test' }).expect(200);
     await upload(tinyPng(), 'a.png', { kind: 'nameplate', systemId: String(made.id) }).expect(409);
-    const other = await request(t.app).post('/api/jobs').set(auth()).send({ customerName: 'Pim Aalders', siteAddress: '2 Heron Ct', state: 'OH' }).expect(201);
-    const res = await request(t.app).post(`/api/jobs/${other.body.id}/attachments`).set(auth()).field('systemId', String(made.id)).attach('file', tinyPng(), 'a.png').expect(422);
+    const other = await request(t.app)
+      .post('/api/jobs')
+      .set(auth())
+      .send({ customerName: 'Pim Aalders', siteAddress: '2 Heron Ct', state: 'OH' })
+      .expect(201);
+    const res = await request(t.app)
+      .post(`/api/jobs/${other.body.id}/attachments`)
+      .set(auth())
+      .field('systemId', String(made.id))
+      .attach('file', tinyPng(), 'a.png')
+      .expect(422);
     expect(res.body.error.details[0].path).toBe('systemId');
     await upload(tinyPng(), 'a.png', { kind: 'selfie' }).expect(422);
   });

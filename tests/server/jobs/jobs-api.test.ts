@@ -17,7 +17,11 @@ const job = (over: object = {}) => ({ customerName: 'Nadia Okonkwo', siteAddress
 
 describe('POST /api/jobs', () => {
   it('when a tech creates a job, then 201 with the contract fields, status open and who created it', async () => {
-    const res = await request(t.app).post('/api/jobs').set(auth('tech')).send(job({ contactEmail: 'nadia@example.test', contactPhone: '555-0142', notes: 'Side gate' })).expect(201);
+    const res = await request(t.app)
+      .post('/api/jobs')
+      .set(auth('tech'))
+      .send(job({ contactEmail: 'nadia@example.test', contactPhone: '555-0142', notes: 'Side gate' }))
+      .expect(201);
     expect(res.body).toMatchObject({
       id: expect.any(Number),
       customerName: 'Nadia Okonkwo',
@@ -33,7 +37,11 @@ describe('POST /api/jobs', () => {
   });
 
   it('when fields are missing or malformed, then 422 naming each field; with no token, 401', async () => {
-    const res = await request(t.app).post('/api/jobs').set(auth()).send({ customerName: '', state: 'Georgia', contactEmail: 'not-mail' }).expect(422);
+    const res = await request(t.app)
+      .post('/api/jobs')
+      .set(auth())
+      .send({ customerName: '', state: 'Georgia', contactEmail: 'not-mail' })
+      .expect(422);
     const paths = res.body.error.details.map((d: { path: string }) => d.path).sort();
     expect(paths).toEqual(['contactEmail', 'customerName', 'siteAddress', 'state']);
     await request(t.app).post('/api/jobs').send(job()).expect(401);
@@ -49,7 +57,11 @@ describe('GET /api/jobs', () => {
       const a = (role: Role = 'tech') => ({ Authorization: `Bearer ${app.tokenFor(role)}` });
       const made: number[] = [];
       for (const [i, name] of ['Ilse Varga', 'Tomas Reyes', 'Ilse Brandt'].entries()) {
-        const res = await request(app.app).post('/api/jobs').set(a('estimator')).send(job({ customerName: name, siteAddress: `${i + 1} Quarry Lane` })).expect(201);
+        const res = await request(app.app)
+          .post('/api/jobs')
+          .set(a('estimator'))
+          .send(job({ customerName: name, siteAddress: `${i + 1} Quarry Lane` }))
+          .expect(201);
         made.push(res.body.id);
       }
       await request(app.app).patch(`/api/jobs/${made[0]}`).set(a()).send({ status: 'closed' }).expect(200);
@@ -79,8 +91,18 @@ describe('GET /api/jobs', () => {
 
 describe('GET/PATCH /api/jobs/:id', () => {
   it('when a job is edited, then the fields change and the history keeps who changed what, before and after', async () => {
-    const created = (await request(t.app).post('/api/jobs').set(auth('tech')).send(job({ contactPhone: '555-0100' })).expect(201)).body;
-    const patched = await request(t.app).patch(`/api/jobs/${created.id}`).set(auth('estimator')).send({ siteAddress: '15 Larkspur Row, Fenwick', contactPhone: null, status: 'closed' }).expect(200);
+    const created = (
+      await request(t.app)
+        .post('/api/jobs')
+        .set(auth('tech'))
+        .send(job({ contactPhone: '555-0100' }))
+        .expect(201)
+    ).body;
+    const patched = await request(t.app)
+      .patch(`/api/jobs/${created.id}`)
+      .set(auth('estimator'))
+      .send({ siteAddress: '15 Larkspur Row, Fenwick', contactPhone: null, status: 'closed' })
+      .expect(200);
     expect(patched.body).toMatchObject({ siteAddress: '15 Larkspur Row, Fenwick', contactPhone: null, status: 'closed' });
 
     const read = await request(t.app).get(`/api/jobs/${created.id}`).set(auth('tech')).expect(200);

@@ -27,7 +27,8 @@ afterAll(async () => {
 });
 
 const auth = (role: 'tech' | 'estimator' | 'admin' = 'tech') => authFor(t, role);
-const newRecord = async (app = t, fx = f) => (await request(app.app).post(`/api/jobs/${fx.jobId}/systems`).set(authFor(app)).send(recordBody(fx)).expect(201)).body;
+const newRecord = async (app = t, fx = f) =>
+  (await request(app.app).post(`/api/jobs/${fx.jobId}/systems`).set(authFor(app)).send(recordBody(fx)).expect(201)).body;
 const messages = () => readdirSync(mail.dir).filter((n) => n.endsWith('.eml'));
 
 /** A loopback port with nothing listening on it. */
@@ -43,8 +44,19 @@ describe('POST /api/systems/:id/send', () => {
   it('when a tech sends the report, then the local mail service keeps the message with the PDF attached and the outbox lists it', async () => {
     const made = await newRecord();
     const before = messages().length;
-    const sent = await request(t.app).post(`/api/systems/${made.id}/send`).set(auth('tech')).send({ to: 'odile.franz@example.test' }).expect(200);
-    expect(sent.body).toMatchObject({ systemId: made.id, revision: 1, to: 'odile.franz@example.test', status: 'sent', messageId: expect.any(String), hasAttachment: true });
+    const sent = await request(t.app)
+      .post(`/api/systems/${made.id}/send`)
+      .set(auth('tech'))
+      .send({ to: 'odile.franz@example.test' })
+      .expect(200);
+    expect(sent.body).toMatchObject({
+      systemId: made.id,
+      revision: 1,
+      to: 'odile.franz@example.test',
+      status: 'sent',
+      messageId: expect.any(String),
+      hasAttachment: true,
+    });
 
     const files = messages();
     expect(files.length).toBe(before + 1);
@@ -59,7 +71,12 @@ describe('POST /api/systems/:id/send', () => {
     expect(text).toContain('QX2611A04471');
 
     const outbox = await request(t.app).get('/api/outbox').set(auth('admin')).expect(200);
-    expect(outbox.body.items[0]).toMatchObject({ id: sent.body.id, to: 'odile.franz@example.test', status: 'sent', subject: parsed.subject });
+    expect(outbox.body.items[0]).toMatchObject({
+      id: sent.body.id,
+      to: 'odile.franz@example.test',
+      status: 'sent',
+      subject: parsed.subject,
+    });
     const pdf = await request(t.app).get(`/api/outbox/${sent.body.id}/attachment`).set(auth('admin')).buffer(true).expect(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
     expect(Buffer.compare(pdf.body as Buffer, parsed.attachments[0].content)).toBe(0);
@@ -71,10 +88,18 @@ describe('POST /api/systems/:id/send', () => {
     const made = await newRecord();
     await request(t.app).post(`/api/systems/${made.id}/send`).set(auth()).send({ to: 'odile.franz@example.test' }).expect(200);
     const count = messages().length;
-    const again = await request(t.app).post(`/api/systems/${made.id}/send`).set(auth()).send({ to: 'odile.franz@example.test' }).expect(409);
+    const again = await request(t.app)
+      .post(`/api/systems/${made.id}/send`)
+      .set(auth())
+      .send({ to: 'odile.franz@example.test' })
+      .expect(409);
     expect(again.body.error).toMatchObject({ code: 'recently-sent', details: { to: 'odile.franz@example.test' } });
     expect(messages().length).toBe(count);
-    await request(t.app).post(`/api/systems/${made.id}/send`).set(auth()).send({ to: 'odile.franz@example.test', confirm: true }).expect(200);
+    await request(t.app)
+      .post(`/api/systems/${made.id}/send`)
+      .set(auth())
+      .send({ to: 'odile.franz@example.test', confirm: true })
+      .expect(200);
     expect(messages().length).toBe(count + 1);
   });
 
@@ -88,17 +113,28 @@ describe('POST /api/systems/:id/send', () => {
 
 describe('a mail failure', () => {
   it('when the mail server can not be reached, then 502 with the error shape, the attempt is recorded and nothing else changes', async () => {
-    const app = await createTestApp({ smtp: { host: '127.0.0.1', port: await closedPort(), tls: 'none', from: 'office@bramblewood.invalid' } });
+    const app = await createTestApp({
+      smtp: { host: '127.0.0.1', port: await closedPort(), tls: 'none', from: 'office@bramblewood.invalid' },
+    });
     try {
       const fx = await buildFixture(app);
       const made = await newRecord(app, fx);
-      const res = await request(app.app).post(`/api/systems/${made.id}/send`).set(authFor(app)).send({ to: 'odile.franz@example.test' }).expect(502);
+      const res = await request(app.app)
+        .post(`/api/systems/${made.id}/send`)
+        .set(authFor(app))
+        .send({ to: 'odile.franz@example.test' })
+        .expect(502);
       expect(res.body.error).toMatchObject({ code: 'mail-failed', message: expect.any(String) });
       expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts:\d+/);
 
       const outbox = await request(app.app).get('/api/outbox').set(authFor(app, 'admin')).expect(200);
       expect(outbox.body.items).toHaveLength(1);
-      expect(outbox.body.items[0]).toMatchObject({ status: 'failed', hasAttachment: false, messageId: null, error: expect.stringMatching(/ECONNREFUSED|connect/i) });
+      expect(outbox.body.items[0]).toMatchObject({
+        status: 'failed',
+        hasAttachment: false,
+        messageId: null,
+        error: expect.stringMatching(/ECONNREFUSED|connect/i),
+      });
       await request(app.app).get(`/api/outbox/${outbox.body.items[0].id}/attachment`).set(authFor(app, 'admin')).expect(404);
 
       const after = await request(app.app).get(`/api/systems/${made.id}`).set(authFor(app)).expect(200);

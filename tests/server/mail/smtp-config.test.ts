@@ -12,9 +12,22 @@ describe('SMTP settings in server/env.ts', () => {
   });
 
   it('when a host is set, then TLS mode picks the port (465 implicit TLS, 587 submission — RFC 8314, RFC 6409)', () => {
-    expect(loadConfig({ ...base, SMTP_HOST: 'mail.example.test', SMTP_TLS: 'tls' }).smtp).toMatchObject({ host: 'mail.example.test', port: 465, tls: 'tls' });
+    expect(loadConfig({ ...base, SMTP_HOST: 'mail.example.test', SMTP_TLS: 'tls' }).smtp).toMatchObject({
+      host: 'mail.example.test',
+      port: 465,
+      tls: 'tls',
+    });
     expect(loadConfig({ ...base, SMTP_HOST: 'mail.example.test' }).smtp).toMatchObject({ port: 587, tls: 'starttls' });
-    expect(loadConfig({ ...base, SMTP_HOST: 'mail.example.test', SMTP_PORT: '2587', SMTP_USER: 'office', SMTP_PASSWORD: 'pw', SMTP_FROM: 'office@example.test' }).smtp).toMatchObject({
+    expect(
+      loadConfig({
+        ...base,
+        SMTP_HOST: 'mail.example.test',
+        SMTP_PORT: '2587',
+        SMTP_USER: 'office',
+        SMTP_PASSWORD: 'pw',
+        SMTP_FROM: 'office@example.test',
+      }).smtp,
+    ).toMatchObject({
       port: 2587,
       user: 'office',
       password: 'pw',

@@ -34,20 +34,48 @@ const getPdf = (url: string) =>
 const keep = (name: string, pdf: Buffer) => process.env.REPORT_OUT && writeFileSync(path.join(process.env.REPORT_OUT, name), pdf);
 
 // R-410A dew point 40 °F at 118.4 psig, bubble point 100 °F at 318.5 psig (values.json PT-02): 10 °F superheat, 10 °F subcooling.
-const charge = { refrigerant: 'R-410A', meteringType: 'txv', suctionPsig: 118.4, suctionLineF: 50, liquidPsig: 318.5, liquidLineF: 90, indoorWbF: 63, outdoorDbF: 88 };
+const charge = {
+  refrigerant: 'R-410A',
+  meteringType: 'txv',
+  suctionPsig: 118.4,
+  suctionLineF: 50,
+  liquidPsig: 318.5,
+  liquidLineF: 90,
+  indoorWbF: 63,
+  outdoorDbF: 88,
+};
 
 describe('GET /api/systems/:id/report.pdf', () => {
   it('when a full record is reported, then the PDF parses and states the shop, models, serials, superheat, checklist and the safety note on one page', async () => {
     // Installed 2024-11-20: before the 2025-01-01 GWP-700 date for new R-410A split systems (40 CFR 84.54, values.json REG-03).
-    const made = (await request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send(recordBody(f, { installDate: '2024-11-20' })).expect(201)).body;
+    const made = (
+      await request(t.app)
+        .post(`/api/jobs/${f.jobId}/systems`)
+        .set(auth())
+        .send(recordBody(f, { installDate: '2024-11-20' }))
+        .expect(201)
+    ).body;
     await request(t.app).post(`/api/systems/${made.id}/readings`).set(auth()).send({ label: 'Final charge', charge }).expect(201);
     await request(t.app)
       .post(`/api/systems/${made.id}/readings`)
       .set(auth())
-      .send({ evacuation: { finalMicrons: 380, decayMicrons: 640, holdMinutes: 10 }, pressureTest: { pressurePsig: 300, holdMinutes: 30, dropPsig: 0 } })
+      .send({
+        evacuation: { finalMicrons: 380, decayMicrons: 640, holdMinutes: 10 },
+        pressureTest: { pressurePsig: 300, holdMinutes: 30, dropPsig: 0 },
+      })
       .expect(201);
-    await request(t.app).post(`/api/jobs/${f.jobId}/attachments`).set(auth()).field('kind', 'nameplate').field('systemId', String(made.id)).attach('file', tinyPng(), 'outdoor-plate.png').expect(201);
-    await request(t.app).post(`/api/systems/${made.id}/finalize`).set(auth()).send({ revision: 1, openItemsReason: 'Float switch on order' }).expect(200);
+    await request(t.app)
+      .post(`/api/jobs/${f.jobId}/attachments`)
+      .set(auth())
+      .field('kind', 'nameplate')
+      .field('systemId', String(made.id))
+      .attach('file', tinyPng(), 'outdoor-plate.png')
+      .expect(201);
+    await request(t.app)
+      .post(`/api/systems/${made.id}/finalize`)
+      .set(auth())
+      .send({ revision: 1, openItemsReason: 'Float switch on order' })
+      .expect(200);
 
     const res = await getPdf(`/api/systems/${made.id}/report.pdf`).expect(200);
     expect(res.headers['content-type']).toBe('application/pdf');
@@ -55,7 +83,16 @@ describe('GET /api/systems/:id/report.pdf', () => {
     keep('report-letter.pdf', pdf);
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
     const { text, pages } = await pdfText(pdf);
-    for (const expected of ['Bramblewood Heating & Air', 'Odile Franz', '7 Cinder Hill Rd', 'QX-HP36-B', 'QX-CL36-B', 'QX2611A04471', 'QC2610B00913', 'QX-REF-0042']) {
+    for (const expected of [
+      'Bramblewood Heating & Air',
+      'Odile Franz',
+      '7 Cinder Hill Rd',
+      'QX-HP36-B',
+      'QX-CL36-B',
+      'QX2611A04471',
+      'QC2610B00913',
+      'QX-REF-0042',
+    ]) {
       expect(text).toContain(expected);
     }
     expect(text).toMatch(/Superheat 10\.\d °F/);

@@ -13,7 +13,8 @@ export const COIL_CSV =
   'model,brand,min_tons,max_tons,refrigerants,metering_type,metering_refrigerant,metering_bidirectional\nQX-CL36-B,Quillon,2.5,3.5,R-410A,txv,R-410A,yes\n';
 // 15.2 SEER2 / 11.7 EER2 / 7.8 HSPF2: invented rated figures, chosen above the DOE 2023 Southeast split heat
 // pump minimums of 14.3 SEER2 and 7.5 HSPF2 (10 CFR 430.32(c), values.json EFF-06).
-export const RATED_CSV = 'outdoor_model,indoor_model,cooling_btuh,seer2,eer2,hspf2,reference\nQX-HP36-B,QX-CL36-B,35000,15.2,11.7,7.8,QX-REF-0042\n';
+export const RATED_CSV =
+  'outdoor_model,indoor_model,cooling_btuh,seer2,eer2,hspf2,reference\nQX-HP36-B,QX-CL36-B,35000,15.2,11.7,7.8,QX-REF-0042\n';
 
 export interface Fixture {
   outdoorId: number;
@@ -35,7 +36,11 @@ export async function buildFixture(t: TestApp): Promise<Fixture> {
   await load('prices', 'model,price,effective_from\nQX-HP36-B,3100.00,2025-02-01\nQX-HP36-B,100.00,2099-01-01\n', 'Wexmoor Parts');
   const outdoor = await request(t.app).get('/api/catalog/outdoor-units').set(authFor(t));
   const coil = await request(t.app).get('/api/catalog/indoor-coils').set(authFor(t));
-  const job = await request(t.app).post('/api/jobs').set(authFor(t)).send({ customerName: 'Odile Franz', siteAddress: '7 Cinder Hill Rd', state: 'GA' }).expect(201);
+  const job = await request(t.app)
+    .post('/api/jobs')
+    .set(authFor(t))
+    .send({ customerName: 'Odile Franz', siteAddress: '7 Cinder Hill Rd', state: 'GA' })
+    .expect(201);
   return { outdoorId: outdoor.body.items[0].id, coilId: coil.body.items[0].id, jobId: job.body.id };
 }
 

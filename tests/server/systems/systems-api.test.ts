@@ -15,14 +15,34 @@ afterAll(async () => {
 });
 
 const auth = (role: 'tech' | 'estimator' | 'admin' = 'tech') => authFor(t, role);
-const create = (over: object = {}, role: 'tech' | 'estimator' | 'admin' = 'tech') => request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth(role)).send(recordBody(f, over));
-const DONE_ALL = ['filter-drier', 'nitrogen-purge', 'evacuation', 'overflow-protection', 'condensate-trap', 'suction-insulation', 'electrical-verified'];
+const create = (over: object = {}, role: 'tech' | 'estimator' | 'admin' = 'tech') =>
+  request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth(role)).send(recordBody(f, over));
+const DONE_ALL = [
+  'filter-drier',
+  'nitrogen-purge',
+  'evacuation',
+  'overflow-protection',
+  'condensate-trap',
+  'suction-insulation',
+  'electrical-verified',
+];
 
 describe('POST /api/jobs/:id/systems', () => {
   it('when a tech saves a check to a job, then 201 with a draft revision 1, the check as it stood, the parts, rated combination and best prices', async () => {
     const res = await create().expect(201);
-    expect(res.body).toMatchObject({ id: expect.any(Number), jobId: f.jobId, status: 'draft', revision: 1, serials: { outdoor: 'QX2611A04471', indoorCoil: 'QC2610B00913' } });
-    expect(res.body.check).toMatchObject({ verdict: expect.any(String), rulesVersion: expect.any(String), findings: expect.any(Array), coverage: expect.any(Object) });
+    expect(res.body).toMatchObject({
+      id: expect.any(Number),
+      jobId: f.jobId,
+      status: 'draft',
+      revision: 1,
+      serials: { outdoor: 'QX2611A04471', indoorCoil: 'QC2610B00913' },
+    });
+    expect(res.body.check).toMatchObject({
+      verdict: expect.any(String),
+      rulesVersion: expect.any(String),
+      findings: expect.any(Array),
+      coverage: expect.any(Object),
+    });
     expect(res.body.rulesVersion).toBe(res.body.check.rulesVersion);
     expect(res.body.parts.outdoor).toMatchObject({ id: f.outdoorId, spec: { model: 'QX-HP36-B', brand: 'Quillon', mcaAmps: 21.2 } });
     expect(res.body.parts.installDate).toBe('2026-11-20');
@@ -38,7 +58,11 @@ describe('POST /api/jobs/:id/systems', () => {
   });
 
   it('when the body is not a valid check, the job is unknown or no token, then 422, 404 and 401', async () => {
-    const bad = await request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send({ ...recordBody(f), indoorCoil: { id: 1, spec: {} } }).expect(422);
+    const bad = await request(t.app)
+      .post(`/api/jobs/${f.jobId}/systems`)
+      .set(auth())
+      .send({ ...recordBody(f), indoorCoil: { id: 1, spec: {} } })
+      .expect(422);
     expect(bad.body.error.details[0].path).toBe('indoorCoil');
     const serial = await create({ serials: { outdoor: 'QX<b>1' } }).expect(422);
     expect(serial.body.error.details.map((d: { path: string }) => d.path)).toEqual(['serials.outdoor']);
@@ -50,15 +74,33 @@ describe('POST /api/jobs/:id/systems', () => {
   it('when records exist on a job, then any role lists them with their verdict and models', async () => {
     const made = (await create({ label: 'Upstairs' }, 'estimator').expect(201)).body;
     const list = await request(t.app).get(`/api/jobs/${f.jobId}/systems`).set(auth('admin')).expect(200);
-    expect(list.body.items).toContainEqual(expect.objectContaining({ id: made.id, label: 'Upstairs', status: 'draft', revision: 1, outdoorModel: 'QX-HP36-B', indoorModel: 'QX-CL36-B', verdict: made.check.verdict }));
+    expect(list.body.items).toContainEqual(
+      expect.objectContaining({
+        id: made.id,
+        label: 'Upstairs',
+        status: 'draft',
+        revision: 1,
+        outdoorModel: 'QX-HP36-B',
+        indoorModel: 'QX-CL36-B',
+        verdict: made.check.verdict,
+      }),
+    );
   });
 });
 
 describe('revisions', () => {
   it('when a draft is edited from its revision, then revision n+1 is saved and revision n stays viewable as it was', async () => {
     const made = (await create().expect(201)).body;
-    const edited = await request(t.app).patch(`/api/systems/${made.id}`).set(auth()).send({ revision: 1, serials: { airHandler: 'QA2609C11' }, checklist: { 'filter-drier': { state: 'done' } } }).expect(200);
-    expect(edited.body).toMatchObject({ revision: 2, status: 'draft', serials: { outdoor: 'QX2611A04471', indoorCoil: 'QC2610B00913', airHandler: 'QA2609C11' } });
+    const edited = await request(t.app)
+      .patch(`/api/systems/${made.id}`)
+      .set(auth())
+      .send({ revision: 1, serials: { airHandler: 'QA2609C11' }, checklist: { 'filter-drier': { state: 'done' } } })
+      .expect(200);
+    expect(edited.body).toMatchObject({
+      revision: 2,
+      status: 'draft',
+      serials: { outdoor: 'QX2611A04471', indoorCoil: 'QC2610B00913', airHandler: 'QA2609C11' },
+    });
     expect(edited.body.checklist.find((c: { id: string }) => c.id === 'filter-drier').state).toBe('done');
     const first = await request(t.app).get(`/api/systems/${made.id}/revisions/1`).set(auth()).expect(200);
     expect(first.body.serials.airHandler).toBeUndefined();
@@ -69,7 +111,11 @@ describe('revisions', () => {
   it('when a save starts from a stale revision, then 409 with the current revision and record, and nothing is written', async () => {
     const made = (await create().expect(201)).body;
     await request(t.app).patch(`/api/systems/${made.id}`).set(auth('tech')).send({ revision: 1, label: 'Tech edit' }).expect(200);
-    const stale = await request(t.app).patch(`/api/systems/${made.id}`).set(auth('estimator')).send({ revision: 1, label: 'Estimator edit' }).expect(409);
+    const stale = await request(t.app)
+      .patch(`/api/systems/${made.id}`)
+      .set(auth('estimator'))
+      .send({ revision: 1, label: 'Estimator edit' })
+      .expect(409);
     expect(stale.body.error.code).toBe('stale-revision');
     expect(stale.body.error.details).toMatchObject({ currentRevision: 2, current: { revision: 2, label: 'Tech edit' } });
     const now = await request(t.app).get(`/api/systems/${made.id}`).set(auth()).expect(200);
@@ -92,18 +138,35 @@ describe('revisions', () => {
     expect(open.body.error.code).toBe('open-checklist-items');
     expect(open.body.error.details.openItems.length).toBe(made.checklist.length);
 
-    const final = await request(t.app).post(`/api/systems/${made.id}/finalize`).set(auth('tech')).send({ revision: 1, openItemsReason: 'Customer declined the float switch' }).expect(200);
-    expect(final.body).toMatchObject({ status: 'final', revision: 1, openItemsReason: 'Customer declined the float switch', finalizedBy: { id: t.users.tech.id } });
+    const final = await request(t.app)
+      .post(`/api/systems/${made.id}/finalize`)
+      .set(auth('tech'))
+      .send({ revision: 1, openItemsReason: 'Customer declined the float switch' })
+      .expect(200);
+    expect(final.body).toMatchObject({
+      status: 'final',
+      revision: 1,
+      openItemsReason: 'Customer declined the float switch',
+      finalizedBy: { id: t.users.tech.id },
+    });
     expect(Date.parse(final.body.finalizedAt)).not.toBeNaN();
 
     const refused = await request(t.app).patch(`/api/systems/${made.id}`).set(auth()).send({ revision: 1, label: 'late edit' }).expect(409);
     expect(refused.body.error).toMatchObject({ code: 'record-final', details: { currentRevision: 1 } });
     await request(t.app).post(`/api/systems/${made.id}/finalize`).set(auth()).send({ revision: 1, openItemsReason: 'again' }).expect(409);
 
-    const next = await request(t.app).post(`/api/systems/${made.id}/revisions`).set(auth()).send({ revision: 1, serials: { outdoor: 'QX2611A09999' } }).expect(201);
+    const next = await request(t.app)
+      .post(`/api/systems/${made.id}/revisions`)
+      .set(auth())
+      .send({ revision: 1, serials: { outdoor: 'QX2611A09999' } })
+      .expect(201);
     expect(next.body).toMatchObject({ revision: 2, status: 'draft', serials: { outdoor: 'QX2611A09999' }, finalizedAt: null });
     const kept = await request(t.app).get(`/api/systems/${made.id}/revisions/1`).set(auth()).expect(200);
-    expect(kept.body).toMatchObject({ status: 'final', serials: { outdoor: 'QX2611A04471' }, openItemsReason: 'Customer declined the float switch' });
+    expect(kept.body).toMatchObject({
+      status: 'final',
+      serials: { outdoor: 'QX2611A04471' },
+      openItemsReason: 'Customer declined the float switch',
+    });
 
     const states = Object.fromEntries(next.body.checklist.map((c: { id: string }) => [c.id, { state: 'done' }]));
     states['overflow-protection'] = { state: 'not-applicable', note: 'Secondary pan with its own drain' };
@@ -115,7 +178,11 @@ describe('revisions', () => {
 
   it('when "not applicable" is given without a word why, then 422 at the note', async () => {
     const made = (await create().expect(201)).body;
-    const res = await request(t.app).patch(`/api/systems/${made.id}`).set(auth()).send({ revision: 1, checklist: { 'condensate-trap': { state: 'not-applicable' } } }).expect(422);
+    const res = await request(t.app)
+      .patch(`/api/systems/${made.id}`)
+      .set(auth())
+      .send({ revision: 1, checklist: { 'condensate-trap': { state: 'not-applicable' } } })
+      .expect(422);
     expect(res.body.error.details.map((d: { path: string }) => d.path)).toEqual(['checklist.condensate-trap.note']);
   });
 });

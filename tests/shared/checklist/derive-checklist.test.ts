@@ -3,9 +3,22 @@ import { applyChecklistStates, deriveChecklist, openChecklistItems } from '../..
 import type { Pairing } from '../../../shared/rules/types';
 
 // Invented parts. Oils: R-22 runs in mineral oil, R-410A / R-454B in POE (ASHRAE Handbook—Refrigeration, ch. 12, from memory).
-const outdoor = (over: object = {}) => ({ spec: { model: 'ZX-1', systemType: 'heat-pump', refrigerant: 'R-410A', nominalTons: 3, mcaAmps: 21.2, mocpAmps: 35, ...over }, kept: false }) as Pairing['outdoor'];
-const coil = (over: object = {}, kept = false) => ({ spec: { model: 'ZC-1', minTons: 2.5, maxTons: 3.5, refrigerants: ['R-410A'], meteringType: 'txv', ...over }, kept }) as NonNullable<Pairing['indoorCoil']>;
-const pairing = (over: Partial<Pairing> = {}): Pairing => ({ scope: 'new-system', installDate: '2026-06-01', outdoor: outdoor(), indoorCoil: coil(), ...over });
+const outdoor = (over: object = {}) =>
+  ({
+    spec: { model: 'ZX-1', systemType: 'heat-pump', refrigerant: 'R-410A', nominalTons: 3, mcaAmps: 21.2, mocpAmps: 35, ...over },
+    kept: false,
+  }) as Pairing['outdoor'];
+const coil = (over: object = {}, kept = false) =>
+  ({ spec: { model: 'ZC-1', minTons: 2.5, maxTons: 3.5, refrigerants: ['R-410A'], meteringType: 'txv', ...over }, kept }) as NonNullable<
+    Pairing['indoorCoil']
+  >;
+const pairing = (over: Partial<Pairing> = {}): Pairing => ({
+  scope: 'new-system',
+  installDate: '2026-06-01',
+  outdoor: outdoor(),
+  indoorCoil: coil(),
+  ...over,
+});
 const ids = (p: Pairing) => deriveChecklist(p).map((i) => i.id);
 
 describe('deriveChecklist', () => {
@@ -38,8 +51,10 @@ describe('deriveChecklist', () => {
   });
 
   it('when the refrigerant is A2L or a sensor is fitted, then the leak sensor test is listed', () => {
-    // R-454B is ASHRAE 34 class A2L (values.json RP rows)
-    expect(ids(pairing({ outdoor: outdoor({ refrigerant: 'R-454B' }), indoorCoil: coil({ refrigerants: ['R-454B'] }) }))).toContain('a2l-leak-sensor');
+    // R-454B is ASHRAE 34 class A2L (values.json RP-04)
+    expect(ids(pairing({ outdoor: outdoor({ refrigerant: 'R-454B' }), indoorCoil: coil({ refrigerants: ['R-454B'] }) }))).toContain(
+      'a2l-leak-sensor',
+    );
     expect(ids(pairing({ indoorCoil: coil({ leakSensor: true }) }))).toContain('a2l-leak-sensor');
     expect(ids(pairing())).not.toContain('a2l-leak-sensor');
   });
@@ -66,7 +81,10 @@ describe('applyChecklistStates', () => {
       'line-set-flush': { state: 'done' },
     });
     expect(rows.find((r) => r.id === 'filter-drier')?.state).toBe('done');
-    expect(rows.find((r) => r.id === 'condensate-trap')).toMatchObject({ state: 'not-applicable', note: 'Gravity drain outside the air stream' });
+    expect(rows.find((r) => r.id === 'condensate-trap')).toMatchObject({
+      state: 'not-applicable',
+      note: 'Gravity drain outside the air stream',
+    });
     expect(rows.some((r) => r.id === 'line-set-flush')).toBe(false);
     expect(openChecklistItems(rows)).not.toContain('filter-drier');
     expect(openChecklistItems(rows)).toContain('nitrogen-purge');
