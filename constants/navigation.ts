@@ -15,6 +15,7 @@ const everyone: readonly Role[] = ['tech', 'estimator', 'admin'];
 export const NAV_ITEMS: NavItem[] = [
   { href: '/check', segment: 'check', label: 'Check', icon: 'clipboard-check-outline', roles: everyone },
   { href: '/readings', segment: 'readings', label: 'Readings', icon: 'gauge', roles: everyone },
+  { href: '/jobs', segment: 'jobs', label: 'Jobs', icon: 'briefcase-outline', roles: everyone },
   { href: '/catalog', segment: 'catalog', label: 'Catalog', icon: 'book-open-variant', roles: everyone },
   { href: '/admin', segment: 'admin', label: 'Admin', icon: 'cog-outline', roles: ['admin'] },
   { href: '/account', segment: 'account', label: 'Account', icon: 'account-circle-outline', roles: everyone },
@@ -29,4 +30,5 @@ export const ADMIN_SECTIONS: { href: string; segment: string; label: string; ico
   { href: '/admin/users', segment: 'users', label: 'Users', icon: 'account-multiple-outline' },
   { href: '/admin/imports', segment: 'imports', label: 'Imports', icon: 'file-upload-outline' },
   { href: '/admin/rules', segment: 'rules', label: 'Rules', icon: 'tune-variant' },
+  { href: '/admin/outbox', segment: 'outbox', label: 'Outbox', icon: 'email-outline' },
 ];

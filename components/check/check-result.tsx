@@ -3,6 +3,7 @@ import { Divider } from 'react-native-paper';
 import { isMissingFacts } from '@/shared/rules/define-rule';
 import { spacing } from '@/constants/theme';
 import { useIsWide } from '@/hooks/use-layout';
+import { SaveToJob } from '@/components/jobs/save-to-job';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { SafetyNote } from '@/components/ui/safety-note';
 import type { CheckOutcome } from './check-store';
@@ -39,6 +40,7 @@ export function CheckResultView({ outcome, systemRefrigerant }: { outcome: Check
       <CoverageBlock coverage={result.coverage} />
       <Divider />
       <ComputedBlock computed={result.computed} />
+      <SaveToJob />
     </View>
   );
 }

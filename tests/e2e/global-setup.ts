@@ -4,6 +4,7 @@ import { createServer } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
+import { startLocalMailService } from '../../server/mail/local-mail-service';
 // @ts-expect-error plain ESM script without types
 import { buildWeb } from '../../scripts/build-web.mjs';
 
@@ -24,6 +25,8 @@ declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
     accounts: Record<'tech' | 'estimator' | 'admin', E2eAccount>;
+    /** Where the local mail service keeps each message the server sends (.eml files). */
+    mailDir: string;
   }
 }
 
@@ -76,6 +79,8 @@ export default async function setup(project: TestProject) {
   buildWeb();
   const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-e2e-'));
   const port = await freePort();
+  // Report e-mails go to a local mail service on a free loopback port, as demo mode does.
+  const mail = await startLocalMailService({ dataDir: dir, port: 0 });
   const env = {
     ...process.env,
     PORT: String(port),
@@ -85,6 +90,9 @@ export default async function setup(project: TestProject) {
     TANDEM_LOG_LEVEL: 'warn',
     TANDEM_SIGNIN_LIMIT: '1000',
     TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json'),
+    SMTP_HOST: mail.smtp.host,
+    SMTP_PORT: String(mail.smtp.port),
+    SMTP_TLS: 'none',
   };
   const admin = ACCOUNTS.admin;
   const created = spawnSync(
@@ -104,10 +112,12 @@ export default async function setup(project: TestProject) {
 
   project.provide('baseUrl', baseUrl);
   project.provide('accounts', ACCOUNTS);
+  project.provide('mailDir', mail.dir);
 
   return async () => {
     server.kill('SIGTERM');
     await new Promise((r) => server.once('exit', r));
+    await mail.close();
     rmSync(dir, { recursive: true, force: true });
   };
 }

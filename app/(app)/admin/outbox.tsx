@@ -1,0 +1,5 @@
+import { OutboxPanel } from '@/components/systems/outbox-panel';
+
+export default function OutboxRoute() {
+  return <OutboxPanel />;
+}

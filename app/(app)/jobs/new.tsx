@@ -1,0 +1,5 @@
+import { NewJobScreen } from '@/components/jobs/new-job-screen';
+
+export default function NewJobRoute() {
+  return <NewJobScreen />;
+}
