@@ -30,6 +30,34 @@ function rssMbOf(pid: number): number | undefined {
   }
 }
 
+const COMMIT_ROWS = 500;
+
+/** A 500-row price file whose effective date differs per round, so every commit inserts all its rows. */
+function priceFile(round: number): Blob {
+  const day = new Date(Date.UTC(2020, 0, 1) + round * 86_400_000).toISOString().slice(0, 10);
+  const lines = ['model,price,effective_from,description'];
+  for (let i = 0; i < COMMIT_ROWS; i++) lines.push(`BX-${String(i).padStart(4, '0')}-P,"$${(100 + i / 4).toFixed(2)}",${day},"Bench part ${i}"`);
+  return new Blob([`${lines.join('\n')}\n`], { type: 'text/csv' });
+}
+
+/** Commits 500-row price files back to back (dryRun=false) until stopped; resolves with the count committed. */
+async function commitLoop(base: string, adminToken: string, stop: { done: boolean }): Promise<{ commits: number; failed: number }> {
+  let commits = 0;
+  let failed = 0;
+  for (let round = 0; !stop.done; round++) {
+    const form = new FormData();
+    form.append('kind', 'prices');
+    form.append('distributor', 'Bench Supply');
+    form.append('dryRun', 'false');
+    form.append('file', priceFile(round), 'prices.csv');
+    const res = await fetch(`${base}/api/imports`, { method: 'POST', headers: { Authorization: `Bearer ${adminToken}` }, body: form });
+    await res.arrayBuffer();
+    if (res.status === 201) commits++;
+    else failed++;
+  }
+  return { commits, failed };
+}
+
 /** POST /api/checks and GET /api/health under autocannon on loopback, in the same run, against a server process of its own. */
 export async function run(): Promise<Measure[]> {
   const root = path.resolve(__dirname, '..');
@@ -43,7 +71,7 @@ export async function run(): Promise<Measure[]> {
       createInterface({ input: child.stdout! }).once('line', resolve);
       child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
     });
-    const { port, token, body } = JSON.parse(line) as { port: number; token: string; body: unknown };
+    const { port, token, adminToken, body } = JSON.parse(line) as { port: number; token: string; adminToken: string; body: unknown };
     const base = `http://127.0.0.1:${port}`;
     const headers = { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' };
     const payload = JSON.stringify(body);
@@ -53,12 +81,26 @@ export async function run(): Promise<Measure[]> {
     await cannon({ url: `${base}/api/checks`, method: 'POST', headers, body: payload, duration: 3 });
     const health = await cannon({ url: `${base}/api/health` });
     const checks = await cannon({ url: `${base}/api/checks`, method: 'POST', headers, body: payload });
+    // The same checks while an admin commits 500-row price files back to back (issue 8, fault 6).
+    const stop = { done: false };
+    const loop = commitLoop(base, adminToken, stop);
+    const during = await cannon({ url: `${base}/api/checks`, method: 'POST', headers, body: payload });
+    stop.done = true;
+    const { commits, failed } = await loop;
     const rssMb = rssMbOf(child.pid!);
     const note = `${CONNECTIONS} connections × ${DURATION_S} s on loopback after a 3 s warm-up; server in its own process, autocannon in the bench process`;
     const failures = checks.non2xx + checks.errors;
     return [
       { id: 'api.checks.p99-ms', value: checks.latency.p99, unit: 'ms', baseline: health.latency.p99, ratio: round(checks.latency.p99 / Math.max(health.latency.p99, 1), 2), note: `${note}; target < 25; baseline GET /api/health p99` },
       { id: 'api.checks.rps', value: round(checks.requests.average, 0), unit: 'req/s', baseline: round(health.requests.average, 0), ratio: round(checks.requests.average / health.requests.average, 3), note: `${note}; baseline GET /api/health${failures ? `; ${failures} failed requests` : ''}` },
+      {
+        id: 'api.checks.during-commits.p99-ms',
+        value: during.latency.p99,
+        unit: 'ms',
+        baseline: checks.latency.p99,
+        ratio: round(during.latency.p99 / Math.max(checks.latency.p99, 1), 2),
+        note: `${note}; while ${commits} price commits of ${COMMIT_ROWS} rows ran back to back${failed ? ` (${failed} failed)` : ''}; ${round(during.requests.average, 0)} req/s; baseline = idle api.checks.p99-ms of this run; target ratio ≤ 1.5`,
+      },
       ...(rssMb === undefined ? [] : [{ id: 'api.checks.rss-mb-after', value: round(rssMb, 1), unit: 'MB', note: 'server process RSS after both runs; target < 300' }]),
     ];
   } finally {

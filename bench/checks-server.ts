@@ -55,7 +55,9 @@ async function main() {
   const server = createApp(ctx).listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   const token = signToken(config.jwtSecret, { userId: tech.id, role: 'tech' });
-  process.stdout.write(`${JSON.stringify({ port: (server.address() as AddressInfo).port, token, body })}\n`);
+  const admin = await users.save(users.create({ email: 'bench-admin@test.invalid', name: 'Bench admin', role: 'admin', passwordHash: 'x', active: true }));
+  const adminToken = signToken(config.jwtSecret, { userId: admin.id, role: 'admin' });
+  process.stdout.write(`${JSON.stringify({ port: (server.address() as AddressInfo).port, token, adminToken, body })}\n`);
   process.on('SIGTERM', () => {
     server.close(() => void dataSource.destroy().finally(() => {
       rmSync(dir, { recursive: true, force: true });

@@ -5,12 +5,15 @@ import type { BenchRun, Measure } from './measure';
 
 /**
  * npm run bench: runs every bench/*.bench.ts (or those named on the command line), prints a table,
- * and writes bench/results.json ({ measures: [...] }, DESIGN.md §8).
+ * and writes bench/results.json ({ measures: [...] }, DESIGN.md §8). `--soak` runs the long
+ * bench/*.soak.ts instead (e.g. fifty kill -9 rounds).
  */
 async function main() {
-  const only = process.argv.slice(2);
+  const args = process.argv.slice(2);
+  const suffix = args.includes('--soak') ? '.soak.ts' : '.bench.ts';
+  const only = args.filter((a) => a !== '--soak');
   const files = readdirSync(__dirname)
-    .filter((f) => f.endsWith('.bench.ts'))
+    .filter((f) => f.endsWith(suffix))
     .filter((f) => only.length === 0 || only.some((o) => f.includes(o)))
     .sort();
   const measures: Measure[] = [];

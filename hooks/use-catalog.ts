@@ -25,16 +25,20 @@ export interface CatalogPage {
   pageSize: number;
 }
 
+/** A distributor that stocks the part (has a current price); the amount only for estimators and admins. */
 export interface CatalogPrice {
   distributor: string;
-  priceCents: number;
-  currency: string;
+  priceCents?: number;
+  currency?: string;
   effectiveFrom: string;
+  inStock: true;
 }
 
 export interface CatalogDetail {
   item: CatalogEntry;
   prices: CatalogPrice[];
+  /** False for a tech: the server left the amounts out. */
+  pricesVisible: boolean;
   ratedCombinations: (RatedCombinationSpec & { id: number })[];
 }
 

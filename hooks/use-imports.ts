@@ -1,11 +1,11 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ImportKind } from '@/shared/schemas/equipment';
-import type { ImportView } from '@/shared/schemas/imports';
-import { api, apiBlob, apiRequest, ApiError } from './api-client';
+import type { DecimalConvention, ImportDetail, ImportErrorPage, ImportView } from '@/shared/schemas/imports';
+import { api, apiBlob, apiRequest, ApiError, queryString } from './api-client';
 import { catalogKeys } from './use-catalog';
 import { STALE } from './stale-times';
 
-export type { ImportCounts, ImportRowError, ImportStatus, ImportView } from '@/shared/schemas/imports';
+export type { DecimalConvention, ImportCounts, ImportDetail, ImportErrorPage, ImportRowError, ImportStatus, ImportView } from '@/shared/schemas/imports';
 
 /** A picked file: a web File, or a native { uri, name, type } part. */
 export type UploadFile = Blob | { uri: string; name: string; type: string };
@@ -17,11 +17,14 @@ export interface UploadInput {
   distributor?: string;
   /** `{ "their header": "field" }`; the server remembers it per distributor. */
   mapping?: Record<string, string>;
+  /** Price files: the decimal mark chosen by the admin (absent: read from the file). */
+  decimalConvention?: DecimalConvention;
 }
 
 export const importKeys = {
   all: ['imports'] as const,
   list: () => [...importKeys.all, 'list'] as const,
+  errors: (id: number, page: number, pageSize: number) => [...importKeys.all, 'errors', id, page, pageSize] as const,
 };
 
 export const importsQuery = () =>
@@ -33,6 +36,23 @@ export const importsQuery = () =>
 
 export function useImports() {
   return useQuery(importsQuery());
+}
+
+/** One page of an import's rejected rows (the server keeps the first 500 with the total count). */
+export const importErrorsQuery = (id: number, page: number, pageSize: number) =>
+  queryOptions({
+    queryKey: importKeys.errors(id, page, pageSize),
+    queryFn: ({ signal }) => api.get<ImportErrorPage>(`/imports/${id}/errors${queryString({ page, pageSize })}`, signal),
+    staleTime: STALE.adminLists,
+  });
+
+export function useImportErrors(id: number, page: number, pageSize: number) {
+  return useQuery(importErrorsQuery(id, page, pageSize));
+}
+
+/** Fetches an import's rejected rows as CSV (cells a spreadsheet would run as formulas are neutralised). */
+export function fetchImportErrorsCsv(id: number): Promise<Blob> {
+  return apiBlob(`/imports/${id}/errors.csv`);
 }
 
 /** After anything that writes the catalog: the history and every catalog page are stale. */
@@ -52,7 +72,8 @@ export function useUploadPreview() {
       form.append('dryRun', 'true');
       if (input.distributor) form.append('distributor', input.distributor);
       if (input.mapping) form.append('mapping', JSON.stringify(input.mapping));
-      return apiRequest<{ import: ImportView }>('/imports', { method: 'POST', body: form }).then((r) => r.import);
+      if (input.decimalConvention) form.append('decimalConvention', input.decimalConvention);
+      return apiRequest<{ import: ImportDetail }>('/imports', { method: 'POST', body: form }).then((r) => r.import);
     },
     onSuccess: () => client.invalidateQueries({ queryKey: importKeys.all }),
   });
@@ -61,7 +82,7 @@ export function useUploadPreview() {
 export function useCommitImport() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.post<{ import: ImportView }>(`/imports/${id}/commit`).then((r) => r.import),
+    mutationFn: (id: number) => api.post<{ import: ImportDetail }>(`/imports/${id}/commit`).then((r) => r.import),
     onSuccess: () => invalidateAfterWrite(client),
   });
 }
@@ -69,7 +90,7 @@ export function useCommitImport() {
 export function useRevertImport() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.post<{ import: ImportView }>(`/imports/${id}/revert`).then((r) => r.import),
+    mutationFn: (id: number) => api.post<{ import: ImportDetail }>(`/imports/${id}/revert`).then((r) => r.import),
     onSuccess: () => invalidateAfterWrite(client),
   });
 }

@@ -5,6 +5,7 @@ import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.routes';
 import type { AppContext } from './context';
+import { defaultEmptyBody, requireKnownBodyType } from './lib/body-type';
 import { apiNotFound, errorMiddleware } from './lib/errors';
 import { apiRoutes } from './routes';
 
@@ -14,7 +15,8 @@ export function createApp(ctx: AppContext): Express {
   app.disable('x-powered-by');
   // API answers are per-user and rarely re-fetched unchanged; hashing every body is not worth it.
   app.set('etag', false);
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For decides the client address the sign-in limits key on: believe it only from configured proxies.
+  app.set('trust proxy', ctx.config.trustProxy ?? false);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -41,7 +43,7 @@ export function createApp(ctx: AppContext): Express {
     }),
   );
   if (ctx.config.corsOrigin) app.use('/api', devCors(ctx.config.corsOrigin));
-  app.use('/api', express.json({ limit: '1mb' }));
+  app.use('/api', requireKnownBodyType, express.json({ limit: '1mb' }), defaultEmptyBody);
 
   app.get('/api/health', (_req, res) => {
     res.json({ status: 'ok' });

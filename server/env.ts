@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { isIP } from 'node:net';
 import path from 'node:path';
 import { z } from 'zod';
 
@@ -13,8 +14,10 @@ const EnvSchema = z.object({
   TANDEM_JWT_SECRET: z.string().min(16).optional(),
   TANDEM_WEB_DIR: z.string().min(1).default('dist'),
   TANDEM_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
-  /** Sign-in attempts allowed per IP and per e-mail in the rate window. */
+  /** Failed sign-ins allowed per e-mail from one address in the rate window (3× that per address). */
   TANDEM_SIGNIN_LIMIT: z.coerce.number().int().min(1).default(10),
+  /** Which proxies' X-Forwarded-For to believe: `false` (none), a hop count, or addresses/subnets. */
+  TANDEM_TRUST_PROXY: z.string().default('false'),
   /** Only `npm run dev` sets this: the Expo dev server's origin. */
   TANDEM_CORS_ORIGIN: z.string().url().optional(),
 });
@@ -28,7 +31,40 @@ export interface AppConfig {
   webDir: string;
   logLevel: z.infer<typeof EnvSchema>['TANDEM_LOG_LEVEL'];
   signInLimit: number;
+  /** Express's `trust proxy`: false (the default) ignores X-Forwarded-For entirely. */
+  trustProxy?: TrustProxy;
   corsOrigin?: string;
+}
+
+export type TrustProxy = false | number | string[];
+
+const PROXY_NAMES = new Set(['loopback', 'linklocal', 'uniquelocal']);
+
+/** One proxy entry: a name express knows, an address, or an address/prefix subnet. */
+function isProxyEntry(entry: string): boolean {
+  if (PROXY_NAMES.has(entry)) return true;
+  const [address, prefix, ...rest] = entry.split('/');
+  const family = isIP(address);
+  if (!family || rest.length > 0) return false;
+  if (prefix === undefined) return true;
+  return /^[0-9]{1,3}$/.test(prefix) && Number(prefix) <= (family === 4 ? 32 : 128);
+}
+
+/**
+ * TANDEM_TRUST_PROXY: `false`/empty/`0` trusts no proxy, a number trusts that many hops, and a
+ * comma list trusts those proxies. `true` (trust any sender's header) is refused: it lets any
+ * client pick its own address and dodge the sign-in limits.
+ */
+export function parseTrustProxy(raw: string): TrustProxy {
+  const value = raw.trim();
+  if (value === '' || value === 'false' || value === '0') return false;
+  if (/^[0-9]+$/.test(value)) return Number(value);
+  const entries = value.split(',').map((entry) => entry.trim()).filter(Boolean);
+  const bad = entries.filter((entry) => !isProxyEntry(entry));
+  if (bad.length > 0 || entries.length === 0) {
+    throw new Error(`Invalid configuration: TANDEM_TRUST_PROXY must be false, a hop count, or proxy addresses/subnets (not "${bad.join(', ') || value}").`);
+  }
+  return entries;
 }
 
 /** Reads the JWT secret from the data dir, creating it once; it is never committed. */
@@ -58,6 +94,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     webDir: path.resolve(e.TANDEM_WEB_DIR),
     logLevel: e.TANDEM_LOG_LEVEL,
     signInLimit: e.TANDEM_SIGNIN_LIMIT,
+    trustProxy: parseTrustProxy(e.TANDEM_TRUST_PROXY),
     corsOrigin: e.TANDEM_CORS_ORIGIN,
   };
 }

@@ -14,14 +14,26 @@ interface Props {
   onResetPassword(): void;
 }
 
-function RoleMenu({ user, onChange }: Pick<Props, 'user' | 'onChange'>) {
+/** Why an admin's own role and active switch are locked (the server refuses these changes too). */
+export const OWN_ROW_REASON = 'You can not change your own role or deactivate yourself. Another admin can.';
+
+function RoleMenu({ user, isMe, onChange }: Pick<Props, 'user' | 'isMe' | 'onChange'>) {
   const [open, setOpen] = useState(false);
   return (
     <Menu
       visible={open}
       onDismiss={() => setOpen(false)}
       anchor={
-        <Button mode="outlined" compact icon="menu-down" contentStyle={styles.touch} onPress={() => setOpen(true)} testID={`role-${user.email}`}>
+        <Button
+          mode="outlined"
+          compact
+          icon="menu-down"
+          contentStyle={styles.touch}
+          disabled={isMe}
+          accessibilityHint={isMe ? OWN_ROW_REASON : undefined}
+          onPress={() => setOpen(true)}
+          testID={`role-${user.email}`}
+        >
           {ROLE_LABELS[user.role]}
         </Button>
       }
@@ -41,9 +53,17 @@ function RoleMenu({ user, onChange }: Pick<Props, 'user' | 'onChange'>) {
   );
 }
 
-function ActiveToggle({ user, onChange }: Pick<Props, 'user' | 'onChange'>) {
+function ActiveToggle({ user, isMe, onChange }: Pick<Props, 'user' | 'isMe' | 'onChange'>) {
   return (
-    <Button compact mode="text" contentStyle={styles.touch} onPress={() => onChange({ active: !user.active })} testID={`toggle-active-${user.email}`}>
+    <Button
+      compact
+      mode="text"
+      contentStyle={styles.touch}
+      disabled={isMe}
+      accessibilityHint={isMe ? OWN_ROW_REASON : undefined}
+      onPress={() => onChange({ active: !user.active })}
+      testID={`toggle-active-${user.email}`}
+    >
       {user.active ? 'Deactivate' : 'Reactivate'}
     </Button>
   );
@@ -70,6 +90,11 @@ export function UserRow({ user, isMe, wide, onChange, onResetPassword }: Props) 
       <Text variant="bodySmall" style={{ color: theme.colors.onSurfaceVariant }}>
         {user.email}
       </Text>
+      {isMe ? (
+        <Text variant="bodySmall" style={{ color: theme.colors.onSurfaceVariant }} testID="own-row-reason">
+          {OWN_ROW_REASON}
+        </Text>
+      ) : null}
     </View>
   );
   if (!wide) {
@@ -77,11 +102,11 @@ export function UserRow({ user, isMe, wide, onChange, onResetPassword }: Props) 
       <View testID={`user-row-${user.email}`} style={[styles.stacked, { borderBottomColor: theme.colors.outlineVariant }, !user.active && styles.inactive]}>
         {identity}
         <View style={styles.controls}>
-          <RoleMenu user={user} onChange={onChange} />
+          <RoleMenu user={user} isMe={isMe} onChange={onChange} />
           <Text variant="labelMedium" style={styles.status}>
             {status}
           </Text>
-          <ActiveToggle user={user} onChange={onChange} />
+          <ActiveToggle user={user} isMe={isMe} onChange={onChange} />
           <ResetButton user={user} onResetPassword={onResetPassword} />
         </View>
       </View>
@@ -93,11 +118,11 @@ export function UserRow({ user, isMe, wide, onChange, onResetPassword }: Props) 
     <View testID={`user-row-${user.email}`} style={[styles.tableRow, { borderBottomColor: theme.colors.outlineVariant }, !user.active && styles.inactive]}>
       <DataTable.Cell style={styles.nameCol}>{identity}</DataTable.Cell>
       <DataTable.Cell>
-        <RoleMenu user={user} onChange={onChange} />
+        <RoleMenu user={user} isMe={isMe} onChange={onChange} />
       </DataTable.Cell>
       <DataTable.Cell>{status}</DataTable.Cell>
       <View style={[styles.actionCol, styles.actions]}>
-        <ActiveToggle user={user} onChange={onChange} />
+        <ActiveToggle user={user} isMe={isMe} onChange={onChange} />
         <ResetButton user={user} onResetPassword={onResetPassword} />
       </View>
     </View>

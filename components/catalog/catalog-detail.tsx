@@ -42,8 +42,8 @@ export function CatalogDetail({ kind, id }: { kind: CatalogKind; id: number }) {
             <SpecList rows={specRows(kind, data.item)} />
           </SectionCard>
           {kind !== 'rated-combinations' ? (
-            <SectionCard title="Prices" testID="catalog-prices-section">
-              <PriceList prices={data.prices} />
+            <SectionCard title={data.pricesVisible === false ? 'In stock' : 'Prices'} testID="catalog-prices-section">
+              <PriceList prices={data.prices} pricesVisible={data.pricesVisible !== false} />
             </SectionCard>
           ) : null}
           {kind === 'outdoor-units' || kind === 'indoor-coils' || kind === 'air-handlers' ? (

@@ -2,15 +2,15 @@ import { StyleSheet, View } from 'react-native';
 import { Button, Card, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
-import { useCommitImport, type ImportView } from '@/hooks/use-imports';
+import { useCommitImport, type ImportDetail } from '@/hooks/use-imports';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { ImportCounts } from './import-counts';
-import { IMPORT_KIND_LABELS } from './import-labels';
+import { decimalNote, IMPORT_KIND_LABELS } from './import-labels';
 import { RejectedRows } from './rejected-rows';
 
 interface Props {
-  preview: ImportView;
-  onCommitted(view: ImportView): void;
+  preview: ImportDetail;
+  onCommitted(view: ImportDetail): void;
   onDiscard(): void;
 }
 
@@ -28,6 +28,11 @@ export function ImportPreview({ preview, onCommitted, onDiscard }: Props) {
         </Text>
         <Text variant="bodyMedium">{what}</Text>
         <ImportCounts counts={preview.counts} />
+        {preview.kind === 'prices' ? (
+          <Text variant="bodyMedium" testID="import-decimal">
+            {decimalNote(preview.decimalConvention, preview.decimalSource)}
+          </Text>
+        ) : null}
         {committed ? (
           <MessageBanner tone="success" testID="import-committed">
             {`Committed ${valid.toLocaleString('en-US')} valid ${valid === 1 ? 'row' : 'rows'} in one go. You can revert it from the history below.`}
@@ -43,7 +48,7 @@ export function ImportPreview({ preview, onCommitted, onDiscard }: Props) {
             {`${preview.counts.unmatched} price rows name models not in the catalog. They are kept and will show once those models are imported.`}
           </MessageBanner>
         ) : null}
-        <RejectedRows errors={preview.errors} rejected={preview.counts.rejected} />
+        <RejectedRows importId={preview.id} rejected={preview.counts.rejected} errorsTotal={preview.errorsTotal} />
         {commit.isError ? <MessageBanner tone="error">{errorText(commit.error)}</MessageBanner> : null}
         {committed ? null : (
           <View style={styles.actions}>

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { ProgressBar, Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
-import { headerProblemOf, useImports, useUploadPreview, type HeaderProblem, type ImportView } from '@/hooks/use-imports';
+import { headerProblemOf, useImports, useUploadPreview, type HeaderProblem, type ImportDetail } from '@/hooks/use-imports';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
 import { SectionCard } from '@/components/ui/section-card';
@@ -14,13 +14,13 @@ import { pickCsv } from './pick-csv';
 import { TemplateLinks } from './template-links';
 import { UploadForm, type UploadChoice } from './upload-form';
 
-const START: UploadChoice = { kind: 'prices', distributor: '', picked: null };
+const START: UploadChoice = { kind: 'prices', distributor: '', picked: null, decimal: 'auto' };
 
 
 /** Admin → Imports: upload a file as a dry run, read the preview, commit it; the history with revert. */
 export function ImportsPanel() {
   const [choice, setChoice] = useState<UploadChoice>(START);
-  const [preview, setPreview] = useState<ImportView | null>(null);
+  const [preview, setPreview] = useState<ImportDetail | null>(null);
   const upload = useUploadPreview();
   const history = useImports();
   const known = useMemo(() => [...new Set((history.data ?? []).map((i) => i.distributor).filter((d): d is string => Boolean(d)))].sort(), [history.data]);
@@ -31,7 +31,7 @@ export function ImportsPanel() {
     if (!choice.picked) return;
     setPreview(null);
     upload.mutate(
-      { file: choice.picked.file, fileName: choice.picked.name, kind: choice.kind, distributor: choice.kind === 'prices' ? choice.distributor.trim() : undefined, mapping },
+      { file: choice.picked.file, fileName: choice.picked.name, kind: choice.kind, distributor: choice.kind === 'prices' ? choice.distributor.trim() : undefined, mapping, decimalConvention: choice.kind === 'prices' && choice.decimal !== 'auto' ? choice.decimal : undefined },
       {
         onSuccess: (view) => {
           setHeaderProblem(null);

@@ -3,13 +3,16 @@ import { Button, Chip, Text } from 'react-native-paper';
 import { IMPORT_KINDS, type ImportKind } from '@/shared/schemas/equipment';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { FormField } from '@/components/ui/form-field';
-import { IMPORT_KIND_LABELS } from './import-labels';
+import type { DecimalConvention } from '@/hooks/use-imports';
+import { DECIMAL_CHOICES, IMPORT_KIND_LABELS } from './import-labels';
 import type { PickedFile } from './pick-csv';
 
 export interface UploadChoice {
   kind: ImportKind;
   distributor: string;
   picked: PickedFile | null;
+  /** Price files: how amounts are written; 'auto' reads it from the file. */
+  decimal: 'auto' | DecimalConvention;
 }
 
 interface Props {
@@ -53,6 +56,14 @@ export function UploadForm({ value, knownDistributors, busy, onChange, onPick, o
               ))}
             </View>
           ) : null}
+          <Text variant="labelLarge">How the prices are written</Text>
+          <View style={styles.chips}>
+            {DECIMAL_CHOICES.map(([d, label]) => (
+              <Chip key={d} selected={value.decimal === d} showSelectedOverlay onPress={() => onChange({ ...value, decimal: d })} style={styles.chip} testID={`import-decimal-${d}`}>
+                {label}
+              </Chip>
+            ))}
+          </View>
         </View>
       ) : null}
       <View style={styles.fileRow}>

@@ -1,6 +1,7 @@
 import bcrypt from 'bcryptjs';
 import type { PublicUser, SignIn, SignInResponse } from '../../shared/schemas/auth';
 import type { AppContext } from '../context';
+import { withWriteLock } from '../db/write-transaction';
 import { AppError, unauthorized } from '../lib/errors';
 import { User } from '../users/user.entity';
 import { toPublicUser } from '../users/users.service';
@@ -19,11 +20,13 @@ export async function signIn(ctx: AppContext, input: SignIn): Promise<SignInResp
 }
 
 export async function changeOwnPassword(ctx: AppContext, userId: number, current: string, next: string): Promise<PublicUser> {
-  const repo = ctx.dataSource.getRepository(User);
-  const user = await repo.findOneByOrFail({ id: userId });
+  const user = await ctx.dataSource.getRepository(User).findOneByOrFail({ id: userId });
   if (!(await bcrypt.compare(current, user.passwordHash))) {
     throw new AppError('wrong-password', 'The current password is not right.', 422, [{ path: 'currentPassword', message: 'Not right.' }]);
   }
-  user.passwordHash = await bcrypt.hash(next, 10);
-  return toPublicUser(await repo.save(user));
+  const passwordHash = await bcrypt.hash(next, 10);
+  return withWriteLock(ctx, async (manager) => {
+    await manager.getRepository(User).update({ id: userId }, { passwordHash });
+    return toPublicUser(await manager.getRepository(User).findOneByOrFail({ id: userId }));
+  });
 }

@@ -7,7 +7,8 @@ import { unauthorized } from '../lib/errors';
 /** Session tokens: JWT HS256 with `sub` and `role`, 12 hours. The server keeps no session state. */
 export const TOKEN_LIFETIME = '12h';
 
-const ClaimsSchema = z.object({ sub: z.string().regex(/^\d+$/), role: z.enum(ROLES) });
+// `exp` is required: jsonwebtoken accepts a token without one as valid forever.
+const ClaimsSchema = z.object({ sub: z.string().regex(/^[1-9][0-9]{0,15}$/), role: z.enum(ROLES), exp: z.number().int().positive() });
 export interface TokenClaims {
   userId: number;
   role: Role;
@@ -41,7 +42,7 @@ function keyFor(secret: string): KeyObject {
 const verified = new Map<string, { claims: TokenClaims; expiresAtMs: number }>();
 const VERIFIED_MAX = 5000;
 
-/** Verifies signature, algorithm (HS256 only: `alg: none` and others are refused) and expiry. */
+/** Verifies signature, algorithm (HS256 only: `alg: none` and others are refused) and expiry (required). */
 export function verifyToken(secret: string, token: string): TokenClaims {
   const cacheKey = `${secret}\n${token}`;
   const known = verified.get(cacheKey);
@@ -51,7 +52,7 @@ export function verifyToken(secret: string, token: string): TokenClaims {
     const parsed = ClaimsSchema.parse(payload);
     const claims = { userId: Number(parsed.sub), role: parsed.role };
     if (verified.size >= VERIFIED_MAX) verified.clear();
-    verified.set(cacheKey, { claims, expiresAtMs: (payload.exp ?? 0) * 1000 });
+    verified.set(cacheKey, { claims, expiresAtMs: parsed.exp * 1000 });
     return claims;
   } catch {
     verified.delete(cacheKey);

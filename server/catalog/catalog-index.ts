@@ -50,45 +50,55 @@ const EQUIPMENT_KEYS = [
 const cache = new WeakMap<DataSource, Map<CatalogKind, KindIndex>>();
 /** How long a read catalog version is trusted before asking the database again (other instances' imports). */
 const VERSION_TTL_MS = 250;
-const versions = new WeakMap<DataSource, { at: number; version: Promise<string> }>();
+const versions = new WeakMap<DataSource, { at: number; byKind: Promise<Map<string, string>> }>();
 
 /**
- * The catalog changes only when an import commits or reverts, so the count and latest time of those
- * is its version: checked per request (one tiny query), so every server instance sees a change.
+ * A kind changes only when an import of that kind commits or reverts, so the count and latest id of
+ * those is its version: a price commit (the frequent one) never rebuilds the equipment indexes the
+ * checks read. Read in one small grouped query, so every server instance sees a change.
  */
-async function catalogVersion(dataSource: DataSource): Promise<string> {
-  const row = await dataSource
+async function catalogVersions(dataSource: DataSource): Promise<Map<string, string>> {
+  const rows = await dataSource
     .getRepository(ImportRecord)
     .createQueryBuilder('i')
-    .select('COUNT(i.committedAt)', 'committed')
+    .select('i.kind', 'kind')
+    .addSelect('COUNT(i.committedAt)', 'committed')
     .addSelect('COUNT(i.revertedAt)', 'reverted')
     .addSelect('MAX(i.id)', 'last')
     .where('i.status != :preview', { preview: 'preview' })
-    .getRawOne<{ committed: number; reverted: number; last: number | null }>();
-  return `${row?.committed ?? 0}|${row?.reverted ?? 0}|${row?.last ?? 0}`;
+    .groupBy('i.kind')
+    .getRawMany<{ kind: string; committed: number; reverted: number; last: number | null }>();
+  return new Map(rows.map((r) => [r.kind, `${r.committed}|${r.reverted}|${r.last ?? 0}`]));
 }
 
-/** The catalog version, read at most every VERSION_TTL_MS: a check asks for several kinds at once. */
-function currentVersion(dataSource: DataSource): Promise<string> {
+/** The kind's catalog version, read at most every VERSION_TTL_MS: a check asks for several kinds at once. */
+async function currentVersion(dataSource: DataSource, kind: CatalogKind): Promise<string> {
   const now = Date.now();
-  const known = versions.get(dataSource);
-  if (known && now - known.at < VERSION_TTL_MS) return known.version;
-  const version = catalogVersion(dataSource);
-  versions.set(dataSource, { at: now, version });
-  version.catch(() => versions.delete(dataSource));
-  return version;
+  let known = versions.get(dataSource);
+  if (!known || now - known.at >= VERSION_TTL_MS) {
+    known = { at: now, byKind: catalogVersions(dataSource) };
+    versions.set(dataSource, known);
+    known.byKind.catch(() => versions.delete(dataSource));
+  }
+  return (await known.byKind).get(kind) ?? '0|0|0';
 }
 
-/** Forgets the cached version: an import committed or reverted in this process is seen at once. */
+/** Forgets the cached versions: an import committed or reverted in this process is seen at once. */
 export function invalidateCatalogIndex(dataSource: DataSource): void {
   versions.delete(dataSource);
+}
+
+/** Forgets every cached index and version: after a write that rolled back, nothing cached is trusted. */
+export function dropCatalogIndex(dataSource: DataSource): void {
+  versions.delete(dataSource);
+  cache.delete(dataSource);
 }
 
 /** The kind's index, rebuilt when an import has committed or reverted since it was built. */
 export async function kindIndex(dataSource: DataSource, kind: CatalogKind): Promise<KindIndex> {
   let perSource = cache.get(dataSource);
   if (!perSource) cache.set(dataSource, (perSource = new Map()));
-  const version = await currentVersion(dataSource);
+  const version = await currentVersion(dataSource, kind);
   const current = perSource.get(kind);
   if (current && current.version === version) return current;
   const rows = (await dataSource.getRepository(KINDS[kind].entity).find({ order: { id: 'ASC' } })) as unknown as Row[];

@@ -2,11 +2,12 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { CATALOG_KINDS } from '../../shared/schemas/equipment';
 import { normalizeRefrigerantName, REFRIGERANT_IDS } from '../../shared/schemas/fields';
-import { requireAuth } from '../auth/auth.middleware';
+import { currentUser, requireAuth } from '../auth/auth.middleware';
 import type { AppContext } from '../context';
 import { notFound } from '../lib/errors';
-import { parseParams } from '../lib/validate';
+import { IdParamSchema, parseParams } from '../lib/validate';
 import { getCatalogDetail, listCatalog } from './catalog.service';
+import { seesPrices, visiblePrices } from './price-visibility';
 
 const KindSchema = z.enum(CATALOG_KINDS);
 const ListQuerySchema = z.object({
@@ -16,7 +17,6 @@ const ListQuerySchema = z.object({
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(20),
 });
-const IdSchema = z.object({ id: z.coerce.number().int().positive() });
 
 /** Parses :kind; an unknown kind is a 404 (there is no such collection). */
 function kindOf(raw: string) {
@@ -25,7 +25,7 @@ function kindOf(raw: string) {
   return parsed.data;
 }
 
-/** /api/catalog/:kind (list, search, filters) and /api/catalog/:kind/:id (detail); any signed-in role. */
+/** /api/catalog/:kind (list, search, filters) and /api/catalog/:kind/:id (detail); any signed-in role (prices: estimator and admin). */
 export function catalogRouter(ctx: AppContext): Router {
   const router = Router();
   router.use(requireAuth(ctx));
@@ -35,8 +35,10 @@ export function catalogRouter(ctx: AppContext): Router {
   });
   router.get('/:kind/:id', async (req, res) => {
     const kind = kindOf(req.params.kind);
-    const { id } = parseParams(IdSchema, { id: req.params.id });
-    res.json(await getCatalogDetail(ctx, kind, id));
+    const { id } = parseParams(IdParamSchema, { id: req.params.id });
+    const { role } = currentUser(req);
+    const detail = await getCatalogDetail(ctx, kind, id);
+    res.json({ ...detail, prices: visiblePrices(role, detail.prices), pricesVisible: seesPrices(role) });
   });
   return router;
 }

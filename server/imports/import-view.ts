@@ -1,10 +1,10 @@
 import type { ImportKind } from '../../shared/schemas/equipment';
-import type { ImportView } from '../../shared/schemas/imports';
+import type { ImportDetail, ImportView } from '../../shared/schemas/imports';
 import type { ImportRecord } from './import.entity';
 
-export type { ImportView };
+export type { ImportDetail, ImportView };
 
-
+/** An import without its row errors, as the history lists it. */
 export function toImportView(record: ImportRecord, distributorName?: string | null, uploadedBy?: string): ImportView {
   return {
     id: record.id,
@@ -22,6 +22,12 @@ export function toImportView(record: ImportRecord, distributorName?: string | nu
       rejected: record.rejected,
       unmatched: record.unmatched,
     },
-    errors: record.errors,
+    errorsTotal: record.errorsTotal ?? 0,
+    ...(record.kind === 'prices' ? { decimalConvention: record.decimalConvention ?? null, decimalSource: record.decimalSource ?? null } : {}),
   };
+}
+
+/** One import with its kept row errors (at most MAX_STORED_ERRORS, values already cut short). */
+export function toImportDetail(record: ImportRecord, distributorName?: string | null): ImportDetail {
+  return { ...toImportView(record, distributorName), errors: record.errors ?? [] };
 }

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
-import type { ImportRowError, ImportStatus } from '../../shared/schemas/imports';
+import type { DecimalConvention, DecimalSource, ImportRowError, ImportStatus } from '../../shared/schemas/imports';
 
 export type { ImportRowError, ImportStatus };
 
@@ -18,7 +18,11 @@ export class ImportRecord {
   @Column({ type: 'integer', default: 0 }) unchanged: number;
   @Column({ type: 'integer', default: 0 }) rejected: number;
   @Column({ type: 'integer', default: 0 }) unmatched: number;
+  /** The first MAX_STORED_ERRORS row errors; errorsTotal counts them all. */
   @Column({ type: 'simple-json' }) errors: ImportRowError[];
+  @Column({ type: 'integer', default: 0 }) errorsTotal: number;
+  @Column({ type: 'varchar', length: 8, nullable: true }) decimalConvention: DecimalConvention | null;
+  @Column({ type: 'varchar', length: 8, nullable: true }) decimalSource: DecimalSource | null;
   /** The preview's valid rows as JSON (cleared on commit). */
   @Column({ type: 'text', nullable: true }) payload: string | null;
   @CreateDateColumn({ type: 'datetime' }) createdAt: Date;

@@ -4,13 +4,15 @@ import { Router } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
 import { IMPORT_KINDS, type ImportKind } from '../../shared/schemas/equipment';
+import { DECIMAL_CONVENTIONS, MAX_STORED_ERRORS } from '../../shared/schemas/imports';
 import { requireAuth, requireRole, currentUser } from '../auth/auth.middleware';
 import type { AppContext } from '../context';
 import { AppError, notFound } from '../lib/errors';
 import { IdParamSchema, parseBody, parseParams } from '../lib/validate';
 import { MAX_FILE_BYTES } from './csv-file';
 import { fieldsOf, headerKey, toSnake } from './header-map';
-import { commitImport, getImport, listImports, revertImport, uploadImport } from './imports.service';
+import { errorsCsv } from './csv-export';
+import { commitImport, getImport, importErrorPage, importErrors, listImports, revertImport, uploadImport } from './imports.service';
 
 /** Templates live beside the demo catalog; the server runs from the project root. */
 const TEMPLATES_DIR = path.resolve('catalog', 'templates');
@@ -20,6 +22,21 @@ const UploadFieldsSchema = z.object({
   distributor: z.string().trim().max(120).optional(),
   dryRun: z.enum(['true', 'false'], { error: 'dryRun must be true or false' }).default('true'),
   mapping: z.string().max(20000).optional(),
+  /** Price files: "point" (1,234.50), "comma" (1.234,50) or "auto" (read from the file, else the distributor's last). */
+  decimalConvention: z.enum([...DECIMAL_CONVENTIONS, 'auto'], { error: 'decimalConvention must be point, comma or auto' }).default('auto'),
+});
+
+/** A canonical positive whole number in a query ("0x10", "1e1", "+3" are refused). */
+const wholeNumber = (what: string, max: number) =>
+  z
+    .string()
+    .regex(/^[1-9]\d{0,5}$/, { error: `${what} must be a whole number from 1 to ${max}` })
+    .transform(Number)
+    .pipe(z.number().max(max, { error: `${what} must be at most ${max}` }));
+
+const ErrorPageSchema = z.object({
+  page: wholeNumber('page', 100000).optional().default(1),
+  pageSize: wholeNumber('pageSize', MAX_STORED_ERRORS).optional().default(50),
 });
 
 const NOT_CSV = /\.(xlsx|xlsm|xls|ods|numbers|pdf|zip|png|jpe?g|gif|docx?)$/i;
@@ -78,6 +95,7 @@ export function importsRouter(ctx: AppContext): Router {
       distributor: fields.distributor,
       dryRun: fields.dryRun === 'true',
       mapping: parseMapping(fields.kind, fields.mapping),
+      decimalConvention: fields.decimalConvention === 'auto' ? undefined : fields.decimalConvention,
       userId: currentUser(req).id,
     });
     res.status(201).json({ import: view });
@@ -89,6 +107,16 @@ export function importsRouter(ctx: AppContext): Router {
   router.get('/:id', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
     res.json({ import: await getImport(ctx, id) });
+  });
+  router.get('/:id/errors', async (req, res) => {
+    const { id } = parseParams(IdParamSchema, req.params);
+    const { page, pageSize } = parseParams(ErrorPageSchema, req.query);
+    res.json(await importErrorPage(ctx, id, page, pageSize));
+  });
+  router.get('/:id/errors.csv', async (req, res) => {
+    const { id } = parseParams(IdParamSchema, req.params);
+    const { errors } = await importErrors(ctx, id);
+    res.type('text/csv').attachment(`import-${id}-rejected-rows.csv`).send(errorsCsv(errors));
   });
   router.post('/:id/commit', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);

@@ -1,20 +1,20 @@
 import type { EntityManager } from 'typeorm';
 import type { ImportKind } from '../../shared/schemas/equipment';
-import { invalidateCatalogIndex } from '../catalog/catalog-index';
+import type { DecimalConvention, ImportErrorPage } from '../../shared/schemas/imports';
+import { dropCatalogIndex, invalidateCatalogIndex } from '../catalog/catalog-index';
+import { withWriteLock } from '../db/write-transaction';
 import { Distributor } from '../catalog/distributor.entity';
 import type { AppContext } from '../context';
 import { AppError, conflict, notFound } from '../lib/errors';
 import { User } from '../users/user.entity';
 import { ColumnMapping } from './column-mapping.entity';
 import { applyCatalogPlan, applyPricePlan } from './import-apply';
-import { parseImportFile, type ParsedFile, type ParsedRow } from './import-parse';
+import { parseImportFileInSlices, type ParsedFile, type ParsedRow } from './import-parse';
 import { planCatalog, planPrices, type ImportPlan } from './import-plan';
 import { revertImportRows } from './import-revert';
-import { toImportView, type ImportView } from './import-view';
+import { toImportDetail, toImportView, type ImportDetail, type ImportView } from './import-view';
 import { ImportRecord, type ImportRowError } from './import.entity';
 
-/** Row errors kept on an import and returned: enough to fix a file; the rejected count stays exact. */
-export const MAX_LISTED_ERRORS = 1000;
 
 export interface UploadInput {
   buffer: Buffer;
@@ -23,6 +23,8 @@ export interface UploadInput {
   distributor?: string;
   dryRun: boolean;
   mapping?: Record<string, string>;
+  /** Price files: the admin's choice of decimal mark (absent: detected from the file, else the distributor's last). */
+  decimalConvention?: DecimalConvention;
   userId: number | null;
   /** ISO date a blank effective date means (tests pin it). */
   today?: string;
@@ -37,25 +39,31 @@ interface PreviewPayload {
  * An upload: parse and validate it all first; then either store a preview (dryRun) or, only when
  * every row is valid, commit it in one transaction. A file with a bad row and dryRun=false writes nothing.
  */
-export async function uploadImport(ctx: AppContext, input: UploadInput): Promise<ImportView> {
+export async function uploadImport(ctx: AppContext, input: UploadInput): Promise<ImportDetail> {
   const distributorName = input.distributor?.trim() || undefined;
   if (input.kind === 'prices' && !distributorName) {
     throw new AppError('validation-failed', 'A price file needs the distributor it comes from.', 422, [{ path: 'distributor', message: 'required for prices' }]);
   }
   const known = distributorName ? await ctx.dataSource.getRepository(Distributor).findOneBy({ name: distributorName }) : null;
-  const mapping = { ...(known ? await savedMapping(ctx.dataSource.manager, known.id, input.kind) : {}), ...(input.mapping ?? {}) };
-  const parsed = parseImportFile(input.buffer, input.kind, mapping, input.today);
+  const saved = known ? await ctx.dataSource.manager.findOneBy(ColumnMapping, { distributorId: known.id, kind: input.kind }) : null;
+  const mapping = { ...(saved?.mapping ?? {}), ...(input.mapping ?? {}) };
+  const parsed = await parseImportFileInSlices(input.buffer, input.kind, mapping, input.today, { chosen: input.decimalConvention, saved: saved?.decimalConvention });
 
   if (!input.dryRun && parsed.rejected > 0) {
     throw new AppError('rows-rejected', `${parsed.rejected} of ${parsed.rowCount} rows are not valid; nothing was imported. Fix them, or upload as a preview and commit the valid rows.`, 422, {
       counts: { rows: parsed.rowCount, rejected: parsed.rejected },
-      errors: parsed.errors.slice(0, MAX_LISTED_ERRORS),
+      errorsTotal: parsed.errorsTotal,
+      ...(input.kind === 'prices' ? { decimalConvention: parsed.decimalConvention } : {}),
+      errors: parsed.errors,
     });
   }
 
-  const view = await ctx.dataSource.transaction(async (manager) => {
+  const view = await writeCatalog(ctx, async (manager) => {
     const distributor = distributorName ? await ensureDistributor(manager, distributorName) : null;
-    if (distributor && input.mapping && Object.keys(input.mapping).length > 0) await rememberMapping(manager, distributor.id, input.kind, mapping);
+    const newMapping = input.mapping && Object.keys(input.mapping).length > 0;
+    // A convention the file showed or the admin chose is remembered for this distributor's next file.
+    const newDecimal = parsed.decimalSource === 'file' || parsed.decimalSource === 'chosen' ? parsed.decimalConvention : null;
+    if (distributor && (newMapping || newDecimal)) await rememberMapping(manager, distributor.id, input.kind, newMapping ? mapping : null, newDecimal);
     const plan = await planFor(manager, input.kind, distributor?.id ?? null, parsed.rows);
     const record = await manager.save(
       manager.create(ImportRecord, {
@@ -65,7 +73,10 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
         uploadedById: input.userId,
         status: 'preview',
         ...countsOf(parsed, plan),
-        errors: parsed.errors.slice(0, MAX_LISTED_ERRORS),
+        errors: parsed.errors,
+        errorsTotal: parsed.errorsTotal,
+        decimalConvention: parsed.decimalConvention,
+        decimalSource: parsed.decimalSource,
         payload: input.dryRun ? JSON.stringify({ presentFields: parsed.presentFields, rows: parsed.rows } satisfies PreviewPayload) : null,
       }),
     );
@@ -75,15 +86,15 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
       record.committedAt = new Date();
       await manager.save(record);
     }
-    return toImportView(record, distributor?.name);
+    return toImportDetail(record, distributor?.name);
   });
   invalidateCatalogIndex(ctx.dataSource);
   return view;
 }
 
 /** Applies a preview's valid rows in one transaction (planned again against the tables as they are now). */
-export async function commitImport(ctx: AppContext, id: number): Promise<ImportView> {
-  const view = await ctx.dataSource.transaction(async (manager) => {
+export async function commitImport(ctx: AppContext, id: number): Promise<ImportDetail> {
+  const view = await writeCatalog(ctx, async (manager) => {
     const record = await manager.findOneBy(ImportRecord, { id });
     if (!record) throw notFound('Import');
     if (record.status !== 'preview') throw conflict(`This import is already ${record.status}; only a preview can be committed.`);
@@ -92,15 +103,15 @@ export async function commitImport(ctx: AppContext, id: number): Promise<ImportV
     await applyPlan(manager, plan, record);
     Object.assign(record, planCounts(plan), { status: 'committed', committedAt: new Date(), payload: null });
     await manager.save(record);
-    return toImportView(record, await distributorName(manager, record.distributorId));
+    return toImportDetail(record, await distributorName(manager, record.distributorId));
   });
   invalidateCatalogIndex(ctx.dataSource);
   return view;
 }
 
 /** Reverts a committed import in one transaction. */
-export async function revertImport(ctx: AppContext, id: number): Promise<ImportView> {
-  const view = await ctx.dataSource.transaction(async (manager) => {
+export async function revertImport(ctx: AppContext, id: number): Promise<ImportDetail> {
+  const view = await writeCatalog(ctx, async (manager) => {
     const record = await manager.findOneBy(ImportRecord, { id });
     if (!record) throw notFound('Import');
     if (record.status !== 'committed') throw conflict(`This import is ${record.status}; only a committed import can be reverted.`);
@@ -108,17 +119,17 @@ export async function revertImport(ctx: AppContext, id: number): Promise<ImportV
     record.status = 'reverted';
     record.revertedAt = new Date();
     await manager.save(record);
-    return toImportView(record, await distributorName(manager, record.distributorId));
+    return toImportDetail(record, await distributorName(manager, record.distributorId));
   });
   invalidateCatalogIndex(ctx.dataSource);
   return view;
 }
 
-/** Import history, newest first. */
+/** Import history, newest first, without row errors (those are paged per import). */
 export async function listImports(ctx: AppContext): Promise<ImportView[]> {
   const records = await ctx.dataSource.getRepository(ImportRecord).find({
     order: { id: 'DESC' },
-    select: ['id', 'kind', 'status', 'fileName', 'distributorId', 'uploadedById', 'createdAt', 'rows', 'inserted', 'updated', 'unchanged', 'rejected', 'unmatched', 'errors'],
+    select: ['id', 'kind', 'status', 'fileName', 'distributorId', 'uploadedById', 'createdAt', 'rows', 'inserted', 'updated', 'unchanged', 'rejected', 'unmatched', 'errorsTotal', 'decimalConvention', 'decimalSource'],
     take: 200,
   });
   const names = new Map((await ctx.dataSource.getRepository(Distributor).find()).map((d) => [d.id, d.name]));
@@ -128,13 +139,41 @@ export async function listImports(ctx: AppContext): Promise<ImportView[]> {
   );
 }
 
-export async function getImport(ctx: AppContext, id: number): Promise<ImportView> {
-  const record = await ctx.dataSource.getRepository(ImportRecord).findOne({
-    where: { id },
-    select: ['id', 'kind', 'status', 'fileName', 'distributorId', 'createdAt', 'rows', 'inserted', 'updated', 'unchanged', 'rejected', 'unmatched', 'errors'],
-  });
+const DETAIL_COLUMNS: (keyof ImportRecord)[] = ['id', 'kind', 'status', 'fileName', 'distributorId', 'createdAt', 'rows', 'inserted', 'updated', 'unchanged', 'rejected', 'unmatched', 'errors', 'errorsTotal', 'decimalConvention', 'decimalSource'];
+
+export async function getImport(ctx: AppContext, id: number): Promise<ImportDetail> {
+  const record = await ctx.dataSource.getRepository(ImportRecord).findOne({ where: { id }, select: DETAIL_COLUMNS });
   if (!record) throw notFound('Import');
-  return toImportView(record, await distributorName(ctx.dataSource.manager, record.distributorId));
+  return toImportDetail(record, await distributorName(ctx.dataSource.manager, record.distributorId));
+}
+
+/** One page (1-based) of an import's kept row errors. */
+export async function importErrorPage(ctx: AppContext, id: number, page: number, pageSize: number): Promise<ImportErrorPage> {
+  const record = await ctx.dataSource.getRepository(ImportRecord).findOne({ where: { id }, select: ['id', 'errors', 'errorsTotal'] });
+  if (!record) throw notFound('Import');
+  const errors = record.errors ?? [];
+  return { errors: errors.slice((page - 1) * pageSize, page * pageSize), page, pageSize, stored: errors.length, errorsTotal: record.errorsTotal ?? errors.length };
+}
+
+/** Every kept row error of an import, for the CSV download. */
+export async function importErrors(ctx: AppContext, id: number): Promise<{ fileName: string; errors: ImportRowError[] }> {
+  const record = await ctx.dataSource.getRepository(ImportRecord).findOne({ where: { id }, select: ['id', 'fileName', 'errors'] });
+  if (!record) throw notFound('Import');
+  return { fileName: record.fileName, errors: record.errors ?? [] };
+}
+
+/**
+ * One catalog write under the write lock. Checks may read the catalog between its statements (one
+ * shared SQLite connection), so a write that rolls back drops every cached index: none may keep rows
+ * that never committed.
+ */
+async function writeCatalog<T>(ctx: AppContext, work: (manager: EntityManager) => Promise<T>): Promise<T> {
+  try {
+    return await withWriteLock(ctx, work);
+  } catch (err) {
+    dropCatalogIndex(ctx.dataSource);
+    throw err;
+  }
 }
 
 function planFor(manager: EntityManager, kind: ImportKind, distributorId: number | null, rows: ParsedRow[]): Promise<ImportPlan> {
@@ -167,13 +206,14 @@ async function distributorName(manager: EntityManager, id: number | null): Promi
   return (await manager.findOneBy(Distributor, { id }))?.name;
 }
 
-async function savedMapping(manager: EntityManager, distributorId: number, kind: ImportKind): Promise<Record<string, string>> {
-  return (await manager.findOneBy(ColumnMapping, { distributorId, kind }))?.mapping ?? {};
-}
-
-async function rememberMapping(manager: EntityManager, distributorId: number, kind: ImportKind, mapping: Record<string, string>) {
+/** Remembers a distributor's mapping and/or decimal mark (null: keep what is stored). */
+async function rememberMapping(manager: EntityManager, distributorId: number, kind: ImportKind, mapping: Record<string, string> | null, decimal: DecimalConvention | null) {
   const found = await manager.findOneBy(ColumnMapping, { distributorId, kind });
-  await manager.save(Object.assign(found ?? manager.create(ColumnMapping, { distributorId, kind }), { mapping, updatedAt: new Date() }));
+  const row = found ?? manager.create(ColumnMapping, { distributorId, kind, mapping: {}, decimalConvention: null });
+  if (mapping) row.mapping = mapping;
+  if (decimal) row.decimalConvention = decimal;
+  row.updatedAt = new Date();
+  await manager.save(row);
 }
 
 export type { ImportRowError };

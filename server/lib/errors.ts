@@ -36,18 +36,58 @@ interface HttpishError {
   statusCode?: number;
   type?: string;
   code?: string;
+  message?: string;
+  stack?: string;
+  storageErrors?: unknown;
+  detail?: string;
+  driverError?: { code?: string; message?: string; detail?: string };
 }
 
-/** Maps errors thrown by body parsers and multer to our codes; everything unknown is a 500 with no detail. */
+/** body-parser's error types (express.json) and what they mean to the client. */
+const BODY_PARSER_ERRORS: Record<string, [code: string, message: string, status: number]> = {
+  'entity.parse.failed': ['bad-json', 'The request body is not valid JSON.', 400],
+  'entity.too.large': ['too-large', 'The request is too large.', 413],
+  'encoding.unsupported': ['unsupported-encoding', 'The request body uses an encoding the server does not read.', 415],
+  'charset.unsupported': ['unsupported-encoding', 'The request body uses a character set the server does not read.', 415],
+  'request.aborted': ['bad-request', 'The request body was cut off.', 400],
+  'request.size.invalid': ['bad-request', 'The request body is shorter or longer than it says.', 400],
+};
+
+/**
+ * A multipart body busboy could not read (no boundary, cut off mid-part, bad part headers): busboy
+ * throws plain Errors, so recognise them by where they come from. Multer tags every error raised
+ * while it reads a body with `storageErrors`; busboy's constructor throws before that.
+ */
+function isMultipartParseError(e: HttpishError): boolean {
+  if (Array.isArray(e.storageErrors)) return true;
+  const firstFrame = (e.stack ?? '').split('\n').find((line) => line.trimStart().startsWith('at '));
+  if (firstFrame && /[\\/]node_modules[\\/](busboy|multer)[\\/]/.test(firstFrame)) return true;
+  return /^(Multipart: |Unexpected end of (form|file)|Malformed (part|content))/i.test(e.message ?? '');
+}
+
+/** SQLite and PostgreSQL (23505) unique violations as a 409 naming the field, never a 500. */
+function uniqueViolation(e: HttpishError): AppError | null {
+  const driver = e.driverError ?? e;
+  const code = driver.code ?? e.code;
+  if (code !== 'SQLITE_CONSTRAINT_UNIQUE' && code !== 'SQLITE_CONSTRAINT_PRIMARYKEY' && code !== '23505') return null;
+  // SQLite: "UNIQUE constraint failed: users.email"; PostgreSQL detail: "Key (email)=(…) already exists."
+  const field = /constraint failed: \w+\.(\w+)/.exec(driver.message ?? '')?.[1] ?? /^Key \((\w+)\)=/.exec(driver.detail ?? '')?.[1];
+  const message = field ? `Another record already has this ${field}.` : 'This would duplicate a record that already exists.';
+  return new AppError('conflict', message, 409, field ? { field } : undefined);
+}
+
+/** Maps errors thrown by body parsers, multer and the database to our codes; everything unknown is a 500 with no detail. */
 function toAppError(err: unknown): AppError {
   if (err instanceof AppError) return err;
   if (err instanceof z.ZodError) return validationError(err);
   const e = (err ?? {}) as HttpishError;
-  if (e.type === 'entity.parse.failed') return new AppError('bad-json', 'The request body is not valid JSON.', 400);
-  if (e.type === 'entity.too.large' || e.code === 'LIMIT_FILE_SIZE') {
-    return new AppError('too-large', 'The request is too large.', 413);
-  }
+  const parserError = e.type ? BODY_PARSER_ERRORS[e.type] : undefined;
+  if (parserError) return new AppError(...parserError);
+  if (e.code === 'LIMIT_FILE_SIZE' || e.code === 'LIMIT_FIELD_VALUE') return new AppError('too-large', 'The request is too large.', 413);
   if (typeof e.code === 'string' && e.code.startsWith('LIMIT_')) return new AppError('bad-upload', 'The upload is malformed.', 400);
+  if (isMultipartParseError(e)) return new AppError('bad-upload', 'The upload could not be read: the form data is malformed or cut off.', 400);
+  const unique = uniqueViolation(e);
+  if (unique) return unique;
   const status = e.status ?? e.statusCode;
   if (status && status >= 400 && status < 500) return new AppError('bad-request', 'The request could not be read.', status);
   return new AppError('internal', 'Something went wrong on the server.', 500);

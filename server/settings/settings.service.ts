@@ -3,6 +3,7 @@ import { DEFAULT_RULE_SETTINGS, resolveSettings } from '../../shared/rules/setti
 import type { RuleContext, TransitionRule } from '../../shared/rules/types';
 import type { RulesSettingsBody, RulesSettingsResponse } from '../../shared/schemas/settings';
 import type { AppContext } from '../context';
+import { withWriteLock } from '../db/write-transaction';
 import { RuleSettingsRow } from './rule-settings.entity';
 import { TransitionRuleRow } from './transition-rule.entity';
 
@@ -28,9 +29,10 @@ export async function loadRuleContext(ctx: AppContext): Promise<RuleContext> {
   return { settings, transitionRules };
 }
 
-/** Replaces the settings and the transition rules in one transaction (admin). */
+/** Replaces the settings and the transition rules in one write-locked transaction (admin). */
 export async function saveRulesSettings(ctx: AppContext, body: RulesSettingsBody, userId: number): Promise<RulesSettingsResponse> {
-  await ctx.dataSource.transaction(async (manager) => {
+  // Drop the cache even on failure: a read during the transaction may have cached its uncommitted rows.
+  await withWriteLock(ctx, async (manager) => {
     await manager.getRepository(RuleSettingsRow).save({
       id: SETTINGS_ROW_ID,
       settings: stripUndefined(body.settings),
@@ -40,8 +42,7 @@ export async function saveRulesSettings(ctx: AppContext, body: RulesSettingsBody
     const rules = manager.getRepository(TransitionRuleRow);
     await rules.clear();
     if (body.transitionRules.length) await rules.insert(body.transitionRules.map(toRow));
-  });
-  cache.delete(ctx.dataSource);
+  }).finally(() => cache.delete(ctx.dataSource));
   return getRulesSettings(ctx);
 }
 

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { UserCreateSchema, UserPatchSchema } from '../../shared/schemas/auth';
 import type { AppContext } from '../context';
-import { requireAuth, requireRole } from '../auth/auth.middleware';
+import { currentUser, requireAuth, requireRole } from '../auth/auth.middleware';
 import { IdParamSchema, parseBody, parseParams } from '../lib/validate';
 import { createUser, listUsers, updateUser } from './users.service';
 
@@ -16,7 +16,7 @@ export function usersRouter(ctx: AppContext): Router {
   });
   router.patch('/:id', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.json({ user: await updateUser(ctx, id, parseBody(UserPatchSchema, req.body)) });
+    res.json({ user: await updateUser(ctx, currentUser(req).id, id, parseBody(UserPatchSchema, req.body)) });
   });
   return router;
 }

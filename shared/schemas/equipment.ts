@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { blankToUndefined, enumOf, isoDate, numberIn, numberListIn, refrigerant, refrigerantList, text, tons, tubeOdIn, yesNo } from './fields';
+import { blankToUndefined, enumOf, isoDate, numberIn, numberListIn, parseDecimalText, refrigerant, refrigerantList, text, tons, tubeOdIn, yesNo } from './fields';
 
 /**
  * Equipment specs: the same schemas validate catalog CSV rows, catalog API items and parts typed
@@ -53,7 +53,7 @@ export const OutdoorUnitSpecSchema = z.object({
   mcaAmps: opt(amps),
   mocpAmps: opt(amps),
   voltage: opt(voltage),
-  phase: opt(z.preprocess((v) => (typeof v === 'string' && v.trim() !== '' ? Number(v) : v === '' ? undefined : v), z.union([z.literal(1), z.literal(3)], { error: 'phase must be 1 or 3' }))),
+  phase: opt(z.preprocess((v) => (typeof v === 'string' && v.trim() !== '' ? (parseDecimalText(v) ?? v) : v === '' ? undefined : v), z.union([z.literal(1), z.literal(3)], { error: 'phase must be 1 or 3' }))),
   startAssist: opt(yesNo),
   manufactureDate: opt(isoDate),
   targetSubcoolingF: opt(numberIn(0, 30)),

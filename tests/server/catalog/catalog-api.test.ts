@@ -52,13 +52,24 @@ describe('catalog API', () => {
 
   it('when an item is opened, then it has its current price per distributor (not the future one) and its rated combinations', async () => {
     const list = await get('/api/catalog/outdoor-units?q=QA-36-X').expect(200);
-    const res = await get(`/api/catalog/outdoor-units/${list.body.items[0].id}`).expect(200);
+    const res = await get(`/api/catalog/outdoor-units/${list.body.items[0].id}`, 'estimator').expect(200);
     expect(res.body.item.model).toBe('QA-36-X');
     expect(res.body.prices).toEqual([
-      { distributor: 'Beta Parts', priceCents: 295000, currency: 'USD', effectiveFrom: '2020-06-01' },
-      { distributor: 'Alpha Supply', priceCents: 310000, currency: 'USD', effectiveFrom: '2021-01-01' },
+      { distributor: 'Beta Parts', priceCents: 295000, currency: 'USD', effectiveFrom: '2020-06-01', inStock: true },
+      { distributor: 'Alpha Supply', priceCents: 310000, currency: 'USD', effectiveFrom: '2021-01-01', inStock: true },
     ]);
     expect(res.body.ratedCombinations).toEqual([expect.objectContaining({ outdoorModel: 'qa 36 x', indoorModel: 'QC-30', seer2: 16.1 })]);
+  });
+
+  it('when a tech opens the same item, then each distributor shows as stocking it with no amount', async () => {
+    const list = await get('/api/catalog/outdoor-units?q=QA-36-X').expect(200);
+    const res = await get(`/api/catalog/outdoor-units/${list.body.items[0].id}`, 'tech').expect(200);
+    expect(res.body.pricesVisible).toBe(false);
+    expect(res.body.prices).toEqual([
+      { distributor: 'Beta Parts', effectiveFrom: '2020-06-01', inStock: true },
+      { distributor: 'Alpha Supply', effectiveFrom: '2021-01-01', inStock: true },
+    ]);
+    expect(JSON.stringify(res.body)).not.toMatch(/priceCents|295000|310000/);
   });
 
   it('when the kind is unknown, then 404; when parameters are bad, then 400; when signed out, then 401', async () => {
