@@ -7,9 +7,10 @@ import { checksRouter } from './checks/checks.routes';
 import { settingsRouter } from './settings/settings.routes';
 import { refrigerantsRouter } from './refrigerants/refrigerants.routes';
 import { commissioningRouter } from './commissioning/commissioning.routes';
+import { coilsRouter } from './coils/coils.routes';
 
 /**
  * The API's resource routers, mounted under /api/<prefix>. Each module adds its line here.
  * (Auth and health are mounted by createApp itself.)
  */
-export const apiRoutes: [string, (ctx: AppContext) => Router][] = [['users', usersRouter], ['catalog', catalogRouter], ['imports', importsRouter], ['checks', checksRouter], ['settings', settingsRouter], ['refrigerants', refrigerantsRouter], ['commissioning', commissioningRouter]];
+export const apiRoutes: [string, (ctx: AppContext) => Router][] = [['users', usersRouter], ['catalog', catalogRouter], ['imports', importsRouter], ['checks', checksRouter], ['settings', settingsRouter], ['refrigerants', refrigerantsRouter], ['commissioning', commissioningRouter], ['coils', coilsRouter]];
