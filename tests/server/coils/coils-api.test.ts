@@ -170,7 +170,9 @@ describe('GET /api/coils/compatible: best price and sort', () => {
     // Constructed prices (invented distributors). 2099 rows are scheduled (future), never current.
     await load('prices', 'model,price,effective_from\nCL-A36,900.00,2024-01-01\nCL-A36,700.00,2025-01-01\nCL-A36,100.00,2099-01-01\nCL-B36,500.00,2024-06-01\n', 'Harbor Supply');
     await load('prices', 'model,price,effective_from\nCL-A36,650.00,2023-01-01\nCL-A36,800.00,2025-02-01\nCL-B36,500.00,2025-03-01\n', 'Ridge Parts');
-    let { map, items } = await byModel();
+    const first = await byModel();
+    const items = first.items;
+    let map = first.map;
     // Harbor's latest current CL-A36 is 700 (2025-01-01; 100 is future), Ridge's is 800 (2025-02-01): 700 wins.
     expect(map.get('CL-A36')!.bestPrice).toEqual({ distributor: 'Harbor Supply', priceCents: 70000, effectiveFrom: '2025-01-01' });
     // Both at 500.00: the more recent (Ridge, 2025-03-01) wins the tie.
