@@ -27,7 +27,7 @@ export const coilKeys = {
 export const compatibleCoilsQuery = (search: CoilsSearch) =>
   queryOptions({
     queryKey: coilKeys.compatible(search),
-    queryFn: ({ signal }) => api.get<CompatibleCoilsResponse>(`/api/coils/compatible${queryString({ ...search })}`, signal),
+    queryFn: ({ signal }) => api.get<CompatibleCoilsResponse>(`/coils/compatible${queryString({ ...search })}`, signal),
     staleTime: STALE.catalog,
     placeholderData: keepPreviousData,
   });

@@ -10,7 +10,7 @@ export function CoilDetail({ item, state }: { item: CompatibleCoil; state?: stri
   const regional = regionalWords(item, state);
   return (
     <View style={styles.box} testID={`coil-detail-${item.coil.model}`}>
-      <Text variant="titleMedium" accessibilityRole="header">
+      <Text variant="titleMedium" role="heading" aria-level={3}>
         {item.coil.model}
         {item.coil.brand ? ` · ${item.coil.brand}` : ''}
       </Text>
