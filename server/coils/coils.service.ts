@@ -14,11 +14,20 @@ import { loadRuleContext } from '../settings/settings.service';
 import { pickBestPrice } from './best-price';
 import { fuzzyFilter, leftOutCandidates, matchesSpecFilters, narrowCandidates } from './coil-candidates';
 
+/** A coil row's spec, worked out once per row object (rows live as long as their catalog index). */
+const specs = new WeakMap<IndoorCoil, ReturnType<typeof toSpec<'indoor-coils'>>>();
+function specOf(coil: IndoorCoil) {
+  let spec = specs.get(coil);
+  if (!spec) specs.set(coil, (spec = toSpec('indoor-coils', coil)));
+  return spec;
+}
+
 /** The check of one coil with the fixed parts: the same engine, settings and scope as POST /api/checks. */
 function checkCoil(base: Pairing, context: RuleContext, coil: IndoorCoil, state: string | undefined): CompatibleCoil {
-  const pairing: Pairing = { ...base, indoorCoil: { spec: toSpec('indoor-coils', coil), kept: false, id: coil.id } };
+  const spec = specOf(coil);
+  const pairing: Pairing = { ...base, indoorCoil: { spec, kept: false, id: coil.id } };
   const result = runChecks(pairing, context);
-  const item: CompatibleCoil = { coil: { id: coil.id, ...toSpec('indoor-coils', coil), model: coil.model }, verdict: result.verdict, findings: result.findings };
+  const item: CompatibleCoil = { coil: { id: coil.id, ...spec, model: coil.model }, verdict: result.verdict, findings: result.findings };
   const combo = result.computed.ratedCombination as CompatibleCoil['ratedCombination'];
   if (combo) item.ratedCombination = combo;
   if (state && result.computed.regionalMinimum && efficiencyFigures(pairing).seer2 !== undefined) {
