@@ -16,6 +16,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/check', segment: 'check', label: 'Check', icon: 'clipboard-check-outline', roles: everyone },
   { href: '/readings', segment: 'readings', label: 'Readings', icon: 'gauge', roles: everyone },
   { href: '/jobs', segment: 'jobs', label: 'Jobs', icon: 'briefcase-outline', roles: everyone },
+  { href: '/coils', segment: 'coils', label: 'Coils', icon: 'swap-horizontal', roles: ['estimator', 'admin'] },
   { href: '/catalog', segment: 'catalog', label: 'Catalog', icon: 'book-open-variant', roles: everyone },
   { href: '/admin', segment: 'admin', label: 'Admin', icon: 'cog-outline', roles: ['admin'] },
   { href: '/account', segment: 'account', label: 'Account', icon: 'account-circle-outline', roles: everyone },

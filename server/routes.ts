@@ -11,6 +11,7 @@ import { attachmentsRouter } from './attachments/attachments.routes';
 import { outboxRouter } from './mail/outbox.routes';
 import { refrigerantsRouter } from './refrigerants/refrigerants.routes';
 import { commissioningRouter } from './commissioning/commissioning.routes';
+import { coilsRouter } from './coils/coils.routes';
 
 /**
  * The API's resource routers, mounted under /api/<prefix>. Each module adds its line here.
@@ -28,4 +29,5 @@ export const apiRoutes: [string, (ctx: AppContext) => Router][] = [
   ['outbox', outboxRouter],
   ['refrigerants', refrigerantsRouter],
   ['commissioning', commissioningRouter],
+  ['coils', coilsRouter],
 ];
