@@ -26,6 +26,17 @@ export function FindingGroup({ severity, findings }: { severity: Severity; findi
   );
 }
 
+/** Blockers, cautions and notes in that order (screens without a Safety block between them). */
+export function FindingGroups({ findings }: { findings: Finding[] }) {
+  return (
+    <>
+      {SEVERITY_GROUPS.map((g) => (
+        <FindingGroup key={g.severity} severity={g.severity} findings={findings} />
+      ))}
+    </>
+  );
+}
+
 const styles = StyleSheet.create({
   head: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, paddingVertical: spacing.xs },
 });

@@ -40,7 +40,7 @@ describe('buildCheckRequest with partial groups (Issue 7 item 3)', () => {
   it('when the breaker is not a number, then the error beside it reads in plain words', () => {
     const built = buildCheckRequest(form({ electrical: { breakerAmps: 'thirty' } }));
     expect(built.ok).toBe(false);
-    if (!built.ok) expect(built.errors['electrical.breakerAmps']).toBe('Breaker size must be a number from 1 to 1000 A');
+    if (!built.ok) expect(built.errors['electrical.breakerAmps']).toMatch(/^Enter a number/);
   });
 
   it('when a section is left empty, then it is not sent', () => {
