@@ -140,8 +140,9 @@ function findings(layout: PdfLayout, record: SystemView) {
     );
   }
   if (missing.length > 0) {
-    const facts = [...new Set(missing.map((f) => String(f.values.missing)))];
-    layout.paragraph(`Not checked for want of facts: ${facts.join('; ')}.`, { muted: true });
+    // Short forms (no parenthetical examples) keep a full record on one page.
+    const facts = [...new Set(missing.map((f) => String(f.values.missing).replace(/\s*\([^)]*\)/g, '')))];
+    layout.paragraph(`Not checked for want of facts: ${facts.join('; ')}.`, { muted: true, size: 7.5 });
   }
 }
 
