@@ -59,8 +59,8 @@ export function UsersPanel() {
       ) : null}
       <View>
         <Text variant="bodySmall">
-          Technicians and estimators check systems and search the catalog; admins also import catalogs and prices, set the
-          shop&apos;s rule settings and manage users.
+          Technicians check systems, take start-up readings and keep job records; estimators also search and price
+          replacement coils; admins also import catalogs and prices, set the shop&apos;s rule settings and manage users.
         </Text>
       </View>
       <AddUserDialog visible={adding} onDismiss={() => setAdding(false)} />

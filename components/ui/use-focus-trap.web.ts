@@ -16,8 +16,15 @@ export function useFocusTrap(ref: RefObject<View | null>, active: boolean, onEsc
     const root = () => ref.current as unknown as HTMLElement | null;
     const focusables = () =>
       Array.from(root()?.querySelectorAll<HTMLElement>(FOCUSABLE) ?? []).filter((el) => !el.hasAttribute('disabled') && el.getAttribute('aria-disabled') !== 'true');
-    // After the dialog has painted: the first control (or the dialog itself) takes focus.
-    const start = setTimeout(() => (focusables()[0] ?? root())?.focus(), 0);
+    // Once the dialog has painted (a portal may mount a few frames later): the first control, or the
+    // dialog itself, takes focus. Tries for about a second before giving up.
+    let start: ReturnType<typeof setTimeout> | undefined;
+    const focusFirst = (triesLeft: number) => {
+      const target = focusables()[0] ?? root();
+      if (target) target.focus();
+      if (!target?.contains(document.activeElement) && triesLeft > 0) start = setTimeout(() => focusFirst(triesLeft - 1), 50);
+    };
+    start = setTimeout(() => focusFirst(20), 0);
     const onKey = (e: KeyboardEvent) => {
       if (e.key === 'Escape') {
         e.preventDefault();
