@@ -1,11 +1,9 @@
-import { spawn } from 'node:child_process';
 import { readFileSync } from 'node:fs';
-import path from 'node:path';
-import { createInterface } from 'node:readline';
 // autocannon ships no types here; the options and result fields used are documented in its README.
 // eslint-disable-next-line @typescript-eslint/ban-ts-comment
 // @ts-ignore
 import autocannon from 'autocannon';
+import { startBenchServer } from './bench-server';
 import { round, type Measure } from './measure';
 
 const CONNECTIONS = 50;
@@ -18,7 +16,8 @@ interface CannonResult {
   errors: number;
 }
 
-const cannon = (opts: Record<string, unknown>) => autocannon({ connections: CONNECTIONS, duration: DURATION_S, ...opts }) as Promise<CannonResult>;
+const cannon = (opts: Record<string, unknown>) =>
+  autocannon({ connections: CONNECTIONS, duration: DURATION_S, ...opts }) as Promise<CannonResult>;
 
 /** Resident set size of a process in MB, from /proc (Linux). */
 function rssMbOf(pid: number): number | undefined {
@@ -36,7 +35,8 @@ const COMMIT_ROWS = 500;
 function priceFile(round: number): Blob {
   const day = new Date(Date.UTC(2020, 0, 1) + round * 86_400_000).toISOString().slice(0, 10);
   const lines = ['model,price,effective_from,description'];
-  for (let i = 0; i < COMMIT_ROWS; i++) lines.push(`BX-${String(i).padStart(4, '0')}-P,"$${(100 + i / 4).toFixed(2)}",${day},"Bench part ${i}"`);
+  for (let i = 0; i < COMMIT_ROWS; i++)
+    lines.push(`BX-${String(i).padStart(4, '0')}-P,"$${(100 + i / 4).toFixed(2)}",${day},"Bench part ${i}"`);
   return new Blob([`${lines.join('\n')}\n`], { type: 'text/csv' });
 }
 
@@ -60,18 +60,9 @@ async function commitLoop(base: string, adminToken: string, stop: { done: boolea
 
 /** POST /api/checks and GET /api/health under autocannon on loopback, in the same run, against a server process of its own. */
 export async function run(): Promise<Measure[]> {
-  const root = path.resolve(__dirname, '..');
-  const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'checks-server.ts')], {
-    cwd: root,
-    env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json') },
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
+  const { child, info } = await startBenchServer<{ port: number; token: string; adminToken: string; body: unknown }>('checks-server.ts');
   try {
-    const line = await new Promise<string>((resolve, reject) => {
-      createInterface({ input: child.stdout! }).once('line', resolve);
-      child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
-    });
-    const { port, token, adminToken, body } = JSON.parse(line) as { port: number; token: string; adminToken: string; body: unknown };
+    const { port, token, adminToken, body } = info;
     const base = `http://127.0.0.1:${port}`;
     const headers = { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' };
     const payload = JSON.stringify(body);
@@ -91,8 +82,22 @@ export async function run(): Promise<Measure[]> {
     const note = `${CONNECTIONS} connections × ${DURATION_S} s on loopback after a 3 s warm-up; server in its own process, autocannon in the bench process`;
     const failures = checks.non2xx + checks.errors;
     return [
-      { id: 'api.checks.p99-ms', value: checks.latency.p99, unit: 'ms', baseline: health.latency.p99, ratio: round(checks.latency.p99 / Math.max(health.latency.p99, 1), 2), note: `${note}; target < 25; baseline GET /api/health p99` },
-      { id: 'api.checks.rps', value: round(checks.requests.average, 0), unit: 'req/s', baseline: round(health.requests.average, 0), ratio: round(checks.requests.average / health.requests.average, 3), note: `${note}; baseline GET /api/health${failures ? `; ${failures} failed requests` : ''}` },
+      {
+        id: 'api.checks.p99-ms',
+        value: checks.latency.p99,
+        unit: 'ms',
+        baseline: health.latency.p99,
+        ratio: round(checks.latency.p99 / Math.max(health.latency.p99, 1), 2),
+        note: `${note}; target < 25; baseline GET /api/health p99`,
+      },
+      {
+        id: 'api.checks.rps',
+        value: round(checks.requests.average, 0),
+        unit: 'req/s',
+        baseline: round(health.requests.average, 0),
+        ratio: round(checks.requests.average / health.requests.average, 3),
+        note: `${note}; baseline GET /api/health${failures ? `; ${failures} failed requests` : ''}`,
+      },
       {
         id: 'api.checks.during-commits.p99-ms',
         value: during.latency.p99,
@@ -101,7 +106,11 @@ export async function run(): Promise<Measure[]> {
         ratio: round(during.latency.p99 / Math.max(checks.latency.p99, 1), 2),
         note: `${note}; while ${commits} price commits of ${COMMIT_ROWS} rows ran back to back${failed ? ` (${failed} failed)` : ''}; ${round(during.requests.average, 0)} req/s; baseline = idle api.checks.p99-ms of this run; target ratio ≤ 1.5`,
       },
-      ...(rssMb === undefined ? [] : [{ id: 'api.checks.rss-mb-after', value: round(rssMb, 1), unit: 'MB', note: 'server process RSS after both runs; target < 300' }]),
+      ...(rssMb === undefined
+        ? []
+        : [
+            { id: 'api.checks.rss-mb-after', value: round(rssMb, 1), unit: 'MB', note: 'server process RSS after both runs; target < 300' },
+          ]),
     ];
   } finally {
     child.kill('SIGTERM');

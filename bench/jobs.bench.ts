@@ -1,10 +1,8 @@
-import { spawn } from 'node:child_process';
-import path from 'node:path';
-import { createInterface } from 'node:readline';
 // autocannon ships no types here; the options and result fields used are documented in its README.
 // eslint-disable-next-line @typescript-eslint/ban-ts-comment
 // @ts-ignore
 import autocannon from 'autocannon';
+import { startBenchServer } from './bench-server';
 import { percentile, round, type Measure } from './measure';
 
 const CONNECTIONS = 20;
@@ -27,26 +25,17 @@ const cannon = (opts: Record<string, unknown>) =>
  * jobs.report-pdf.ms: median time of GET /api/systems/:id/report.pdf for a full record, one at a time.
  */
 export async function run(): Promise<Measure[]> {
-  const root = path.resolve(__dirname, '..');
-  const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'jobs-server.ts')], {
-    cwd: root,
-    env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json') },
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
+  const { child, info } = await startBenchServer<{
+    saveCpuMs: number;
+    pdfCpuMs: number;
+    port: number;
+    token: string;
+    jobId: number;
+    recordId: number;
+    body: Record<string, unknown>;
+  }>('jobs-server.ts');
   try {
-    const line = await new Promise<string>((resolve, reject) => {
-      createInterface({ input: child.stdout! }).once('line', resolve);
-      child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
-    });
-    const { port, token, jobId, recordId, body, saveCpuMs, pdfCpuMs } = JSON.parse(line) as {
-      saveCpuMs: number;
-      pdfCpuMs: number;
-      port: number;
-      token: string;
-      jobId: number;
-      recordId: number;
-      body: Record<string, unknown>;
-    };
+    const { port, token, jobId, recordId, body, saveCpuMs, pdfCpuMs } = info;
     const base = `http://127.0.0.1:${port}`;
     const headers = { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' };
     const payload = JSON.stringify(body);

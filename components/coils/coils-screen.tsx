@@ -13,7 +13,7 @@ import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { SafetyNote } from '@/components/ui/safety-note';
 import { Screen } from '@/components/ui/screen';
-import { CoilsSection } from './coils-section';
+import { SectionCard } from '@/components/ui/section-card';
 import { CoilDetail } from './coil-detail';
 import { CASED_OPTIONS, CONFIGURATION_OPTIONS, coilsSearchOf, EMPTY_FILTERS, MATERIAL_OPTIONS, TOGGLE_OPTIONS, type CoilFilterState } from './coil-filters';
 import { CoilRow, CoilTableHeader } from './coil-row';
@@ -58,14 +58,14 @@ export function CoilsScreen() {
 
   return (
     <Screen title="Replacement coils" subtitle="Every coil in the catalog that passes the same checks as the Check screen, with its best current price.">
-      <CoilsSection title="Parts that stay and the new outdoor unit">
+      <SectionCard title="Parts that stay and the new outdoor unit">
         <PartChoice title="New outdoor unit" slot="outdoor" picked={outdoor} onPick={setOutdoor} />
         <PartChoice title="Air handler or furnace that stays (optional)" slot="airHandler" picked={airHandler} onPick={setAirHandler} />
         <FormField label="Site state (two letters, optional)" value={state} onChangeText={setState} autoCapitalize="characters" maxLength={2} testID="coils-state" hint="Used to check the regional efficiency minimum." />
-      </CoilsSection>
+      </SectionCard>
 
       {search ? (
-        <CoilsSection title="Coils">
+        <SectionCard title="Coils">
           <FormField label="Search coils (model, brand, description)" value={q} onChangeText={setQ} autoCapitalize="none" autoCorrect={false} testID="coils-search" />
           <ChoiceChips label="Configuration" options={CONFIGURATION_OPTIONS} value={filters.configuration} onChange={setFilter('configuration')} testID="coils-configuration" />
           <ChoiceChips label="Material" options={MATERIAL_OPTIONS} value={filters.material} onChange={setFilter('material')} testID="coils-material" />
@@ -87,7 +87,7 @@ export function CoilsScreen() {
               </View>
             ))}
           </View>
-        </CoilsSection>
+        </SectionCard>
       ) : (
         <Text variant="bodyMedium">Pick the new outdoor unit to see the coils that work with it.</Text>
       )}
