@@ -3,7 +3,7 @@ import { Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
 import type { RuleSettings } from '@/shared/rules/types';
 import { FormField } from '@/components/ui/form-field';
-import { COMMISSIONING_SETTING_FIELDS } from './rules-draft';
+import { COMMISSIONING_SETTING_FIELDS, defaultHint } from './rules-draft';
 
 interface Props {
   values: Record<string, string>;
@@ -33,7 +33,7 @@ export function CommissioningSettings({ values, defaults, errors, onChange }: Pr
             inputMode="decimal"
             onChangeText={(v) => onChange(f.key, v)}
             error={errors[`settings.${f.key}`]}
-            hint={defaults ? `Default ${defaults[f.key]}` : undefined}
+            hint={defaults ? defaultHint(defaults[f.key]) : undefined}
             testID={`setting-${f.key}`}
           />
         ))}

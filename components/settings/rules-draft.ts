@@ -14,7 +14,13 @@ export const SETTING_FIELDS: { key: keyof Omit<RuleSettings, 'rebateTier'>; labe
   { key: 'defaultTargetSubcoolingF', label: 'Default target subcooling (°F)' },
   { key: 'defaultMaxLineLengthFt', label: 'Default max line length (ft)' },
   { key: 'defaultMaxLiftFt', label: 'Default max lift (ft)' },
+  { key: 'defaultStandardLineLengthFt', label: 'Line length the factory charge covers, when the unit does not say (ft)' },
 ];
+
+/** The hint under a setting: its default, or that the rule waits for the unit's own figure. */
+export function defaultHint(value: number | undefined): string {
+  return value === undefined ? 'No default: taken from the unit when it says' : `Default ${value}`;
+}
 
 /** Start-up readings settings, shown in their own section of Admin → Rules. */
 export const COMMISSIONING_SETTING_FIELDS: typeof SETTING_FIELDS = [

@@ -7,7 +7,7 @@ import { useRuleSettings, useSaveRuleSettings } from '@/hooks/use-rule-settings'
 import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
-import { bodyOf, draftOf, SETTING_FIELDS, type RulesDraft } from './rules-draft';
+import { bodyOf, defaultHint, draftOf, SETTING_FIELDS, type RulesDraft } from './rules-draft';
 import { TransitionRuleCard } from './transition-rule-card';
 import { CommissioningSettings } from './commissioning-settings';
 
@@ -60,7 +60,7 @@ export function RulesPanel() {
                 keyboardType="decimal-pad"
                 onChangeText={(v) => setDraft({ ...draft, settings: { ...draft.settings, [f.key]: v } })}
                 error={errors[`settings.${f.key}`]}
-                hint={query.data ? `Default ${query.data.defaults[f.key]}` : undefined}
+                hint={query.data ? defaultHint(query.data.defaults[f.key]) : undefined}
                 testID={`setting-${f.key}`}
               />
             ))}
