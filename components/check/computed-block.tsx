@@ -1,7 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import { Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
-import { citationWords, valueWords } from './value-label';
+import { citationWords } from './rule-words';
+import { valueWords } from './value-words';
 
 interface BreakerRange {
   mcaAmps: number;

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { Text } from 'react-native-paper';
 import type { Coverage } from '@/shared/rules/types';
 import { spacing } from '@/constants/theme';
-import { familyWords } from './value-label';
+import { familyWords } from './rule-words';
 
 /** What could not be checked for want of facts, so a short form never reads as a clean pass. */
 export function CoverageBlock({ coverage }: { coverage: Coverage }) {

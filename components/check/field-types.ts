@@ -1,4 +1,4 @@
-import { codeWords } from './value-label';
+import { codeWords } from './value-words';
 
 /** How the check form draws one field: descriptors, not hand-written inputs per field. */
 export type FieldType = 'number' | 'text' | 'date' | 'choice' | 'multi' | 'bool';

@@ -5,7 +5,9 @@ import type { Finding } from '@/shared/rules/types';
 import { MIN_TARGET_PX, spacing } from '@/constants/theme';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
 import { DecorativeIcon } from '@/components/ui/decorative-icon';
-import { citationWords, isInternalKey, valueLabel, valueWords } from './value-label';
+import { citationWords } from './rule-words';
+import { valueLabel } from './value-label';
+import { isInternalKey, valueWords } from './value-words';
 import { BASIS_WORDS, findingTitle, SEVERITY_GROUPS } from './verdict-words';
 
 /** One finding: what is wrong and the fix under it; a tap opens the numbers and the basis. */

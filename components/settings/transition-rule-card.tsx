@@ -3,7 +3,7 @@ import { Card, Text } from 'react-native-paper';
 import type { TransitionRule } from '@/shared/rules/types';
 import { spacing } from '@/constants/theme';
 import { FormField } from '@/components/ui/form-field';
-import { citationWords } from '@/components/check/value-label';
+import { citationWords } from '@/components/check/rule-words';
 
 interface Props {
   rule: TransitionRule;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { citationWords, familyWords, figuresWords, isInternalKey, valueWords } from '../../components/check/value-label';
+import { citationWords, familyWords } from '../../components/check/rule-words';
+import { figuresWords, isInternalKey, valueWords } from '../../components/check/value-words';
 
 // Codes come from the shared schemas (shared/schemas/check.ts, equipment.ts) and the engine's values;
 // the words are ours (plain trade words, no source needed beyond the schema's own meaning).
