@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import { DeleteObjectCommand, GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
+import { DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, NoSuchKey, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
 import type { S3StorageConfig } from './storage-config';
 import { STORAGE_KEY_PATTERN, type FileStorage } from './storage';
 
@@ -50,6 +50,20 @@ export class S3Storage implements FileStorage {
   /** S3's DELETE answers success for a missing key, so deleting twice is harmless. */
   async delete(key: string): Promise<void> {
     await this.client.send(new DeleteObjectCommand({ Bucket: this.bucket, Key: this.objectKey(key) }));
+  }
+
+  /**
+   * Fails with a message an operator can act on when the bucket cannot be reached (wrong name,
+   * endpoint, region or keys), so a bad setting stops the server at start, not at the first photo.
+   */
+  async verify(): Promise<void> {
+    try {
+      await this.client.send(new HeadBucketCommand({ Bucket: this.bucket }));
+    } catch (err) {
+      const status = err instanceof S3ServiceException ? ` (HTTP ${err.$metadata.httpStatusCode ?? '?'})` : '';
+      const reason = err instanceof Error ? `${err.name}${status}: ${err.message}` : String(err);
+      throw new Error(`Object store: bucket "${this.bucket}" is not reachable with the TANDEM_S3_* settings — ${reason}`);
+    }
   }
 
   /** Closes the client's sockets (tests and shutdown). */

@@ -22,3 +22,9 @@ export function storageFor(ctx: AppContext): FileStorage {
   }
   return store;
 }
+
+/** At server start: an S3 store must answer for its bucket (local disk needs no check). */
+export async function verifyStorage(ctx: AppContext): Promise<void> {
+  const store = storageFor(ctx);
+  if (store instanceof S3Storage) await store.verify();
+}
