@@ -9,7 +9,10 @@ export interface SqliteBackup {
 
 /** `tandem-2026-12-02T13-05-09Z.sqlite`: sorts by time and has no characters a file system refuses. */
 export function backupFileName(at: Date): string {
-  return `tandem-${at.toISOString().replace(/\.\d{3}Z$/, 'Z').replace(/:/g, '-')}.sqlite`;
+  return `tandem-${at
+    .toISOString()
+    .replace(/\.\d{3}Z$/, 'Z')
+    .replace(/:/g, '-')}.sqlite`;
 }
 
 /**

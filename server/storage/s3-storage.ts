@@ -1,5 +1,13 @@
 import { randomBytes } from 'node:crypto';
-import { DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, NoSuchKey, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadBucketCommand,
+  NoSuchKey,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
+} from '@aws-sdk/client-s3';
 import type { S3StorageConfig } from './storage-config';
 import { STORAGE_KEY_PATTERN, type FileStorage } from './storage';
 

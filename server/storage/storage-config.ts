@@ -10,7 +10,7 @@ export const StorageEnvShape = {
     .trim()
     .regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'must be a valid bucket name (3–63 lowercase letters, digits, dots, hyphens)')
     .optional(),
-  /** Only for a store other than AWS itself (MinIO, Ceph, a cloud's S3-compatible API). */
+  /** Only for a store other than AWS itself (a self-hosted store, another cloud's S3-compatible API). */
   TANDEM_S3_ENDPOINT: z.string().trim().url().optional(),
   TANDEM_S3_REGION: z.string().trim().min(1).max(64).optional(),
   TANDEM_S3_ACCESS_KEY_ID: z.string().trim().min(1).max(256).optional(),

@@ -83,7 +83,12 @@ describe('SQLite online backup', () => {
     const dest = path.join(backups, 'from-task');
     const { stdout } = await run(process.execPath, ['scripts/run-server-task.mjs', 'backup', dest], {
       cwd: root,
-      env: { ...process.env, DATABASE_PATH: t.ctx.config.databasePath, TANDEM_DATA_DIR: t.ctx.config.dataDir, TANDEM_JWT_SECRET: 'x'.repeat(32) },
+      env: {
+        ...process.env,
+        DATABASE_PATH: t.ctx.config.databasePath,
+        TANDEM_DATA_DIR: t.ctx.config.dataDir,
+        TANDEM_JWT_SECRET: 'x'.repeat(32),
+      },
       timeout: 60_000,
     });
     const files = readdirSync(dest);
