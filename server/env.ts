@@ -4,6 +4,7 @@ import { isIP } from 'node:net';
 import path from 'node:path';
 import { z } from 'zod';
 import { SmtpEnvShape, smtpConfigOf, type SmtpConfig } from './mail/smtp-config';
+import { StorageEnvShape, storageConfigOf, type StorageConfig } from './storage/storage-config';
 
 /** The one place that reads process.env: validated configuration for the server. */
 
@@ -24,6 +25,7 @@ const EnvSchema = z.object({
   /** The shop's name on reports and e-mail. */
   TANDEM_SHOP_NAME: z.string().trim().min(1).max(120).optional(),
   ...SmtpEnvShape,
+  ...StorageEnvShape,
 });
 
 export interface AppConfig {
@@ -43,6 +45,8 @@ export interface AppConfig {
   smtp?: SmtpConfig;
   /** Loopback port of the local mail service demo mode starts. */
   localMailPort?: number;
+  /** Where photos and sent reports are kept; absent means local disk under the data dir. */
+  storage?: StorageConfig;
 }
 
 export type TrustProxy = false | number | string[];
@@ -113,5 +117,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     shopName: e.TANDEM_SHOP_NAME,
     smtp: smtpConfigOf(e),
     localMailPort: e.TANDEM_LOCAL_MAIL_PORT,
+    storage: storageConfigOf(e),
   };
 }

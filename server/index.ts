@@ -6,6 +6,7 @@ import { openDatabase } from './db/data-source';
 import { loadConfig } from './env';
 import { createLogger } from './lib/logger';
 import { startLocalMailService } from './mail/local-mail-service';
+import { verifyStorage } from './storage/storage-for';
 
 /** Starts Tandem: open and migrate the database, seed the demo if asked, listen, shut down cleanly. */
 async function main() {
@@ -13,6 +14,7 @@ async function main() {
   const logger = createLogger(config);
   const dataSource = await openDatabase(config.databasePath);
   const ctx: AppContext = { dataSource, config, logger };
+  await verifyStorage(ctx);
   if (config.demo && (await seedDemoIfEmpty(ctx))) logger.info('demo data loaded');
   // Demo mode with no SMTP host: reports go to a local mail service that keeps them under the data dir.
   const localMail = config.demo && !config.smtp ? await startLocalMailService({ dataDir: config.dataDir, port: config.localMailPort ?? 2525, onError: (err) => logger.warn({ err }, 'local mail service') }) : undefined;
