@@ -59,12 +59,15 @@ export function withEquipmentLines(lines: OptionLineInput[], pairing: Pairing): 
   return out.sort((a, b) => Number(isEquipment(b.kind)) - Number(isEquipment(a.kind)) || EQUIPMENT_LINE_KINDS.indexOf(a.kind as EquipmentKind) - EQUIPMENT_LINE_KINDS.indexOf(b.kind as EquipmentKind));
 }
 
-/** Prices the lines for saving: a given price stays (the snapshot); a line without one takes today's best price of its model. */
-export async function priceLines(ctx: AppContext, lines: OptionLineInput[]): Promise<StoredLine[]> {
+/**
+ * Prices the lines for saving: a given price stays (the snapshot); a line without one takes today's best price
+ * of its model. `pathOf` names a line in an error as the estimator sent it.
+ */
+export async function priceLines(ctx: AppContext, lines: OptionLineInput[], pathOf: (line: OptionLineInput) => string): Promise<StoredLine[]> {
   const models = lines.filter((l) => l.unitPriceCents === undefined && l.model).map((l) => l.model!);
   const prices = models.length ? await currentPricesBatch(ctx, models) : new Map();
   const problems: { path: string; message: string }[] = [];
-  const stored = lines.map((line, i): StoredLine => {
+  const stored = lines.map((line): StoredLine => {
     const base = {
       kind: line.kind,
       description: line.description?.trim() || [KIND_WORDS[line.kind] ?? EQUIPMENT_WORDS[line.kind as EquipmentKind], line.model].filter(Boolean).join(' '),
@@ -85,7 +88,7 @@ export async function priceLines(ctx: AppContext, lines: OptionLineInput[]): Pro
     const best = line.model ? pickBestPrice(prices.get(normalizeModel(line.model))) : undefined;
     if (!best) {
       problems.push({
-        path: `lines.${i}.unitPriceCents`,
+        path: `${pathOf(line)}.unitPriceCents`,
         message: line.model ? `no current price for ${line.model}: type a price` : 'type a price (or name a model on a price list)',
       });
       return { ...base, unitPriceCents: 0, priceSource: 'typed' };

@@ -50,7 +50,8 @@ async function pricedContent(ctx: AppContext, state: string, input: OptionInput)
   const { lines = [], ...content } = input;
   const { pairing } = await checkOption(ctx, content, state);
   if (pairing.outdoor.kept) throw new AppError('validation-failed', 'The request did not pass validation.', 422, [{ path: 'outdoor', message: 'the outdoor unit of an option is new' }]);
-  return { content, lines: await priceLines(ctx, withEquipmentLines(lines, pairing)) };
+  const pathOf = (line: OptionLineInput) => (lines.includes(line) ? `lines.${lines.indexOf(line)}` : `equipment.${line.kind}`);
+  return { content, lines: await priceLines(ctx, withEquipmentLines(lines, pairing), pathOf) };
 }
 
 /** POST /api/jobs/:id/options: at most three per job (409 beyond). */
