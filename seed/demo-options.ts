@@ -38,6 +38,16 @@ export async function seedDemoOptions(ctx: AppContext): Promise<void> {
       { kind: 'fee' as const, description: 'Permit (demo)', quantity: 1, unitPriceCents: 9500 },
     ],
   };
-  await createOption(ctx, job.id, { ...common, name: 'Heat pump with cased coil', indoorCoil: { id: await idOf(IndoorCoil, 'BH-T41BBM') } }, estimator.id);
-  await createOption(ctx, job.id, { ...common, name: 'Heat pump, coil rated with this furnace', indoorCoil: { id: await idOf(IndoorCoil, 'BH-P41BH') } }, estimator.id);
+  await createOption(
+    ctx,
+    job.id,
+    { ...common, name: 'Heat pump with cased coil', indoorCoil: { id: await idOf(IndoorCoil, 'BH-T41BBM') } },
+    estimator.id,
+  );
+  await createOption(
+    ctx,
+    job.id,
+    { ...common, name: 'Heat pump, coil rated with this furnace', indoorCoil: { id: await idOf(IndoorCoil, 'BH-P41BH') } },
+    estimator.id,
+  );
 }
