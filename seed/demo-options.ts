@@ -1,6 +1,7 @@
 import type { AppContext } from '../server/context';
 import { AirHandler } from '../server/catalog/air-handler.entity';
 import { IndoorCoil } from '../server/catalog/indoor-coil.entity';
+import { MeteringDevice } from '../server/catalog/metering-device.entity';
 import { OutdoorUnit } from '../server/catalog/outdoor-unit.entity';
 import { createJob } from '../server/jobs/jobs.service';
 import { createOption } from '../server/options/options.service';
@@ -12,7 +13,7 @@ import { User } from '../server/users/user.entity';
  */
 export async function seedDemoOptions(ctx: AppContext): Promise<void> {
   const estimator = await ctx.dataSource.getRepository(User).findOneByOrFail({ role: 'estimator' });
-  const idOf = async (entity: typeof OutdoorUnit | typeof IndoorCoil | typeof AirHandler, model: string) =>
+  const idOf = async (entity: typeof OutdoorUnit | typeof IndoorCoil | typeof AirHandler | typeof MeteringDevice, model: string) =>
     (await ctx.dataSource.getRepository(entity).findOneByOrFail({ model })).id;
   const job = await createJob(
     ctx,
@@ -47,7 +48,13 @@ export async function seedDemoOptions(ctx: AppContext): Promise<void> {
   await createOption(
     ctx,
     job.id,
-    { ...common, name: 'Heat pump, coil rated with this furnace', indoorCoil: { id: await idOf(IndoorCoil, 'BH-P41BH') } },
+    {
+      ...common,
+      name: 'Heat pump, coil rated with this furnace, TXV kit',
+      indoorCoil: { id: await idOf(IndoorCoil, 'BH-P41BH') },
+      // The coil ships with a piston; the heat pump needs an expansion valve, so a field TXV kit is fitted.
+      metering: { id: await idOf(MeteringDevice, 'BH-TXK-41-36') },
+    },
     estimator.id,
   );
 }

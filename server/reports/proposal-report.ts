@@ -68,25 +68,18 @@ export async function renderProposal(ctx: AppContext, jobId: number, options: { 
   for (const o of items) {
     layout.heading(`${o.name}: ${formatDollars(o.price.totalCents)}`, 90);
     if (o.notes) layout.paragraph(o.notes);
+    // The customer sees what is included and the selling prices, never the shop's cost of each line.
     layout.table(
       [
-        { header: 'Item', share: 0.52 },
-        { header: 'Qty', share: 0.12 },
-        { header: 'Unit', share: 0.18 },
-        { header: 'Amount', share: 0.18 },
+        { header: 'Included', share: 0.8 },
+        { header: 'Qty', share: 0.2 },
       ],
-      [
-        ...o.lines.map((l) => [l.description, String(l.quantity), formatDollars(l.unitPriceCents), formatDollars(l.extendedCents)]),
-        ['Labor', `${o.laborHours} h`, formatDollars(o.laborRateCents), formatDollars(o.price.laborCostCents)],
-      ],
+      [...o.lines.map((l) => [l.description, String(l.quantity)]), ['Installation labor', `${o.laborHours} h`]],
     );
+    const p = o.price;
     layout.paragraph(
-      `Subtotal ${formatDollars(o.price.subtotalCents)} · sales tax ${o.price.taxRatePct} % on equipment and materials ${formatDollars(o.price.taxCents)} · total ${formatDollars(o.price.totalCents)}.`,
+      `Equipment and materials ${formatDollars(p.materialSellCents)} · labor ${formatDollars(p.laborSellCents)} · sales tax ${p.taxRatePct} % on equipment and materials ${formatDollars(p.taxCents)} · total ${formatDollars(p.totalCents)}.`,
       { bold: true },
-    );
-    layout.paragraph(
-      `Line amounts are our cost basis; the subtotal includes our ${o.price.pricing === 'markup' ? 'markup' : 'margin'} on equipment, materials and labor.`,
-      { muted: true },
     );
     layout.paragraph(
       `Rated figures from ${o.efficiency.sourceText}. ${o.regional.minimum ? `Regional minimum (${o.regional.regionName}): SEER2 ${o.regional.minimum.seer2}${o.regional.minimum.eer2 ? `, EER2 ${o.regional.minimum.eer2}` : ''}${o.regional.minimum.hspf2 ? `, HSPF2 ${o.regional.minimum.hspf2}` : ''} — ${o.regional.minimum.basis}.` : ''}`,

@@ -52,8 +52,13 @@ export const OptionLineInputSchema = z
     distributor: z.string().trim().max(120).optional(),
     effectiveFrom: isoDate.optional(),
     taxable: z.boolean().optional(),
+    // What the view adds to a line: accepted so a line can be sent back as it was shown, and ignored.
+    extendedCents: z.unknown().optional(),
+    currentPriceDiffers: z.unknown().optional(),
+    currentPrice: z.unknown().optional(),
   })
-  .strict();
+  .strict()
+  .transform(({ extendedCents: _e, currentPriceDiffers: _d, currentPrice: _c, ...line }) => line);
 export type OptionLineInput = z.infer<typeof OptionLineInputSchema>;
 
 /** A saved line (the snapshot) with what the view adds. */

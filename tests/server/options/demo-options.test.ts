@@ -19,11 +19,12 @@ describe('demo options', () => {
   it('when the demo is seeded, then the failed-outdoor-unit job has two priced options with verdicts and rated figures', async () => {
     const job = await t.ctx.dataSource.getRepository(JobRow).findOneByOrFail({ customerName: 'Fenwick Ostrander' });
     const { items } = await listOptions(t.ctx, job.id, { existingAgeYears: 14 });
-    expect(items.map((o) => o.name)).toEqual(['Heat pump with cased coil', 'Heat pump, coil rated with this furnace']);
+    expect(items.map((o) => o.name)).toEqual(['Heat pump with cased coil', 'Heat pump, coil rated with this furnace, TXV kit']);
     for (const o of items) {
       expect(o.lines.filter((l) => l.priceSource === 'price-list').length).toBeGreaterThanOrEqual(2);
       expect(o.price.totalCents).toBeGreaterThan(0);
       expect(o.efficiency.seer2).toBeDefined();
+      expect(o.check.verdict).not.toBe('incompatible');
     }
   });
 });

@@ -108,9 +108,9 @@ describe('options: contract, price and figures', () => {
     expect(o.efficiency).toMatchObject({ source: 'rated-combination', seer2: 15.2, eer2: 11.7, hspf2: 7.8, coolingBtuh: 35000 });
     // GA is in the Southeast; split heat pumps: 14.3 SEER2 / 7.5 HSPF2 (10 CFR 430.32(c)).
     expect(o.regional).toMatchObject({ state: 'GA', meets: true, minimum: { seer2: 14.3, hspf2: 7.5 } });
-    // Default (invented demo) tiers: tier 1 needs 15.2 SEER2 / 11.7 EER2 → met; tier 2 needs 16 SEER2 → not met.
+    // Default (invented demo) tiers: tier 1 needs 15.2 SEER2 / 11 EER2 → met; tier 2 needs 17 SEER2 / 8.5 HSPF2 → not met.
     expect(o.rebateTiers.map((r) => r.met)).toEqual([true, false]);
-    expect(o.rebateTiers[1].missing[0]).toContain('SEER2 16 needed, has 15.2');
+    expect(o.rebateTiers[1].missing[0]).toContain('SEER2 17 needed, has 15.2');
   });
 
   it('when the existing SEER2/HSPF2 are given, then energy and payback follow kWh = Btu/h × h ÷ (rating × 1000)', async () => {
@@ -187,7 +187,13 @@ describe('options: revisions, snapshot, choice and record', () => {
     });
     expect(after.price.totalCents).toBe(o.price.totalCents);
     expect(after.lines.find((l) => l.kind === 'indoor-coil')!.currentPriceDiffers).toBe(false);
-    const repriced = (await request(t.app).patch(`/api/options/${o.id}`).set(est()).send({ revision: 1, reprice: true }).expect(200))
+    // Lines sent back as the view showed them keep their snapshot.
+    const resent = await request(t.app).patch(`/api/options/${o.id}`).set(est()).send({ revision: 1, lines: after.lines }).expect(200);
+    expect(resent.body.lines.find((l: { kind: string }) => l.kind === 'outdoor-unit')).toMatchObject({
+      unitPriceCents: 310000,
+      currentPriceDiffers: true,
+    });
+    const repriced = (await request(t.app).patch(`/api/options/${o.id}`).set(est()).send({ revision: 2, reprice: true }).expect(200))
       .body as OptionView;
     expect(repriced.lines.find((l) => l.kind === 'outdoor-unit')).toMatchObject({ unitPriceCents: 290000, currentPriceDiffers: false });
     // Typed lines are never re-priced.
