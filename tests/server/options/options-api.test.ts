@@ -71,6 +71,12 @@ describe('options: roles and errors', () => {
       .expect(422);
     expect(res.body.error.code).toBe('validation-failed');
   });
+  it('when the energy parameters are not numbers in range or the id is not canonical, then 400', async () => {
+    await request(t.app).get(`/api/jobs/${f.jobId}/options`).query({ existingSeer2: 'abc' }).set(est()).expect(400);
+    await request(t.app).get(`/api/jobs/${f.jobId}/options`).query({ centsPerKwh: -1 }).set(est()).expect(400);
+    await request(t.app).get(`/api/jobs/${f.jobId}/options`).query({ existingHeatPump: 'maybe' }).set(est()).expect(400);
+    await request(t.app).get('/api/jobs/0x1/options').set(est()).expect(400);
+  });
   it('when a line has no price and its model is on no price list, then 422 naming the line', async () => {
     const jobId = await newJob();
     const res = await request(t.app)
