@@ -279,3 +279,26 @@ describe('repair or replace and shop settings', () => {
       .expect(422);
   });
 });
+
+describe('options: shop terms are copied in when saved', () => {
+  it('when an option takes the shop defaults and the shop later raises its markup, then the saved price does not move', async () => {
+    const jobId = await newJob();
+    const o = await create(jobId, { markupPct: undefined, laborRateCents: undefined, taxRatePct: undefined });
+    // Shop defaults (shared/estimates/shop-defaults.ts): 35 % markup, $95/h labor, 0 % tax.
+    expect(o).toMatchObject({ markupPct: 35, laborRateCents: 9500, taxRatePct: 0 });
+    const got = await request(t.app).get('/api/settings/shop').set(est()).expect(200);
+    await request(t.app)
+      .put('/api/settings/shop')
+      .set(authFor(t, 'admin'))
+      .send({ ...got.body.settings, markupPct: 50, laborRateCents: 12000 })
+      .expect(200);
+    try {
+      const after = (await request(t.app).get(`/api/options/${o.id}`).set(est()).expect(200)).body as OptionView;
+      expect(after.price.totalCents).toBe(o.price.totalCents);
+      const fresh = await create(jobId, { markupPct: undefined, laborRateCents: undefined });
+      expect(fresh).toMatchObject({ markupPct: 50, laborRateCents: 12000 });
+    } finally {
+      await request(t.app).put('/api/settings/shop').set(authFor(t, 'admin')).send(got.body.settings).expect(200);
+    }
+  });
+});
