@@ -1,4 +1,5 @@
 import { router } from 'expo-router';
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { ActivityIndicator, Button, Card, Icon, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
@@ -10,6 +11,7 @@ import { Screen } from '@/components/ui/screen';
 import { SectionCard } from '@/components/ui/section-card';
 import { PhotoThumb } from '@/components/systems/photo-thumb';
 import { RECORD_STATUS_WORDS, verdictCodeText } from '@/components/systems/record-words';
+import { JobEditCard } from './job-edit-card';
 import { fieldWord, JOB_STATUS_WORDS, whenText } from './job-words';
 
 /** A job: the site and contact, its system records, its photos, and close / reopen. */
@@ -18,6 +20,7 @@ export function JobDetailScreen({ id }: { id: number }) {
   const systems = useJobSystems(id);
   const photos = useJobAttachments(id);
   const update = useUpdateJob(id);
+  const [editing, setEditing] = useState(false);
   if (job.isPending) return <ActivityIndicator style={styles.loading} accessibilityLabel="Loading the job" />;
   if (job.isError) {
     return (
@@ -37,6 +40,9 @@ export function JobDetailScreen({ id }: { id: number }) {
           <Button mode="outlined" icon="arrow-left" onPress={() => router.push('/jobs')} contentStyle={styles.button}>
             All jobs
           </Button>
+          <Button mode="outlined" icon="pencil-outline" onPress={() => setEditing(true)} disabled={editing} contentStyle={styles.button} testID="job-edit-open">
+            Edit job
+          </Button>
           <Button
             mode="outlined"
             icon={closed ? 'folder-open-outline' : 'check-circle-outline'}
@@ -51,7 +57,8 @@ export function JobDetailScreen({ id }: { id: number }) {
       }
     >
       {update.isError ? <MessageBanner tone="error">{errorText(update.error)}</MessageBanner> : null}
-      <SectionCard title="Contact">
+      {editing ? <JobEditCard key={j.updatedAt} job={j} onDone={() => setEditing(false)} /> : null}
+      <SectionCard title="Contact" testID="job-contact">
         <Text variant="bodyMedium">{j.contactEmail ? `E-mail: ${j.contactEmail}` : 'No e-mail given.'}</Text>
         <Text variant="bodyMedium">{j.contactPhone ? `Phone: ${j.contactPhone}` : 'No phone given.'}</Text>
         {j.notes ? <Text variant="bodyMedium">{j.notes}</Text> : null}
