@@ -4,6 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { ActivityIndicator, Button, Card, Icon, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
+import { useRecordOutbox } from '@/hooks/record-outbox';
 import { useJob, useUpdateJob } from '@/hooks/use-jobs';
 import { useJobAttachments, useJobSystems } from '@/hooks/use-systems';
 import { MessageBanner } from '@/components/ui/message-banner';
@@ -21,6 +22,7 @@ export function JobDetailScreen({ id }: { id: number }) {
   const photos = useJobAttachments(id);
   const update = useUpdateJob(id);
   const [editing, setEditing] = useState(false);
+  const waiting = useRecordOutbox().items.filter((i) => i.kind === 'create' && i.jobId === id);
   if (job.isPending) return <ActivityIndicator style={styles.loading} accessibilityLabel="Loading the job" />;
   if (job.isError) {
     return (
@@ -67,7 +69,18 @@ export function JobDetailScreen({ id }: { id: number }) {
       <SectionCard title="System records" testID="job-records">
         {systems.isPending ? <ActivityIndicator /> : null}
         {systems.isError ? <MessageBanner tone="error">{errorText(systems.error)}</MessageBanner> : null}
-        {systems.data?.length === 0 ? <Text variant="bodyMedium">No records yet: run a check and tap “Save to job”.</Text> : null}
+        {waiting.map((item) => (
+          <View key={item.id} style={styles.row} testID="record-not-sent">
+            <Icon source="cloud-upload-outline" size={22} />
+            <View style={styles.rowText}>
+              <Text variant="titleMedium">{item.kind === 'create' ? `New record: ${item.title}` : ''}</Text>
+              <Text variant="bodyMedium">
+                {item.problem?.kind === 'refused' ? `Not sent: ${item.problem.message}` : 'Not yet sent: kept on this phone until the signal returns.'}
+              </Text>
+            </View>
+          </View>
+        ))}
+        {systems.data?.length === 0 && waiting.length === 0 ? <Text variant="bodyMedium">No records yet: run a check and tap “Save to job”.</Text> : null}
         {systems.data?.map((s) => (
           <Card key={s.id} mode="outlined" onPress={() => router.push(`/jobs/systems/${s.id}`)} testID={`record-${s.id}`}>
             <Card.Content style={styles.row}>
