@@ -45,7 +45,7 @@ export function JobEditCard({ job, onDone }: { job: JobDetail; onDone(): void })
   return (
     <SectionCard title="Edit job" testID="job-edit">
       <JobFields form={form} />
-      <ToggleGroup label="Status" value={status} onChange={setStatus} options={STATUS_OPTIONS} />
+      <ToggleGroup<JobStatus> label="Status" value={status} onChange={setStatus} options={STATUS_OPTIONS} />
       {nothing ? <Text variant="bodyMedium">Nothing was changed.</Text> : null}
       {update.isError && !(update.error instanceof ApiError && update.error.kind === 'validation') ? (
         <MessageBanner tone="error">{errorText(update.error)}</MessageBanner>
