@@ -22,6 +22,15 @@ const revisions = async (id: number) =>
     (r) => `${r.revision}:${r.status}`,
   );
 
+describe('the answer to a save', () => {
+  it('when a record is created, then the 201 answer is the record exactly as it then reads back', async () => {
+    const made = await request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send(recordBody(f)).expect(201);
+    const read = await request(t.app).get(`/api/systems/${made.body.id}`).set(auth()).expect(200);
+    const { currentCheck: _today, ...stored } = read.body;
+    expect(made.body).toEqual(stored);
+  });
+});
+
 describe('every save is a revision', () => {
   it('when serials and then checklist items are saved one by one on a draft, then each save is its own revision carrying the counter', async () => {
     const { id } = await create();
