@@ -2,6 +2,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { adminToken, importCsv } from './api-setup';
 import { account, launchBrowser, openPage, signIn } from './browser';
+import { SERVICE_WORKER_ACTIVE } from './page-timing';
 import { saveShot } from './shots';
 
 // Invented models unique to this file: an R-410A air conditioner and a coil rated for it with a TXV.
@@ -78,6 +79,9 @@ describe('a record edited with no signal, on a phone (390×844)', () => {
     const page = await openPage(browser, 'phone');
     await signIn(page, account('tech'));
     await openRecord(page, made.id);
+    // One visit with a signal: the service worker holds the app, and the record reaches the kept cache.
+    expect(await page.evaluate<boolean>(SERVICE_WORKER_ACTIVE)).toBe(true);
+    await expect.poll(() => page.evaluate<string>("localStorage.getItem('tandem-query-cache') ?? ''"), { timeout: 10_000 }).toContain('OFL-SN-0001');
 
     await page.context().setOffline(true);
     await page.getByTestId('serial-outdoor').fill('OFL-SN-0099');
