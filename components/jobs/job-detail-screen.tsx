@@ -42,9 +42,6 @@ export function JobDetailScreen({ id }: { id: number }) {
           <Button mode="outlined" icon="arrow-left" onPress={() => router.push('/jobs')} contentStyle={styles.button}>
             All jobs
           </Button>
-          <Button mode="outlined" icon="pencil-outline" onPress={() => setEditing(true)} disabled={editing} contentStyle={styles.button} testID="job-edit-open">
-            Edit job
-          </Button>
           <Button
             mode="outlined"
             icon={closed ? 'folder-open-outline' : 'check-circle-outline'}
@@ -59,13 +56,18 @@ export function JobDetailScreen({ id }: { id: number }) {
       }
     >
       {update.isError ? <MessageBanner tone="error">{errorText(update.error)}</MessageBanner> : null}
-      {editing ? <JobEditCard key={j.updatedAt} job={j} onDone={() => setEditing(false)} /> : null}
       <SectionCard title="Contact" testID="job-contact">
         <Text variant="bodyMedium">{j.contactEmail ? `E-mail: ${j.contactEmail}` : 'No e-mail given.'}</Text>
         <Text variant="bodyMedium">{j.contactPhone ? `Phone: ${j.contactPhone}` : 'No phone given.'}</Text>
         {j.notes ? <Text variant="bodyMedium">{j.notes}</Text> : null}
         <Text variant="bodySmall">{`Started ${whenText(j.createdAt)}${j.createdBy ? ` by ${j.createdBy.name}` : ''}`}</Text>
+        {editing ? null : (
+          <Button mode="outlined" icon="pencil-outline" onPress={() => setEditing(true)} style={styles.edit} contentStyle={styles.button} testID="job-edit-open">
+            Edit job details
+          </Button>
+        )}
       </SectionCard>
+      {editing ? <JobEditCard key={j.updatedAt} job={j} onDone={() => setEditing(false)} /> : null}
       <SectionCard title="System records" testID="job-records">
         {systems.isPending ? <ActivityIndicator /> : null}
         {systems.isError ? <MessageBanner tone="error">{errorText(systems.error)}</MessageBanner> : null}
@@ -113,6 +115,7 @@ export function JobDetailScreen({ id }: { id: number }) {
 const styles = StyleSheet.create({
   loading: { marginTop: spacing.xxl },
   button: { minHeight: TOUCH_TARGET },
+  edit: { alignSelf: 'flex-start' },
   row: { flexDirection: 'row', gap: spacing.md, alignItems: 'center', minHeight: TOUCH_TARGET },
   rowText: { flex: 1, gap: 2 },
   photos: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
