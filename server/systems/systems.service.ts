@@ -1,4 +1,5 @@
 import type { EntityManager } from 'typeorm';
+import type { QueryDeepPartialEntity } from 'typeorm/query-builder/QueryPartialEntity';
 import type { SystemCreate, SystemFinalize, SystemPatch } from '../../shared/schemas/systems';
 import { AttachmentRow } from '../attachments/attachment.entity';
 import type { AppContext } from '../context';
@@ -217,6 +218,7 @@ async function insertRevision(
     finalizedAt: null,
     openItemsReason: null,
   });
-  await repo.insert(row);
+  // The entity's JSON columns are plain objects; TypeORM's insert typing can not see that through Record<string, unknown>.
+  await repo.insert(row as QueryDeepPartialEntity<SystemRevisionRow>);
   return row;
 }

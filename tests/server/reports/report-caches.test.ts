@@ -44,6 +44,26 @@ describe('shared font shaping', () => {
   });
 });
 
+describe('shared font subsets', () => {
+  it('when two subsets hold the same glyphs in the same order, then the second gets the same bytes fontkit encodes afresh', () => {
+    type Sub = { includeGlyph(id: number): number; encode(): Uint8Array };
+    const plain = openSync(INTER) as unknown as { createSubset(): Sub; glyphForCodePoint(c: number): { id: number } };
+    const shared = withSharedLayout(openSync(INTER)) as unknown as typeof plain;
+    const fill = (font: typeof plain) => {
+      const subset = font.createSubset();
+      for (const ch of 'Superheat °F') subset.includeGlyph(font.glyphForCodePoint(ch.codePointAt(0)!).id);
+      return subset;
+    };
+    // Expected bytes: fontkit's own subset encoding of the same glyphs (a general-purpose library).
+    const expected = Buffer.from(fill(plain).encode());
+    expect(Buffer.from(fill(shared).encode()).equals(expected)).toBe(true);
+    expect(Buffer.from(fill(shared).encode()).equals(expected)).toBe(true);
+    const other = shared.createSubset();
+    other.includeGlyph(shared.glyphForCodePoint(65).id);
+    expect(Buffer.from(other.encode()).equals(expected)).toBe(false);
+  });
+});
+
 describe('reused photos', () => {
   it('when two documents draw the same photo, then each embeds it under its own label and both parse', async () => {
     const photo = tinyPng(64, 48);
