@@ -24,7 +24,10 @@ import {
 
 export type RecordOutboxItem = OutboxItem<SystemRecord>;
 
-const STORAGE_KEY = 'tandem-record-outbox';
+// One queue per signed-in user: changes made by one person are never sent with another's token.
+const STORAGE_PREFIX = 'tandem-record-outbox';
+let ownerId: number | undefined;
+const storageKey = () => `${STORAGE_PREFIX}:${ownerId ?? 'none'}`;
 
 function storage(): Storage | undefined {
   try {
@@ -36,7 +39,7 @@ function storage(): Storage | undefined {
 
 function readKept(): RecordOutboxItem[] {
   try {
-    const raw = storage()?.getItem(STORAGE_KEY);
+    const raw = ownerId === undefined ? null : storage()?.getItem(storageKey());
     const parsed: unknown = raw ? JSON.parse(raw) : [];
     return Array.isArray(parsed) ? (parsed as RecordOutboxItem[]) : [];
   } catch {
@@ -55,7 +58,7 @@ const current = () => (items ??= readKept());
 function store(next: RecordOutboxItem[]) {
   items = next;
   try {
-    storage()?.setItem(STORAGE_KEY, JSON.stringify(next));
+    if (ownerId !== undefined) storage()?.setItem(storageKey(), JSON.stringify(next));
   } catch {
     // A full or refused storage keeps the queue in memory for this visit.
   }
@@ -129,7 +132,13 @@ async function send(item: RecordOutboxItem): Promise<SendOutcome<SystemRecord>> 
 export function flushOutbox(): Promise<void> {
   if (flushing) return flushing;
   if (!onlineManager.isOnline() || current().length === 0) return Promise.resolve();
-  flushing = replay(current, store, send, (id) => {
+  // A flush belongs to the user who started it: if another signs in meanwhile, it stops touching the queue.
+  const owner = ownerId;
+  const mine = () => (ownerId === owner ? current() : []);
+  const keep = (next: RecordOutboxItem[]) => {
+    if (ownerId === owner) store(next);
+  };
+  flushing = replay(mine, keep, send, (id) => {
     sendingId = id;
     listeners.forEach((l) => l());
   })
@@ -169,12 +178,18 @@ export function useRecordOutbox(): { items: RecordOutboxItem[]; sendingId: strin
  * Mounted once inside the signed-in screens (a token is set): sends what waits now, and again each
  * time the signal returns.
  */
-export function useOutboxSync(queryClient: QueryClient) {
+export function useOutboxSync(queryClient: QueryClient, userId: number) {
   useEffect(() => {
+    if (ownerId !== userId) {
+      // Another person signed in on this phone: their own queue, not the last person's.
+      ownerId = userId;
+      items = null;
+      listeners.forEach((l) => l());
+    }
     client = queryClient;
     void flushOutbox();
     return onlineManager.subscribe((online) => {
       if (online) void flushOutbox();
     });
-  }, [queryClient]);
+  }, [queryClient, userId]);
 }

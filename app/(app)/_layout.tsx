@@ -4,7 +4,7 @@ import { BottomTabs, SideRail } from '@/components/navigation/app-navigation';
 import { useQueryClient } from '@tanstack/react-query';
 import { useOutboxSync } from '@/hooks/record-outbox';
 import { useIsWide } from '@/hooks/use-layout';
-import { useSession } from '@/hooks/use-session';
+import { useCurrentUser, useSession } from '@/hooks/use-session';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
 
 /** Signed-in group: guard, then tabs at the bottom on a phone or a rail at the side on a wide screen. */
@@ -28,7 +28,7 @@ export default function SignedInLayout() {
 
 /** Sends record changes kept with no signal, now and whenever it returns (only here: a session is set). */
 function OutboxSync() {
-  useOutboxSync(useQueryClient());
+  useOutboxSync(useQueryClient(), useCurrentUser().id);
   return null;
 }
 
