@@ -30,7 +30,7 @@ function PartChoice({ title, slot, picked, onPick }: { title: string; slot: 'out
           <Text variant="bodyLarge" testID={`${slot}-picked`}>
             {picked.label}
           </Text>
-          <Button mode="outlined" onPress={() => onPick(undefined)} style={styles.button} accessibilityLabel={`Choose another ${title.toLowerCase()}`}>
+          <Button mode="outlined" onPress={() => onPick(undefined)} style={styles.button} accessibilityLabel={`Change ${title.toLowerCase()}`}>
             Change
           </Button>
         </View>
