@@ -40,10 +40,10 @@ const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
 const PRICE_COLUMNS = 'id, normalizedModel, effectiveFrom, priceCents, currency, description, model, importId';
 
 /**
- * Lookups for planning a price file: the distributor's stored entry under a row's key and whether a
- * model is in the catalog. Point lookups on unique indexes for just the file's rows, rather than
- * reading every stored price and model: a distributor's price history only grows, and reading it
- * whole held the event loop for longer with every commit (issue 8, fault 6).
+ * Lookups for planning a price file: the distributor's stored entry under a row's key (a point
+ * lookup on the unique index for each of the file's rows, rather than reading the distributor's
+ * whole price history, which only grows: read whole, it held the event loop longer with every
+ * commit, issue 8 fault 6) and whether a model is in the catalog (its models read once per file).
  */
 interface PriceLookups {
   existing(normalizedModel: string, effectiveFrom: string): Row | undefined | Promise<Row | undefined>;
@@ -55,11 +55,15 @@ function priceLookups(manager: EntityManager, distributorId: number | null): Pri
   const tables = EQUIPMENT_KINDS.map((kind) => KINDS[kind].table);
   if (raw) {
     const entry = raw.prepare(`SELECT ${PRICE_COLUMNS} FROM price_entries WHERE distributorId = ? AND normalizedModel = ? AND effectiveFrom = ?`);
-    const inCatalog = raw.prepare(tables.map((table) => `SELECT 1 AS found FROM ${table} WHERE normalizedModel = @model`).join(' UNION ALL ') + ' LIMIT 1');
+    // The catalog's models, read once per file (bounded by the catalog, unlike the price history).
+    const models = new Set<string>();
+    for (const table of tables) {
+      for (const model of raw.prepare(`SELECT normalizedModel FROM ${table}`).pluck().all()) models.add(model as string);
+    }
     // Synchronous on SQLite: no promise per row for a 100,000-row file.
     return {
       existing: (model, from) => (distributorId === null ? undefined : (entry.get(distributorId, model, from) as Row | undefined)),
-      inCatalog: (model) => inCatalog.get({ model }) !== undefined,
+      inCatalog: (model) => models.has(model),
     };
   }
   // Other drivers: the same lookups through the query builder (its parameters suit every driver).
