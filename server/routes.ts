@@ -12,6 +12,9 @@ import { outboxRouter } from './mail/outbox.routes';
 import { refrigerantsRouter } from './refrigerants/refrigerants.routes';
 import { commissioningRouter } from './commissioning/commissioning.routes';
 import { coilsRouter } from './coils/coils.routes';
+import { optionsRouter } from './options/options.routes';
+import { jobOptionsRouter } from './options/job-options.routes';
+import { shopSettingsRouter } from './options/shop-settings.routes';
 
 /**
  * The API's resource routers, mounted under /api/<prefix>. Each module adds its line here.
@@ -30,4 +33,7 @@ export const apiRoutes: [string, (ctx: AppContext) => Router][] = [
   ['refrigerants', refrigerantsRouter],
   ['commissioning', commissioningRouter],
   ['coils', coilsRouter],
+  ['options', optionsRouter],
+  ['jobs', jobOptionsRouter],
+  ['settings/shop', shopSettingsRouter],
 ];

@@ -4,8 +4,10 @@ import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 @Entity('outbound_emails')
 export class OutboundEmailRow {
   @PrimaryGeneratedColumn({ type: 'integer' }) id: number;
-  @Index() @Column({ type: 'integer' }) systemId: number;
-  @Column({ type: 'integer' }) revision: number;
+  @Index() @Column({ type: 'integer', nullable: true }) systemId: number | null;
+  @Column({ type: 'integer', nullable: true }) revision: number | null;
+  /** Set for a proposal (a job's options), which has no system record. */
+  @Column({ type: 'integer', nullable: true }) jobId: number | null;
   @Column({ type: 'varchar', length: 254 }) to: string;
   @Column({ type: 'varchar', length: 200 }) subject: string;
   @Column({ type: 'varchar', length: 8 }) status: 'sent' | 'failed';

@@ -8,6 +8,7 @@ export function outboxView(row: OutboundEmailRow) {
   return {
     id: row.id,
     systemId: row.systemId,
+    jobId: row.jobId,
     revision: row.revision,
     to: row.to,
     subject: row.subject,

@@ -1,0 +1,45 @@
+import type { ProposalSend, ProposalSendResult } from '../../shared/schemas/options';
+import type { AppContext } from '../context';
+import { withWriteLock } from '../db/write-transaction';
+import { AppError } from '../lib/errors';
+import { renderProposal } from '../reports/proposal-report';
+import { SAFETY_NOTE } from '../reports/report-text';
+import { storageFor } from '../storage/storage-for';
+import { createMailTransport } from './mail-transport';
+import { OutboundEmailRow } from './outbound-email.entity';
+
+/**
+ * POST /api/jobs/:id/proposal/send: renders the proposal and sends it over SMTP. A failure answers 502 and
+ * the outbox records the failed attempt; nothing else changes.
+ */
+export async function sendProposal(ctx: AppContext, jobId: number, body: ProposalSend, userId: number): Promise<ProposalSendResult> {
+  const smtp = ctx.config.smtp;
+  if (!smtp) throw new AppError('mail-not-configured', 'E-mail is not set up on this server: ask your office to add the SMTP settings.', 503);
+  const { pdf, fileName, job } = await renderProposal(ctx, jobId, { paper: body.paper ?? 'letter', energy: body.energy ?? {} });
+  const shop = ctx.config.shopName ?? 'Tandem';
+  const subject = `${shop}: your heating and cooling options for ${job.siteAddress}`.slice(0, 200);
+  const attempt = { systemId: null, revision: null, jobId, to: body.to, subject, sentBy: userId, createdAt: new Date().toISOString() };
+  let messageId: string;
+  try {
+    const info = await createMailTransport(smtp).sendMail({
+      from: { name: shop, address: smtp.from },
+      to: body.to,
+      subject,
+      text: `Hello ${job.customerName},\n\nAttached are the options we discussed for ${job.siteAddress}, with prices, the compatibility check, rated efficiency and estimated energy savings.\n\nSafety: ${SAFETY_NOTE}\n\n${shop}\n`,
+      attachments: [{ filename: fileName, content: pdf, contentType: 'application/pdf' }],
+    });
+    messageId = info.messageId;
+  } catch (err) {
+    const reason = err instanceof Error ? err.message.slice(0, 300) : 'unknown error';
+    await withWriteLock(ctx, (manager) =>
+      manager.getRepository(OutboundEmailRow).insert({ ...attempt, status: 'failed', messageId: null, error: reason, reportKey: null, reportFileName: null }),
+    );
+    ctx.logger.warn({ jobId, err: reason }, 'proposal e-mail failed');
+    throw new AppError('mail-failed', 'The mail server did not accept the proposal. Nothing was sent; try again later.', 502, { reason });
+  }
+  const reportKey = await storageFor(ctx).put(pdf);
+  const row = await withWriteLock(ctx, (manager) =>
+    manager.getRepository(OutboundEmailRow).save({ ...attempt, status: 'sent', messageId, error: null, reportKey, reportFileName: fileName }),
+  );
+  return { emailId: row.id, messageId, to: body.to };
+}
