@@ -1,5 +1,5 @@
 import type { Page } from 'playwright-core';
-import { expect } from 'vitest';
+import { expect, inject } from 'vitest';
 import { account, signIn } from './browser';
 import { adminToken, importCsv } from './api-setup';
 
@@ -29,11 +29,39 @@ const OUTDOOR_CSV = [
 const COIL_CSV = ['model,min_tons,max_tons,refrigerants,metering_type,metering_refrigerant,metering_bidirectional', `${COIL},2.5,3.5,R-22,txv,R-22,yes`].join('\n');
 const PREVIEW_CSV = ['model,system_type,refrigerant,nominal_tons', 'AUD-PREVIEW-1,ac,R-454B,2', 'AUD-PREVIEW-2,ac,R-454B,not-a-number'].join('\n');
 
-/** Puts the audits' parts in the catalog (once per run). */
+/** The job whose options screen the audits visit (made by seedAuditData). */
+let optionsJobId = 0;
+
+async function postJson<T>(token: string, path: string, body: unknown): Promise<T> {
+  const res = await fetch(`${inject('baseUrl')}/api${path}`, {
+    method: 'POST',
+    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
+    body: JSON.stringify(body),
+  });
+  expect(res.status, await res.clone().text()).toBe(201);
+  return (await res.json()) as T;
+}
+
+/** Puts the audits' parts in the catalog, and a job with two priced options (once per run). */
 export async function seedAuditData(): Promise<void> {
   const token = await adminToken();
   await importCsv(token, 'outdoor-units', OUTDOOR_CSV, 'audit-outdoor.csv');
   await importCsv(token, 'indoor-coils', COIL_CSV, 'audit-coils.csv');
+  const found = await fetch(`${inject('baseUrl')}/api/catalog/outdoor-units?q=${OUTDOOR}`, { headers: { Authorization: `Bearer ${token}` } });
+  const outdoorId = ((await found.json()) as { items: { id: number; model: string }[] }).items.find((i) => i.model === OUTDOOR)!.id;
+  const job = await postJson<{ id: number }>(token, '/jobs', { customerName: 'Audit Household', siteAddress: '3 Audit Way', state: 'GA', contactEmail: 'audit@example.test' });
+  optionsJobId = job.id;
+  for (const [name, cents, hours] of [
+    ['Outdoor unit only', 310_000, 6],
+    ['Outdoor unit and line set', 310_000, 9],
+  ] as const) {
+    await postJson(token, `/jobs/${job.id}/options`, {
+      name,
+      outdoor: { id: outdoorId },
+      lines: [{ kind: 'outdoor-unit', model: OUTDOOR, quantity: 1, unitPriceCents: cents }],
+      laborHours: hours,
+    });
+  }
 }
 
 async function visible(page: Page, testId: string) {
@@ -161,6 +189,15 @@ export const AUDIT_SCREENS: AuditScreen[] = [
       await page.goto('/admin/rules');
       await visible(page, 'save-rules');
       await visible(page, 'setting-cfmPerTonMin');
+    },
+  },
+  {
+    name: 'job-options',
+    role: 'estimator',
+    open: async (page) => {
+      await page.goto(`/jobs/options/${optionsJobId}`);
+      await visible(page, 'option-cards');
+      await visible(page, 'option-card-Outdoor unit only');
     },
   },
   {
