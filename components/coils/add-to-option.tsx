@@ -129,5 +129,6 @@ export function AddToOption({ coil, outdoor, airHandler }: Props) {
 const styles = StyleSheet.create({
   button: { minHeight: TOUCH_TARGET },
   start: { alignSelf: 'flex-start' },
-  chips: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  // One choice a line: a long customer name and address wraps inside its chip on a phone.
+  chips: { gap: spacing.sm },
 });

@@ -38,14 +38,22 @@ export function taxText(o: Pick<OptionView, 'price'>): string {
   return `${numberText(o.price.taxRatePct, 3)}% of ${moneyText(o.price.taxableSellCents)} = ${moneyText(o.price.taxCents)}`;
 }
 
+const NOT_WORKED_OUT = 'Not worked out (no rated SEER2)';
+
+/** Whether the option's energy figures mean anything: without a SEER2 the server has nothing to divide by. */
+export function hasEnergyFigures(o: Pick<OptionView, 'efficiency'>): boolean {
+  return o.efficiency.seer2 !== undefined;
+}
+
 /** "$X a year (now $Y)" for one season, or a dash when the option has no such season. */
 function seasonText(season: OptionView['energy']['cooling'] | undefined): string {
   if (!season) return '—';
   return `${moneyText(season.newCostCents, 0)} a year, ${numberText(season.newKwh, 0)} kWh (now ${moneyText(season.existingCostCents, 0)})`;
 }
 
-/** Yearly energy cost of an option: cooling plus heating where compared (cents). */
-export function annualCostCents(o: Pick<OptionView, 'energy'>): number {
+/** Yearly energy cost of an option: cooling plus heating where compared (cents); null without a rated SEER2. */
+export function annualCostCents(o: Pick<OptionView, 'energy' | 'efficiency'>): number | null {
+  if (!hasEnergyFigures(o)) return null;
   return o.energy.cooling.newCostCents + (o.energy.heating?.newCostCents ?? 0);
 }
 
@@ -75,9 +83,9 @@ export function optionFigureRows(options: OptionView[]): FigureRow[] {
     row('labor', 'Labor (cost)', laborText),
     row('pricing', 'Pricing', pricingText),
     row('tax', 'Tax', taxText),
-    row('cooling', 'Cooling energy', (o) => seasonText(o.energy.cooling)),
-    row('heating', 'Heating energy', (o) => seasonText(o.energy.heating)),
-    row('saving', 'Saving a year', (o) => moneyText(o.energy.annualSavingCents, 0)),
-    row('payback', 'Payback', (o) => o.energy.paybackText),
+    row('cooling', 'Cooling energy', (o) => (hasEnergyFigures(o) ? seasonText(o.energy.cooling) : NOT_WORKED_OUT)),
+    row('heating', 'Heating energy', (o) => (hasEnergyFigures(o) ? seasonText(o.energy.heating) : NOT_WORKED_OUT)),
+    row('saving', 'Saving a year', (o) => (hasEnergyFigures(o) ? moneyText(o.energy.annualSavingCents, 0) : NOT_WORKED_OUT)),
+    row('payback', 'Payback', (o) => (hasEnergyFigures(o) ? o.energy.paybackText : NOT_WORKED_OUT)),
   ];
 }

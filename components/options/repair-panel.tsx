@@ -69,7 +69,7 @@ export function RepairPanel({ jobId, texts, onChange }: { jobId: number; texts: 
           {r.arithmetic.map((step, i) => (
             <Text key={i} variant="bodyMedium">{`${i + 1}. ${step}`}</Text>
           ))}
-          <Text variant="bodySmall" testID="rule-of-thumb">{`${r.ruleOfThumb.text} (a trade rule of thumb: common practice, no published source).`}</Text>
+          <Text variant="bodySmall" testID="rule-of-thumb">{`Where the age × repair rule comes from: ${r.ruleOfThumb.basis}, a trade rule of thumb.`}</Text>
           {r.notes.map((n, i) => (
             <Text key={i} variant="bodySmall">
               {n}

@@ -48,3 +48,11 @@ describe('option figures', () => {
     expect(regionalText({ regional: { state: 'AZ', meets: false, shortfalls: ['EER2 11.2 < 11.7'] } })).toBe('Below the AZ minimum: EER2 11.2 < 11.7');
   });
 });
+
+describe('an option with no rated SEER2', () => {
+  it('when the efficiency has no SEER2, then its yearly cost is not worked out rather than $0', () => {
+    const unrated = { ...option('U', 'C-9', 1, [50_000, 0]), efficiency: { source: 'outdoor-unit', sourceText: '', coolingBtuh: 36_000 } } as unknown as OptionView;
+    expect(annualCostCents(unrated)).toBeNull();
+    expect(optionFigureRows([unrated]).find((r) => r.key === 'payback')?.values[0]).toMatch(/Not worked out/);
+  });
+});

@@ -155,17 +155,26 @@ describe('options on a job', () => {
     await page.close();
   });
 
-  it('when the same job is opened on a wide screen, then the options stand side by side', async () => {
+  it('when the same job is opened on a wide screen after a cheaper price list, then the options stand side by side and the moved price is marked', async () => {
+    // A second distributor undercuts the saved coil price from today: the saved option keeps $612.40 and says so.
+    await importPrices(token, 'Northgate Supply', 'model,price\nE2OP-FIT,590.00');
     const page = await openPage(browser, 'wide');
     await signIn(page, account('estimator'));
     await page.goto(`/jobs/options/${jobId}`);
     const first = page.getByTestId(`option-card-${FIRST}`);
     const second = page.getByTestId(`option-card-${SECOND}`);
     await expect.poll(() => second.count(), { timeout: 15_000 }).toBe(1);
-    const [a, b] = [await first.boundingBox(), await second.boundingBox()];
-    expect(Math.abs(a!.y - b!.y)).toBeLessThan(2);
-    expect(b!.x).toBeGreaterThan(a!.x + a!.width - 1);
+    await expect.poll(() => first.getByTestId('price-moved').textContent()).toContain('$590.00');
+    expect(await first.textContent()).toContain('$612.40');
     await screenshot(page, 'options-compare-wide');
+    const [a, b] = [await first.boundingBox(), await second.boundingBox()];
+    // Same row (the chosen card's 2 px border shifts it by a pixel or two), second to the right of the first.
+    expect(Math.abs(a!.y - b!.y)).toBeLessThanOrEqual(3);
+    expect(b!.x).toBeGreaterThan(a!.x + a!.width - 1);
+    // The unrated option's yearly cost is not shown as $0 (no SEER2 to work it out from).
+    expect(await page.getByTestId('cost-bars').getAttribute('aria-label')).toContain(`${SECOND}: not worked out`);
+    await page.getByTestId('options-chart').scrollIntoViewIfNeeded();
+    await screenshot(page, 'options-chart-wide');
     await page.close();
   });
 });
