@@ -94,8 +94,10 @@ export interface SystemSummary {
 
 export interface OutboxEntry {
   id: number;
-  systemId: number;
-  revision: number;
+  /** Null for a proposal e-mail, which belongs to a job (`jobId`) rather than a record. */
+  systemId: number | null;
+  revision: number | null;
+  jobId?: number | null;
   to: string;
   subject: string;
   status: 'sent' | 'failed';

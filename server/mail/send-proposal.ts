@@ -14,7 +14,8 @@ import { OutboundEmailRow } from './outbound-email.entity';
  */
 export async function sendProposal(ctx: AppContext, jobId: number, body: ProposalSend, userId: number): Promise<ProposalSendResult> {
   const smtp = ctx.config.smtp;
-  if (!smtp) throw new AppError('mail-not-configured', 'E-mail is not set up on this server: ask your office to add the SMTP settings.', 503);
+  if (!smtp)
+    throw new AppError('mail-not-configured', 'E-mail is not set up on this server: ask your office to add the SMTP settings.', 503);
   const { pdf, fileName, job } = await renderProposal(ctx, jobId, { paper: body.paper ?? 'letter', energy: body.energy ?? {} });
   const shop = ctx.config.shopName ?? 'Tandem';
   const subject = `${shop}: your heating and cooling options for ${job.siteAddress}`.slice(0, 200);
@@ -32,14 +33,18 @@ export async function sendProposal(ctx: AppContext, jobId: number, body: Proposa
   } catch (err) {
     const reason = err instanceof Error ? err.message.slice(0, 300) : 'unknown error';
     await withWriteLock(ctx, (manager) =>
-      manager.getRepository(OutboundEmailRow).insert({ ...attempt, status: 'failed', messageId: null, error: reason, reportKey: null, reportFileName: null }),
+      manager
+        .getRepository(OutboundEmailRow)
+        .insert({ ...attempt, status: 'failed', messageId: null, error: reason, reportKey: null, reportFileName: null }),
     );
     ctx.logger.warn({ jobId, err: reason }, 'proposal e-mail failed');
     throw new AppError('mail-failed', 'The mail server did not accept the proposal. Nothing was sent; try again later.', 502, { reason });
   }
   const reportKey = await storageFor(ctx).put(pdf);
   const row = await withWriteLock(ctx, (manager) =>
-    manager.getRepository(OutboundEmailRow).save({ ...attempt, status: 'sent', messageId, error: null, reportKey, reportFileName: fileName }),
+    manager
+      .getRepository(OutboundEmailRow)
+      .save({ ...attempt, status: 'sent', messageId, error: null, reportKey, reportFileName: fileName }),
   );
   return { emailId: row.id, messageId, to: body.to };
 }

@@ -23,7 +23,11 @@ export function optionCheckRequest(content: Omit<OptionInput, 'lines'>, state: s
 }
 
 /** Resolves an option's parts and runs the shared engine on them, as the Check screen would. */
-export async function checkOption(ctx: AppContext, content: Omit<OptionInput, 'lines'>, state: string): Promise<{ pairing: Pairing; check: CheckResult }> {
+export async function checkOption(
+  ctx: AppContext,
+  content: Omit<OptionInput, 'lines'>,
+  state: string,
+): Promise<{ pairing: Pairing; check: CheckResult }> {
   const [pairing, ruleContext] = await Promise.all([resolvePairing(ctx, optionCheckRequest(content, state)), loadRuleContext(ctx)]);
   return { pairing, check: runChecks(pairing, ruleContext) };
 }

@@ -29,17 +29,23 @@ export function energyComparison(
   let basis: EnergyComparison['existing']['basis'] = 'given';
   if (query.existingSeer2 === undefined || (existingHeatPump && query.existingHspf2 === undefined)) {
     basis = age === undefined ? 'assumed-default' : 'estimated-from-age';
-    assumptions.push(age === undefined ? `No existing figures or age given: assumed ${DEFAULT_AGE_YEARS} years old. ${estimate.assumption}` : estimate.assumption);
+    assumptions.push(
+      age === undefined
+        ? `No existing figures or age given: assumed ${DEFAULT_AGE_YEARS} years old. ${estimate.assumption}`
+        : estimate.assumption,
+    );
   }
   const existingSeer2 = query.existingSeer2 ?? estimate.seer2;
   const existingHspf2 = query.existingHspf2 ?? estimate.hspf2;
   const zero = { existingKwh: 0, newKwh: 0, savingKwh: 0, existingCostCents: 0, newCostCents: 0, savingCents: 0 };
   let cooling = zero;
-  if (figures.seer2 !== undefined) cooling = compareSeason('cooling', figures.coolingBtuh, coolingHours, existingSeer2, figures.seer2, centsPerKwh);
+  if (figures.seer2 !== undefined)
+    cooling = compareSeason('cooling', figures.coolingBtuh, coolingHours, existingSeer2, figures.seer2, centsPerKwh);
   else assumptions.push('The new SEER2 is not known: no cooling saving is counted.');
   let heating: EnergyComparison['heating'];
   if (heatPump && existingHeatPump) {
-    if (figures.hspf2 !== undefined) heating = compareSeason('heating', figures.coolingBtuh, heatingHours, existingHspf2, figures.hspf2, centsPerKwh);
+    if (figures.hspf2 !== undefined)
+      heating = compareSeason('heating', figures.coolingBtuh, heatingHours, existingHspf2, figures.hspf2, centsPerKwh);
     else assumptions.push('The new HSPF2 is not known: no heating saving is counted.');
     assumptions.push('Heating load approximated by the rated cooling capacity (no heat-loss calculation; backup heat not counted).');
   }

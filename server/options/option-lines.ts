@@ -54,23 +54,38 @@ export function withEquipmentLines(lines: OptionLineInput[], pairing: Pairing): 
     const part = pairing[SLOT_OF[kind]];
     if (!part || part.kept || part.id === undefined || out.some((l) => l.kind === kind)) continue;
     const spec = part.spec as { model?: string; brand?: string };
-    out.unshift({ kind, model: spec.model, quantity: 1, description: `${EQUIPMENT_WORDS[kind]} ${[spec.brand, spec.model].filter(Boolean).join(' ')}`.trim() });
+    out.unshift({
+      kind,
+      model: spec.model,
+      quantity: 1,
+      description: `${EQUIPMENT_WORDS[kind]} ${[spec.brand, spec.model].filter(Boolean).join(' ')}`.trim(),
+    });
   }
-  return out.sort((a, b) => Number(isEquipment(b.kind)) - Number(isEquipment(a.kind)) || EQUIPMENT_LINE_KINDS.indexOf(a.kind as EquipmentKind) - EQUIPMENT_LINE_KINDS.indexOf(b.kind as EquipmentKind));
+  return out.sort(
+    (a, b) =>
+      Number(isEquipment(b.kind)) - Number(isEquipment(a.kind)) ||
+      EQUIPMENT_LINE_KINDS.indexOf(a.kind as EquipmentKind) - EQUIPMENT_LINE_KINDS.indexOf(b.kind as EquipmentKind),
+  );
 }
 
 /**
  * Prices the lines for saving: a given price stays (the snapshot); a line without one takes today's best price
  * of its model. `pathOf` names a line in an error as the estimator sent it.
  */
-export async function priceLines(ctx: AppContext, lines: OptionLineInput[], pathOf: (line: OptionLineInput) => string): Promise<StoredLine[]> {
+export async function priceLines(
+  ctx: AppContext,
+  lines: OptionLineInput[],
+  pathOf: (line: OptionLineInput) => string,
+): Promise<StoredLine[]> {
   const models = lines.filter((l) => l.unitPriceCents === undefined && l.model).map((l) => l.model!);
   const prices = models.length ? await currentPricesBatch(ctx, models) : new Map();
   const problems: { path: string; message: string }[] = [];
   const stored = lines.map((line): StoredLine => {
     const base = {
       kind: line.kind,
-      description: line.description?.trim() || [KIND_WORDS[line.kind] ?? EQUIPMENT_WORDS[line.kind as EquipmentKind], line.model].filter(Boolean).join(' '),
+      description:
+        line.description?.trim() ||
+        [KIND_WORDS[line.kind] ?? EQUIPMENT_WORDS[line.kind as EquipmentKind], line.model].filter(Boolean).join(' '),
       model: line.model,
       quantity: line.quantity,
       taxable: line.taxable ?? line.kind !== 'fee',
@@ -93,7 +108,13 @@ export async function priceLines(ctx: AppContext, lines: OptionLineInput[], path
       });
       return { ...base, unitPriceCents: 0, priceSource: 'typed' };
     }
-    return { ...base, unitPriceCents: best.priceCents, priceSource: 'price-list', distributor: best.distributor, effectiveFrom: best.effectiveFrom };
+    return {
+      ...base,
+      unitPriceCents: best.priceCents,
+      priceSource: 'price-list',
+      distributor: best.distributor,
+      effectiveFrom: best.effectiveFrom,
+    };
   });
   if (problems.length) throw new AppError('validation-failed', 'Some lines have no price.', 422, problems);
   return stored.map(dropUndefined);
@@ -115,6 +136,11 @@ export async function viewLines(ctx: AppContext, lines: StoredLine[]): Promise<O
   return lines.map((line) => {
     const best = line.model ? (pickBestPrice(prices.get(normalizeModel(line.model))) ?? null) : undefined;
     const differs = line.priceSource === 'price-list' && (best === null || best === undefined || best.priceCents !== line.unitPriceCents);
-    return { ...line, extendedCents: lineExtendedCents(line.quantity, line.unitPriceCents), currentPriceDiffers: differs, ...(best !== undefined ? { currentPrice: best } : {}) };
+    return {
+      ...line,
+      extendedCents: lineExtendedCents(line.quantity, line.unitPriceCents),
+      currentPriceDiffers: differs,
+      ...(best !== undefined ? { currentPrice: best } : {}),
+    };
   });
 }

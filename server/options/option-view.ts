@@ -53,7 +53,9 @@ export function rebateView(tiers: ShopRebateTier[], figures: Figures): OptionVie
   });
 }
 
-function partSummary(part: Pairing['outdoor'] | Pairing['indoorCoil'] | Pairing['airHandler'] | Pairing['metering']): OptionPartSummary | undefined {
+function partSummary(
+  part: Pairing['outdoor'] | Pairing['indoorCoil'] | Pairing['airHandler'] | Pairing['metering'],
+): OptionPartSummary | undefined {
   if (!part) return undefined;
   const spec = part.spec as { model?: string; brand?: string };
   const model = spec.model ?? 'typed from the nameplate';
@@ -67,7 +69,13 @@ function partSummary(part: Pairing['outdoor'] | Pairing['indoorCoil'] | Pairing[
 }
 
 /** The full view of a saved option: price, check, rated figures, compliance, rebates, energy and payback. */
-export async function optionView(ctx: AppContext, row: JobOptionRow, job: JobRow, settings: ShopSettings, energy: EnergyQuery): Promise<OptionView> {
+export async function optionView(
+  ctx: AppContext,
+  row: JobOptionRow,
+  job: JobRow,
+  settings: ShopSettings,
+  energy: EnergyQuery,
+): Promise<OptionView> {
   const { pairing, check } = await checkOption(ctx, row.content, job.state);
   const figures = efficiencyFigures(pairing);
   const systemType = pairing.outdoor.spec.systemType;

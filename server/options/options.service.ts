@@ -46,10 +46,17 @@ export async function getOption(ctx: AppContext, id: number, energy: EnergyQuery
 }
 
 /** Resolves the parts (unknown ids → 422) and prices the lines: the snapshot a save stores. */
-async function pricedContent(ctx: AppContext, state: string, input: OptionInput): Promise<{ content: Omit<OptionInput, 'lines'>; lines: StoredLine[] }> {
+async function pricedContent(
+  ctx: AppContext,
+  state: string,
+  input: OptionInput,
+): Promise<{ content: Omit<OptionInput, 'lines'>; lines: StoredLine[] }> {
   const { lines = [], ...content } = input;
   const { pairing } = await checkOption(ctx, content, state);
-  if (pairing.outdoor.kept) throw new AppError('validation-failed', 'The request did not pass validation.', 422, [{ path: 'outdoor', message: 'the outdoor unit of an option is new' }]);
+  if (pairing.outdoor.kept)
+    throw new AppError('validation-failed', 'The request did not pass validation.', 422, [
+      { path: 'outdoor', message: 'the outdoor unit of an option is new' },
+    ]);
   const pathOf = (line: OptionLineInput) => (lines.includes(line) ? `lines.${lines.indexOf(line)}` : `equipment.${line.kind}`);
   return { content, lines: await priceLines(ctx, withEquipmentLines(lines, pairing), pathOf) };
 }
@@ -62,10 +69,22 @@ export async function createOption(ctx: AppContext, jobId: number, input: Option
     const repo = manager.getRepository(JobOptionRow);
     const count = await repo.countBy({ jobId });
     if (count >= MAX_OPTIONS_PER_JOB) {
-      throw new AppError('option-limit', `A job holds at most ${MAX_OPTIONS_PER_JOB} options: delete one or change one of them.`, 409, { count });
+      throw new AppError('option-limit', `A job holds at most ${MAX_OPTIONS_PER_JOB} options: delete one or change one of them.`, 409, {
+        count,
+      });
     }
     const at = nowIso();
-    const row = await repo.save({ jobId, name: content.name, revision: 1, content, lines, chosenAt: null, createdBy: userId, createdAt: at, updatedAt: at });
+    const row = await repo.save({
+      jobId,
+      name: content.name,
+      revision: 1,
+      content,
+      lines,
+      chosenAt: null,
+      createdBy: userId,
+      createdAt: at,
+      updatedAt: at,
+    });
     return row.id;
   });
   return getOption(ctx, id);
@@ -84,7 +103,9 @@ function mergeInput(row: JobOptionRow, patch: OptionPatch): unknown {
   if (fields.targetMarginPct != null) delete merged.markupPct;
   let nextLines: OptionLineInput[] = lines ?? row.lines.map(toInputLine);
   if (reprice) {
-    nextLines = nextLines.map((l) => (l.priceSource === 'price-list' && l.model ? { ...l, unitPriceCents: undefined, distributor: undefined, effectiveFrom: undefined } : l));
+    nextLines = nextLines.map((l) =>
+      l.priceSource === 'price-list' && l.model ? { ...l, unitPriceCents: undefined, distributor: undefined, effectiveFrom: undefined } : l,
+    );
   }
   return { ...merged, lines: nextLines };
 }
@@ -135,7 +156,8 @@ export async function chooseOption(ctx: AppContext, id: number) {
 /** POST /api/options/:id/make-record: the chosen option as a draft matched-system record (the systems create path). */
 export async function makeRecord(ctx: AppContext, id: number, userId: number) {
   const row = await requireOption(ctx, id);
-  if (row.chosenAt === null) throw new AppError('option-not-chosen', 'Record the customer\'s choice first: only the chosen option becomes the system record.', 409);
+  if (row.chosenAt === null)
+    throw new AppError('option-not-chosen', "Record the customer's choice first: only the chosen option becomes the system record.", 409);
   const job = await requireJob(ctx, row.jobId);
   const body = parseSystemCreate({ ...optionCheckRequest(row.content, job.state), label: row.name });
   return createSystem(ctx, row.jobId, body, userId);

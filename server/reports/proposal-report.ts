@@ -21,7 +21,10 @@ export async function renderProposal(ctx: AppContext, jobId: number, options: { 
   const doc = layout.doc;
   doc.font('Inter-Bold').fontSize(15).text(shopName, layout.left, doc.y, { width: layout.width });
   doc.font('Inter-Medium').fontSize(10).text('Proposal: heating and cooling options', { width: layout.width });
-  doc.font('Inter').fontSize(8.5).text(`Prepared ${dateTimeText(generatedAt)}`, { width: layout.width });
+  doc
+    .font('Inter')
+    .fontSize(8.5)
+    .text(`Prepared ${dateTimeText(generatedAt)}`, { width: layout.width });
   doc.moveDown(0.4);
   const contact = [job.contactEmail, job.contactPhone].filter(Boolean).join(' · ');
   layout.paragraph(`Customer: ${job.customerName}${contact ? ` (${contact})` : ''}`, { bold: true });
@@ -29,7 +32,10 @@ export async function renderProposal(ctx: AppContext, jobId: number, options: { 
 
   layout.heading('Your options side by side');
   const share = 0.7 / items.length;
-  const columns = [{ header: '', share: 0.3 }, ...items.map((o) => ({ header: o.name + (o.id === chosenOptionId ? ' (chosen)' : ''), share }))];
+  const columns = [
+    { header: '', share: 0.3 },
+    ...items.map((o) => ({ header: o.name + (o.id === chosenOptionId ? ' (chosen)' : ''), share })),
+  ];
   const row = (label: string, cell: (o: OptionView) => string) => [label, ...items.map(cell)];
   layout.table(columns, [
     row('Price (tax included)', (o) => formatDollars(o.price.totalCents)),
@@ -39,49 +45,61 @@ export async function renderProposal(ctx: AppContext, jobId: number, options: { 
     row('Compatibility check', (o) => verdictWord(o.check)),
     row('Rated SEER2 / EER2 / HSPF2', (o) => `${fig(o.efficiency.seer2)} / ${fig(o.efficiency.eer2)} / ${fig(o.efficiency.hspf2)}`),
     row('Regional minimum', (o) => (o.regional.meets === true ? 'Meets' : o.regional.meets === false ? 'Does not meet' : 'Not known')),
-    row('Rebate tiers met', (o) => o.rebateTiers.filter((t) => t.met).map((t) => t.name).join(', ') || 'None'),
+    row(
+      'Rebate tiers met',
+      (o) =>
+        o.rebateTiers
+          .filter((t) => t.met)
+          .map((t) => t.name)
+          .join(', ') || 'None',
+    ),
     row('Energy cost a year (now → new)', (o) => {
       const e = o.energy;
       const now = e.cooling.existingCostCents + (e.heating?.existingCostCents ?? 0);
       const next = e.cooling.newCostCents + (e.heating?.newCostCents ?? 0);
       return `${formatDollars(now)} → ${formatDollars(next)}`;
     }),
-    row('Saving a year / simple payback', (o) => `${formatDollars(o.energy.annualSavingCents)} / ${o.energy.paybackYears === null ? 'none' : `${o.energy.paybackYears} years`}`),
+    row(
+      'Saving a year / simple payback',
+      (o) => `${formatDollars(o.energy.annualSavingCents)} / ${o.energy.paybackYears === null ? 'none' : `${o.energy.paybackYears} years`}`,
+    ),
   ]);
 
   for (const o of items) {
     layout.heading(`${o.name}: ${formatDollars(o.price.totalCents)}`, 90);
     if (o.notes) layout.paragraph(o.notes);
+    // The customer sees what is included and the selling prices, never the shop's cost of each line.
     layout.table(
       [
-        { header: 'Item', share: 0.52 },
-        { header: 'Qty', share: 0.12 },
-        { header: 'Unit', share: 0.18 },
-        { header: 'Amount', share: 0.18 },
+        { header: 'Included', share: 0.8 },
+        { header: 'Qty', share: 0.2 },
       ],
-      [
-        ...o.lines.map((l) => [l.description, String(l.quantity), formatDollars(l.unitPriceCents), formatDollars(l.extendedCents)]),
-        ['Labor', `${o.laborHours} h`, formatDollars(o.laborRateCents), formatDollars(o.price.laborCostCents)],
-      ],
+      [...o.lines.map((l) => [l.description, String(l.quantity)]), ['Installation labor', `${o.laborHours} h`]],
     );
+    const p = o.price;
     layout.paragraph(
-      `Subtotal ${formatDollars(o.price.subtotalCents)} · sales tax ${o.price.taxRatePct} % on equipment and materials ${formatDollars(o.price.taxCents)} · total ${formatDollars(o.price.totalCents)}.`,
+      `Equipment and materials ${formatDollars(p.materialSellCents)} · labor ${formatDollars(p.laborSellCents)} · sales tax ${p.taxRatePct} % on equipment and materials ${formatDollars(p.taxCents)} · total ${formatDollars(p.totalCents)}.`,
       { bold: true },
     );
     layout.paragraph(
-      `Line amounts are our cost basis; the subtotal includes our ${o.price.pricing === 'markup' ? 'markup' : 'margin'} on equipment, materials and labor.`,
-      { muted: true },
+      `Rated figures from ${o.efficiency.sourceText}. ${o.regional.minimum ? `Regional minimum (${o.regional.regionName}): SEER2 ${o.regional.minimum.seer2}${o.regional.minimum.eer2 ? `, EER2 ${o.regional.minimum.eer2}` : ''}${o.regional.minimum.hspf2 ? `, HSPF2 ${o.regional.minimum.hspf2}` : ''} — ${o.regional.minimum.basis}.` : ''}`,
     );
-    layout.paragraph(`Rated figures from ${o.efficiency.sourceText}. ${o.regional.minimum ? `Regional minimum (${o.regional.regionName}): SEER2 ${o.regional.minimum.seer2}${o.regional.minimum.eer2 ? `, EER2 ${o.regional.minimum.eer2}` : ''}${o.regional.minimum.hspf2 ? `, HSPF2 ${o.regional.minimum.hspf2}` : ''} — ${o.regional.minimum.basis}.` : ''}`);
     const notable = o.check.findings.filter((f) => f.severity !== 'info');
-    layout.paragraph(`Compatibility: ${verdictWord(o.check)}.${notable.length ? ' ' + notable.map((f) => `${SEVERITY_WORDS[f.severity]}: ${f.title}. ${f.detail}`).join(' ') : ''}`);
+    layout.paragraph(
+      `Compatibility: ${verdictWord(o.check)}.${notable.length ? ' ' + notable.map((f) => `${SEVERITY_WORDS[f.severity]}: ${f.title}. ${f.detail}`).join(' ') : ''}`,
+    );
     layout.paragraph(`Energy: ${o.energy.paybackText} ${o.energy.assumptions.join(' ')}`, { muted: true });
   }
 
   layout.heading('Safety and local codes', 90);
   layout.paragraph(SAFETY_NOTE);
-  layout.paragraph('Prices as of the date above; energy figures are estimates, not a guarantee of savings. Rebate tiers are the shop\'s list: check the program\'s current rules.', { muted: true });
+  layout.paragraph(
+    "Prices as of the date above; energy figures are estimates, not a guarantee of savings. Rebate tiers are the shop's list: check the program's current rules.",
+    { muted: true },
+  );
   layout.signatures(['Customer — option chosen, signature, date', `${shopName} — name, signature, date`]);
-  const pdf = await layout.finish((page, pages) => `${shopName} · ${job.customerName} · proposal · page ${page} of ${pages} · printed ${dateTimeText(generatedAt)}`);
+  const pdf = await layout.finish(
+    (page, pages) => `${shopName} · ${job.customerName} · proposal · page ${page} of ${pages} · printed ${dateTimeText(generatedAt)}`,
+  );
   return { pdf, fileName: `proposal-job-${jobId}.pdf`, job };
 }

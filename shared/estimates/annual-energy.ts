@@ -21,7 +21,14 @@ export function annualHeatingKwh(capacityBtuh: number, fullLoadHours: number, hs
 const oneDecimal = (n: number) => Math.round(n * 10) / 10;
 
 /** One season compared: kWh (one decimal) and cost (cents) of the existing rating vs the new one. */
-export function compareSeason(kind: 'cooling' | 'heating', capacityBtuh: number, hours: number, existingRating: number, newRating: number, centsPerKwh: number): EnergyLeg {
+export function compareSeason(
+  kind: 'cooling' | 'heating',
+  capacityBtuh: number,
+  hours: number,
+  existingRating: number,
+  newRating: number,
+  centsPerKwh: number,
+): EnergyLeg {
   const kwh = kind === 'cooling' ? annualCoolingKwh : annualHeatingKwh;
   const existingKwh = kwh(capacityBtuh, hours, existingRating);
   const newKwh = kwh(capacityBtuh, hours, newRating);

@@ -11,6 +11,7 @@ export function simplePaybackYears(priceCents: number, annualSavingCents: number
 /** The payback in words with its arithmetic. */
 export function paybackText(priceCents: number, annualSavingCents: number): string {
   const years = simplePaybackYears(priceCents, annualSavingCents);
-  if (years === null) return `No energy saving over the existing system, so no payback from energy alone (price ${formatDollars(priceCents)}).`;
+  if (years === null)
+    return `No energy saving over the existing system, so no payback from energy alone (price ${formatDollars(priceCents)}).`;
   return `${formatDollars(priceCents)} ÷ ${formatDollars(annualSavingCents)} saved a year = ${years} years simple payback.`;
 }

@@ -71,9 +71,13 @@ export function adviseRepairOrReplace(facts: RepairOrReplaceFacts, options: Opti
   if (best) recommendationText += ` If replacing, "${best.name}" pays back fastest: ${best.paybackYears} years.`;
   const notes = ['The age × repair-cost rule is a trade rule of thumb (common practice, no source), not a guarantee.'];
   if (facts.refrigerant === 'R-22') {
-    notes.push('R-22 is no longer produced or imported in the US (phase-out completed 2020): recharges rely on reclaimed stock, so price and supply can change.');
+    notes.push(
+      'R-22 is no longer produced or imported in the US (phase-out completed 2020): recharges rely on reclaimed stock, so price and supply can change.',
+    );
   }
-  notes.push('Refrigerant work, brazing, pressure tests and electrical work are for licensed technicians following the manufacturer\'s instructions and local codes.');
+  notes.push(
+    "Refrigerant work, brazing, pressure tests and electrical work are for licensed technicians following the manufacturer's instructions and local codes.",
+  );
   return {
     refrigerantCostCents,
     repairTotalCents,

@@ -15,7 +15,12 @@ export const DEFAULT_SHOP_SETTINGS: ShopSettings = {
   heatingHoursPerYear: 1000,
   centsPerKwh: 15,
   rebateTiers: [
-    { name: 'Demo utility tier 1 (invented)', seer2: 15.2, eer2: 11.7, note: 'Invented demo tier; replace with your program\'s figures.' },
-    { name: 'Demo utility tier 2 (invented)', seer2: 16, eer2: 12, hspf2: 8.1, note: 'Invented demo tier; replace with your program\'s figures.' },
+    { name: 'Demo utility tier 1 (invented)', seer2: 15.2, eer2: 11, note: "Invented demo tier; replace with your program's figures." },
+    {
+      name: 'Demo utility tier 2 (invented)',
+      seer2: 17,
+      hspf2: 8.5,
+      note: "Invented demo tier; replace with your program's figures.",
+    },
   ],
 };

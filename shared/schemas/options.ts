@@ -52,8 +52,13 @@ export const OptionLineInputSchema = z
     distributor: z.string().trim().max(120).optional(),
     effectiveFrom: isoDate.optional(),
     taxable: z.boolean().optional(),
+    // What the view adds to a line: accepted so a line can be sent back as it was shown, and ignored.
+    extendedCents: z.unknown().optional(),
+    currentPriceDiffers: z.unknown().optional(),
+    currentPrice: z.unknown().optional(),
   })
-  .strict();
+  .strict()
+  .transform(({ extendedCents: _e, currentPriceDiffers: _d, currentPrice: _c, ...line }) => line);
 export type OptionLineInput = z.infer<typeof OptionLineInputSchema>;
 
 /** A saved line (the snapshot) with what the view adds. */
@@ -145,7 +150,10 @@ export type OptionPatch = z.infer<typeof OptionPatchSchema>;
 // ---------- energy query (existing system) ----------
 
 const queryNumber = (min: number, max: number) =>
-  z.preprocess((v) => (v === '' || v === undefined ? undefined : typeof v === 'string' ? Number(v) : v), z.number().min(min).max(max).optional());
+  z.preprocess(
+    (v) => (v === '' || v === undefined ? undefined : typeof v === 'string' ? Number(v) : v),
+    z.number().min(min).max(max).optional(),
+  );
 
 /**
  * The existing system and the energy assumptions, as query parameters (GET options, proposal.pdf) or in a
@@ -194,7 +202,14 @@ export interface OptionPrice {
 export interface EnergyComparison {
   /** kWh per year and cost per year in cents, existing system vs this option. */
   cooling: { existingKwh: number; newKwh: number; savingKwh: number; existingCostCents: number; newCostCents: number; savingCents: number };
-  heating?: { existingKwh: number; newKwh: number; savingKwh: number; existingCostCents: number; newCostCents: number; savingCents: number };
+  heating?: {
+    existingKwh: number;
+    newKwh: number;
+    savingKwh: number;
+    existingCostCents: number;
+    newCostCents: number;
+    savingCents: number;
+  };
   annualSavingCents: number;
   /** Customer price / annual saving, one decimal; null when nothing is saved. */
   paybackYears: number | null;
@@ -289,7 +304,14 @@ export interface RepairOrReplaceResult {
     basis: 'common practice (no source)';
     text: string;
   };
-  options: { optionId: number; name: string; totalCents: number; annualSavingCents: number; paybackYears: number | null; verdict: Verdict }[];
+  options: {
+    optionId: number;
+    name: string;
+    totalCents: number;
+    annualSavingCents: number;
+    paybackYears: number | null;
+    verdict: Verdict;
+  }[];
   recommendation: 'replace' | 'repair' | 'either';
   recommendationText: string;
   /** Each step of the arithmetic in words and numbers. */

@@ -38,13 +38,24 @@ export class JobOptions1765200000000 implements MigrationInterface {
     await queryRunner.createTable(
       new Table({
         name: 'shop_settings',
-        columns: [{ name: 'id', type: 'integer', isPrimary: true }, { name: 'settings', type: 'text' }, at('updatedAt'), ref('updatedBy', true)],
+        columns: [
+          { name: 'id', type: 'integer', isPrimary: true },
+          { name: 'settings', type: 'text' },
+          at('updatedAt'),
+          ref('updatedBy', true),
+        ],
       }),
     );
     // A proposal e-mail belongs to a job, not a system record: systemId and revision become optional.
     await queryRunner.changeColumns('outbound_emails', [
-      { oldColumn: new TableColumn({ name: 'systemId', type: 'integer' }), newColumn: new TableColumn({ name: 'systemId', type: 'integer', isNullable: true }) },
-      { oldColumn: new TableColumn({ name: 'revision', type: 'integer' }), newColumn: new TableColumn({ name: 'revision', type: 'integer', isNullable: true }) },
+      {
+        oldColumn: new TableColumn({ name: 'systemId', type: 'integer' }),
+        newColumn: new TableColumn({ name: 'systemId', type: 'integer', isNullable: true }),
+      },
+      {
+        oldColumn: new TableColumn({ name: 'revision', type: 'integer' }),
+        newColumn: new TableColumn({ name: 'revision', type: 'integer', isNullable: true }),
+      },
     ]);
     await queryRunner.addColumn('outbound_emails', new TableColumn({ name: 'jobId', type: 'integer', isNullable: true }));
   }
@@ -53,8 +64,14 @@ export class JobOptions1765200000000 implements MigrationInterface {
     await queryRunner.dropColumn('outbound_emails', 'jobId');
     await queryRunner.query('DELETE FROM outbound_emails WHERE systemId IS NULL');
     await queryRunner.changeColumns('outbound_emails', [
-      { oldColumn: new TableColumn({ name: 'systemId', type: 'integer', isNullable: true }), newColumn: new TableColumn({ name: 'systemId', type: 'integer' }) },
-      { oldColumn: new TableColumn({ name: 'revision', type: 'integer', isNullable: true }), newColumn: new TableColumn({ name: 'revision', type: 'integer' }) },
+      {
+        oldColumn: new TableColumn({ name: 'systemId', type: 'integer', isNullable: true }),
+        newColumn: new TableColumn({ name: 'systemId', type: 'integer' }),
+      },
+      {
+        oldColumn: new TableColumn({ name: 'revision', type: 'integer', isNullable: true }),
+        newColumn: new TableColumn({ name: 'revision', type: 'integer' }),
+      },
     ]);
     await queryRunner.dropTable('shop_settings');
     await queryRunner.dropTable('job_options');

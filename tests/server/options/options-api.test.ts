@@ -17,7 +17,13 @@ afterAll(async () => {
 
 const est = () => authFor(t, 'estimator');
 const newJob = async () =>
-  (await request(t.app).post('/api/jobs').set(est()).send({ customerName: 'Ines Marlow', siteAddress: '12 Fern Row', state: 'GA' }).expect(201)).body.id as number;
+  (
+    await request(t.app)
+      .post('/api/jobs')
+      .set(est())
+      .send({ customerName: 'Ines Marlow', siteAddress: '12 Fern Row', state: 'GA' })
+      .expect(201)
+  ).body.id as number;
 
 /** An option on the fixture's heat pump and coil with an invented air handler (1200 CFM on 3 tons = 400 CFM/ton, common practice (no source)). */
 const optionBody = (over: object = {}) => ({
@@ -53,8 +59,16 @@ describe('options: roles and errors', () => {
   });
   it('when the body names an unknown part or gives both a markup and a margin, then 422', async () => {
     const jobId = await newJob();
-    await request(t.app).post(`/api/jobs/${jobId}/options`).set(est()).send(optionBody({ outdoor: { id: 987654 } })).expect(422);
-    const res = await request(t.app).post(`/api/jobs/${jobId}/options`).set(est()).send(optionBody({ targetMarginPct: 30 })).expect(422);
+    await request(t.app)
+      .post(`/api/jobs/${jobId}/options`)
+      .set(est())
+      .send(optionBody({ outdoor: { id: 987654 } }))
+      .expect(422);
+    const res = await request(t.app)
+      .post(`/api/jobs/${jobId}/options`)
+      .set(est())
+      .send(optionBody({ targetMarginPct: 30 }))
+      .expect(422);
     expect(res.body.error.code).toBe('validation-failed');
   });
   it('when a line has no price and its model is on no price list, then 422 naming the line', async () => {
@@ -83,20 +97,30 @@ describe('options: contract, price and figures', () => {
     expect(o.lines.every((l) => l.currentPriceDiffers === false)).toBe(true);
     // By hand: taxable 411,250 × 1.35 = 555,187.5 → 555,188; fee 7,500 × 1.35 = 10,125; labor 6 × 9,500 × 1.35 = 76,950;
     // subtotal 642,263; tax 7 % of 555,188 = 38,863.16 → 38,863; total 681,126 cents.
-    expect(o.price).toMatchObject({ materialCostCents: 418750, laborCostCents: 57000, subtotalCents: 642263, taxCents: 38863, totalCents: 681126 });
+    expect(o.price).toMatchObject({
+      materialCostCents: 418750,
+      laborCostCents: 57000,
+      subtotalCents: 642263,
+      taxCents: 38863,
+      totalCents: 681126,
+    });
     expect(o.check.verdict).not.toBe('incompatible');
     expect(o.efficiency).toMatchObject({ source: 'rated-combination', seer2: 15.2, eer2: 11.7, hspf2: 7.8, coolingBtuh: 35000 });
     // GA is in the Southeast; split heat pumps: 14.3 SEER2 / 7.5 HSPF2 (10 CFR 430.32(c)).
     expect(o.regional).toMatchObject({ state: 'GA', meets: true, minimum: { seer2: 14.3, hspf2: 7.5 } });
-    // Default (invented demo) tiers: tier 1 needs 15.2 SEER2 / 11.7 EER2 → met; tier 2 needs 16 SEER2 → not met.
+    // Default (invented demo) tiers: tier 1 needs 15.2 SEER2 / 11 EER2 → met; tier 2 needs 17 SEER2 / 8.5 HSPF2 → not met.
     expect(o.rebateTiers.map((r) => r.met)).toEqual([true, false]);
-    expect(o.rebateTiers[1].missing[0]).toContain('SEER2 16 needed, has 15.2');
+    expect(o.rebateTiers[1].missing[0]).toContain('SEER2 17 needed, has 15.2');
   });
 
   it('when the existing SEER2/HSPF2 are given, then energy and payback follow kWh = Btu/h × h ÷ (rating × 1000)', async () => {
     const jobId = await newJob();
     const { id } = await create(jobId);
-    const res = await request(t.app).get(`/api/jobs/${jobId}/options`).query({ existingSeer2: 10, existingHspf2: 6.8 }).set(est()).expect(200);
+    const res = await request(t.app)
+      .get(`/api/jobs/${jobId}/options`)
+      .query({ existingSeer2: 10, existingHspf2: 6.8 })
+      .set(est())
+      .expect(200);
     expect(res.body).toMatchObject({ chosenOptionId: null });
     const e = (res.body.items as OptionView[]).find((o) => o.id === id)!.energy;
     // By hand, 35,000 Btu/h, 1,000 h each season, 15 ¢/kWh (shop defaults): cooling 3,500 vs 2,302.6 kWh → 52,500 − 34,539 cents;
@@ -119,7 +143,11 @@ describe('options: contract, price and figures', () => {
   it('when a fourth option is added to a job, then 409 with a clear message', async () => {
     const jobId = await newJob();
     for (const name of ['First', 'Second', 'Third']) await create(jobId, { name });
-    const res = await request(t.app).post(`/api/jobs/${jobId}/options`).set(est()).send(optionBody({ name: 'Fourth' })).expect(409);
+    const res = await request(t.app)
+      .post(`/api/jobs/${jobId}/options`)
+      .set(est())
+      .send(optionBody({ name: 'Fourth' }))
+      .expect(409);
     expect(res.body.error).toMatchObject({ code: 'option-limit' });
     expect(res.body.error.message).toContain('at most 3 options');
   });
@@ -129,7 +157,11 @@ describe('options: revisions, snapshot, choice and record', () => {
   it('when a PATCH carries a stale revision, then 409; with the current one, then revision 2', async () => {
     const jobId = await newJob();
     const o = await create(jobId);
-    const ok = await request(t.app).patch(`/api/options/${o.id}`).set(est()).send({ revision: 1, name: 'Renamed', laborHours: 8 }).expect(200);
+    const ok = await request(t.app)
+      .patch(`/api/options/${o.id}`)
+      .set(est())
+      .send({ revision: 1, name: 'Renamed', laborHours: 8 })
+      .expect(200);
     expect(ok.body).toMatchObject({ revision: 2, name: 'Renamed', laborHours: 8 });
     const stale = await request(t.app).patch(`/api/options/${o.id}`).set(est()).send({ revision: 1, name: 'Late' }).expect(409);
     expect(stale.body.error).toMatchObject({ code: 'conflict', details: { revision: 2 } });
@@ -148,10 +180,21 @@ describe('options: revisions, snapshot, choice and record', () => {
     });
     const after = (await request(t.app).get(`/api/options/${o.id}`).set(est()).expect(200)).body as OptionView;
     const outdoor = after.lines.find((l) => l.kind === 'outdoor-unit')!;
-    expect(outdoor).toMatchObject({ unitPriceCents: 310000, currentPriceDiffers: true, currentPrice: { priceCents: 290000, distributor: 'Tarn Supply' } });
+    expect(outdoor).toMatchObject({
+      unitPriceCents: 310000,
+      currentPriceDiffers: true,
+      currentPrice: { priceCents: 290000, distributor: 'Tarn Supply' },
+    });
     expect(after.price.totalCents).toBe(o.price.totalCents);
     expect(after.lines.find((l) => l.kind === 'indoor-coil')!.currentPriceDiffers).toBe(false);
-    const repriced = (await request(t.app).patch(`/api/options/${o.id}`).set(est()).send({ revision: 1, reprice: true }).expect(200)).body as OptionView;
+    // Lines sent back as the view showed them keep their snapshot.
+    const resent = await request(t.app).patch(`/api/options/${o.id}`).set(est()).send({ revision: 1, lines: after.lines }).expect(200);
+    expect(resent.body.lines.find((l: { kind: string }) => l.kind === 'outdoor-unit')).toMatchObject({
+      unitPriceCents: 310000,
+      currentPriceDiffers: true,
+    });
+    const repriced = (await request(t.app).patch(`/api/options/${o.id}`).set(est()).send({ revision: 2, reprice: true }).expect(200))
+      .body as OptionView;
     expect(repriced.lines.find((l) => l.kind === 'outdoor-unit')).toMatchObject({ unitPriceCents: 290000, currentPriceDiffers: false });
     // Typed lines are never re-priced.
     expect(repriced.lines.find((l) => l.kind === 'line-set')).toMatchObject({ unitPriceCents: 450, priceSource: 'typed' });
@@ -198,7 +241,11 @@ describe('repair or replace and shop settings', () => {
     expect(res.body.ruleOfThumb).toMatchObject({ product: 14520, threshold: 5000, exceeds: true, basis: 'common practice (no source)' });
     expect(res.body.options).toHaveLength(1);
     expect(res.body.arithmetic.join(' ')).toContain('12 years × 1,210 dollars = 14,520');
-    await request(t.app).post(`/api/jobs/${jobId}/repair-or-replace`).set(authFor(t, 'tech')).send({ ageYears: 1, repairQuoteCents: 1 }).expect(403);
+    await request(t.app)
+      .post(`/api/jobs/${jobId}/repair-or-replace`)
+      .set(authFor(t, 'tech'))
+      .send({ ageYears: 1, repairQuoteCents: 1 })
+      .expect(403);
   });
 
   it('when an admin raises the threshold, then the same repair reads differently; an estimator may read but not save', async () => {
@@ -212,9 +259,17 @@ describe('repair or replace and shop settings', () => {
       .send({ ...got.body.settings, repairReplaceThreshold: 20000 })
       .expect(200);
     const jobId = await newJob();
-    const res = await request(t.app).post(`/api/jobs/${jobId}/repair-or-replace`).set(est()).send({ ageYears: 12, repairQuoteCents: 121000 }).expect(200);
+    const res = await request(t.app)
+      .post(`/api/jobs/${jobId}/repair-or-replace`)
+      .set(est())
+      .send({ ageYears: 12, repairQuoteCents: 121000 })
+      .expect(200);
     expect(res.body.recommendation).toBe('repair'); // 14,520 < 0.8 × 20,000
     await request(t.app).put('/api/settings/shop').set(authFor(t, 'admin')).send(got.body.settings).expect(200);
-    await request(t.app).put('/api/settings/shop').set(authFor(t, 'admin')).send({ ...got.body.settings, pricing: 'cheap' }).expect(422);
+    await request(t.app)
+      .put('/api/settings/shop')
+      .set(authFor(t, 'admin'))
+      .send({ ...got.body.settings, pricing: 'cheap' })
+      .expect(422);
   });
 });

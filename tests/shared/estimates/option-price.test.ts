@@ -37,7 +37,13 @@ describe('option price', () => {
 
   it('when priced at a 30 % target margin, then the margin on the selling price is 30 %', () => {
     expect(sellFactor('margin', 30)).toBeCloseTo(1 / 0.7, 12); // sell = cost / (1 − g), by definition
-    const p = priceOption([{ quantity: 1, unitPriceCents: 70000, taxable: true }], { laborHours: 0, laborRateCents: 0, pricing: 'margin', pct: 30, taxRatePct: 0 });
+    const p = priceOption([{ quantity: 1, unitPriceCents: 70000, taxable: true }], {
+      laborHours: 0,
+      laborRateCents: 0,
+      pricing: 'margin',
+      pct: 30,
+      taxRatePct: 0,
+    });
     expect(p.subtotalCents).toBe(100000); // 70000 / 0.7, by hand
     expect(p.grossMarginPct).toBe(30);
   });

@@ -2,7 +2,14 @@ import { describe, expect, it } from 'vitest';
 import { adviseRepairOrReplace } from '../../../shared/estimates/repair-or-replace';
 
 // Age × repair dollars against a threshold of 5,000: common practice (no source). Arithmetic by hand.
-const facts = { ageYears: 12, repairQuoteCents: 85000, refrigerant: 'R-22', refrigerantLbs: 4, refrigerantCentsPerLb: 9000, threshold: 5000 };
+const facts = {
+  ageYears: 12,
+  repairQuoteCents: 85000,
+  refrigerant: 'R-22',
+  refrigerantLbs: 4,
+  refrigerantCentsPerLb: 9000,
+  threshold: 5000,
+};
 
 describe('repair or replace', () => {
   it('when a 12-year-old system needs $850 plus 4 lb at $90, then 12 × 1,210 = 14,520 says replace', () => {
