@@ -51,7 +51,19 @@ async function pricedContent(
   state: string,
   input: OptionInput,
 ): Promise<{ content: Omit<OptionInput, 'lines'>; lines: StoredLine[] }> {
-  const { lines = [], ...content } = input;
+  const { lines = [], ...given } = input;
+  // The shop's terms are copied in when saved, so a later change of shop settings does not move a saved price.
+  const { settings } = await getShopSettings(ctx);
+  const content = {
+    ...given,
+    laborHours: given.laborHours ?? 0,
+    laborRateCents: given.laborRateCents ?? settings.laborRateCents,
+    taxRatePct: given.taxRatePct ?? settings.taxRatePct,
+  };
+  if (content.markupPct === undefined && content.targetMarginPct === undefined) {
+    if (settings.pricing === 'margin') content.targetMarginPct = settings.targetMarginPct;
+    else content.markupPct = settings.markupPct;
+  }
   const { pairing } = await checkOption(ctx, content, state);
   if (pairing.outdoor.kept)
     throw new AppError('validation-failed', 'The request did not pass validation.', 422, [

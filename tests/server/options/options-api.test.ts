@@ -71,6 +71,12 @@ describe('options: roles and errors', () => {
       .expect(422);
     expect(res.body.error.code).toBe('validation-failed');
   });
+  it('when the energy parameters are not numbers in range or the id is not canonical, then 400', async () => {
+    await request(t.app).get(`/api/jobs/${f.jobId}/options`).query({ existingSeer2: 'abc' }).set(est()).expect(400);
+    await request(t.app).get(`/api/jobs/${f.jobId}/options`).query({ centsPerKwh: -1 }).set(est()).expect(400);
+    await request(t.app).get(`/api/jobs/${f.jobId}/options`).query({ existingHeatPump: 'maybe' }).set(est()).expect(400);
+    await request(t.app).get('/api/jobs/0x1/options').set(est()).expect(400);
+  });
   it('when a line has no price and its model is on no price list, then 422 naming the line', async () => {
     const jobId = await newJob();
     const res = await request(t.app)
@@ -271,5 +277,28 @@ describe('repair or replace and shop settings', () => {
       .set(authFor(t, 'admin'))
       .send({ ...got.body.settings, pricing: 'cheap' })
       .expect(422);
+  });
+});
+
+describe('options: shop terms are copied in when saved', () => {
+  it('when an option takes the shop defaults and the shop later raises its markup, then the saved price does not move', async () => {
+    const jobId = await newJob();
+    const o = await create(jobId, { markupPct: undefined, laborRateCents: undefined, taxRatePct: undefined });
+    // Shop defaults (shared/estimates/shop-defaults.ts): 35 % markup, $95/h labor, 0 % tax.
+    expect(o).toMatchObject({ markupPct: 35, laborRateCents: 9500, taxRatePct: 0 });
+    const got = await request(t.app).get('/api/settings/shop').set(est()).expect(200);
+    await request(t.app)
+      .put('/api/settings/shop')
+      .set(authFor(t, 'admin'))
+      .send({ ...got.body.settings, markupPct: 50, laborRateCents: 12000 })
+      .expect(200);
+    try {
+      const after = (await request(t.app).get(`/api/options/${o.id}`).set(est()).expect(200)).body as OptionView;
+      expect(after.price.totalCents).toBe(o.price.totalCents);
+      const fresh = await create(jobId, { markupPct: undefined, laborRateCents: undefined });
+      expect(fresh).toMatchObject({ markupPct: 50, laborRateCents: 12000 });
+    } finally {
+      await request(t.app).put('/api/settings/shop').set(authFor(t, 'admin')).send(got.body.settings).expect(200);
+    }
   });
 });
