@@ -83,7 +83,7 @@ export function CoilsScreen() {
             {items.map((item) => (
               <View key={item.coil.id}>
                 <CoilRow item={item} wide={wide} open={openId === item.coil.id} onPress={() => setOpenId(openId === item.coil.id ? undefined : item.coil.id)} />
-                {openId === item.coil.id ? <CoilDetail item={item} state={search.state} /> : null}
+                {openId === item.coil.id ? <CoilDetail item={item} state={search.state} outdoor={outdoor} airHandler={airHandler} /> : null}
               </View>
             ))}
           </View>

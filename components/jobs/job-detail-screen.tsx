@@ -6,6 +6,7 @@ import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
 import { useRecordOutbox } from '@/hooks/record-outbox';
 import { useJob, useUpdateJob } from '@/hooks/use-jobs';
+import { useCurrentUser } from '@/hooks/use-session';
 import { useJobAttachments, useJobSystems } from '@/hooks/use-systems';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
@@ -23,6 +24,7 @@ export function JobDetailScreen({ id }: { id: number }) {
   const update = useUpdateJob(id);
   const [editing, setEditing] = useState(false);
   const waiting = useRecordOutbox().items.filter((i) => i.kind === 'create' && i.jobId === id);
+  const user = useCurrentUser();
   if (job.isPending) return <ActivityIndicator style={styles.loading} accessibilityLabel="Loading the job" />;
   if (job.isError) {
     return (
@@ -95,6 +97,14 @@ export function JobDetailScreen({ id }: { id: number }) {
           </Card>
         ))}
       </SectionCard>
+      {user.role !== 'tech' ? (
+        <SectionCard title="Options for the customer" testID="job-options">
+          <Text variant="bodyMedium">Up to three priced, checked options side by side, a repair-or-replace view, and the proposal to send.</Text>
+          <Button mode="contained" icon="scale-balance" onPress={() => router.push(`/jobs/options/${id}`)} contentStyle={styles.button} style={styles.start} testID="open-options">
+            Open options
+          </Button>
+        </SectionCard>
+      ) : null}
       <SectionCard title="Photos">
         {photos.data?.length === 0 ? <Text variant="bodyMedium">No photos yet: add them on a record.</Text> : null}
         <View style={styles.photos}>{photos.data?.map((p) => <PhotoThumb key={p.id} photo={p} />)}</View>
@@ -118,5 +128,6 @@ const styles = StyleSheet.create({
   edit: { alignSelf: 'flex-start' },
   row: { flexDirection: 'row', gap: spacing.md, alignItems: 'center', minHeight: TOUCH_TARGET },
   rowText: { flex: 1, gap: 2 },
+  start: { alignSelf: 'flex-start' },
   photos: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
 });

@@ -1,7 +1,6 @@
 import type { Page } from 'playwright-core';
-import { expect } from 'vitest';
+import { expect, inject } from 'vitest';
 import { account, signIn } from './browser';
-import { inject } from 'vitest';
 import { adminToken, importCsv } from './api-setup';
 
 /**
@@ -30,8 +29,8 @@ const OUTDOOR_CSV = [
 const COIL_CSV = ['model,min_tons,max_tons,refrigerants,metering_type,metering_refrigerant,metering_bidirectional', `${COIL},2.5,3.5,R-22,txv,R-22,yes`].join('\n');
 const PREVIEW_CSV = ['model,system_type,refrigerant,nominal_tons', 'AUD-PREVIEW-1,ac,R-454B,2', 'AUD-PREVIEW-2,ac,R-454B,not-a-number'].join('\n');
 
-/** The job and system record the audits open, made through the API by seedAuditData. */
-const seeded = { jobId: 0, systemId: 0 };
+/** The job, system record and options job the audits open, made through the API by seedAuditData. */
+const seeded = { jobId: 0, systemId: 0, optionsJobId: 0 };
 
 async function api<T>(token: string, method: string, url: string, body?: unknown): Promise<T> {
   const res = await fetch(`${inject('baseUrl')}${url}`, {
@@ -52,7 +51,7 @@ async function catalogId(token: string, kind: string, model: string): Promise<nu
 
 /**
  * Puts the audits' parts in the catalog, and one job with a system record whose report is sent
- * (so the Outbox has a message). Each test file runs it once.
+ * (so the Outbox has a message), and a job with two priced options. Each test file runs it once.
  */
 export async function seedAuditData(): Promise<void> {
   const token = await adminToken();
@@ -74,6 +73,20 @@ export async function seedAuditData(): Promise<void> {
   await api(token, 'POST', `/api/systems/${record.id}/send`, { to: 'audit-homeowner@example.test' });
   seeded.jobId = job.id;
   seeded.systemId = record.id;
+  const outdoorId = await catalogId(token, 'outdoor-units', OUTDOOR);
+  const optionsJob = await api<{ id: number }>(token, 'POST', '/api/jobs', { customerName: 'Audit Household', siteAddress: '3 Audit Way', state: 'GA', contactEmail: 'audit@example.test' });
+  seeded.optionsJobId = optionsJob.id;
+  for (const [name, cents, hours] of [
+    ['Outdoor unit only', 310_000, 6],
+    ['Outdoor unit and line set', 310_000, 9],
+  ] as const) {
+    await api(token, 'POST', `/api/jobs/${optionsJob.id}/options`, {
+      name,
+      outdoor: { id: outdoorId },
+      lines: [{ kind: 'outdoor-unit', model: OUTDOOR, quantity: 1, unitPriceCents: cents }],
+      laborHours: hours,
+    });
+  }
 }
 
 async function visible(page: Page, testId: string) {
@@ -254,6 +267,15 @@ export const AUDIT_SCREENS: AuditScreen[] = [
       await page.goto('/admin/outbox');
       await visible(page, 'outbox-list');
       await expect.poll(() => page.getByTestId('outbox-list').textContent(), { timeout: 15_000 }).toContain('audit-homeowner@example.test');
+    },
+  },
+  {
+    name: 'job-options',
+    role: 'estimator',
+    open: async (page) => {
+      await page.goto(`/jobs/options/${seeded.optionsJobId}`);
+      await visible(page, 'option-cards');
+      await visible(page, 'option-card-Outdoor unit only');
     },
   },
   {
