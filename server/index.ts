@@ -3,7 +3,7 @@ import { seedDemoIfEmpty } from '../seed/demo';
 import { createApp } from './app';
 import type { AppContext } from './context';
 import { openDatabase } from './db/data-source';
-import { loadConfig } from './env';
+import { databaseLabel, databaseTarget, loadConfig } from './env';
 import { createLogger } from './lib/logger';
 import { startLocalMailService } from './mail/local-mail-service';
 
@@ -11,7 +11,8 @@ import { startLocalMailService } from './mail/local-mail-service';
 async function main() {
   const config = loadConfig();
   const logger = createLogger(config);
-  const dataSource = await openDatabase(config.databasePath);
+  const dataSource = await openDatabase(databaseTarget(config));
+  logger.info(`database: ${databaseLabel(config)}`);
   const ctx: AppContext = { dataSource, config, logger };
   if (config.demo && (await seedDemoIfEmpty(ctx))) logger.info('demo data loaded');
   // Demo mode with no SMTP host: reports go to a local mail service that keeps them under the data dir.

@@ -1,15 +1,30 @@
 import 'reflect-metadata';
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
+import pg from 'pg';
 import { DataSource } from 'typeorm';
 import { entities } from './entities';
 import { migrations } from './migrations';
 import { lockPlainTransactions } from './write-transaction';
 
-/** The SQLite data source (WAL, foreign keys on). Migrations run at start; no synchronize. */
-export function createDataSource(databasePath: string): DataSource {
+/** True when the target is a PostgreSQL URL rather than a SQLite file path. */
+export function isPostgresUrl(target: string): boolean {
+  return /^postgres(ql)?:\/\//i.test(target);
+}
+
+/**
+ * The data source for a SQLite file path (WAL, foreign keys on) or a `postgres://` URL. Migrations
+ * run at start (openDatabase); no synchronize.
+ */
+export function createDataSource(target: string): DataSource {
+  const dataSource = isPostgresUrl(target) ? postgresDataSource(target) : sqliteDataSource(target);
+  lockPlainTransactions(dataSource);
+  return dataSource;
+}
+
+function sqliteDataSource(databasePath: string): DataSource {
   if (databasePath !== ':memory:') mkdirSync(path.dirname(databasePath), { recursive: true });
-  const dataSource = new DataSource({
+  return new DataSource({
     type: 'better-sqlite3',
     database: databasePath,
     enableWAL: databasePath !== ':memory:',
@@ -22,13 +37,30 @@ export function createDataSource(databasePath: string): DataSource {
       db.pragma('busy_timeout = 5000');
     },
   });
-  lockPlainTransactions(dataSource);
-  return dataSource;
 }
 
-/** Opens the database and brings its schema up to date. */
-export async function openDatabase(databasePath: string): Promise<DataSource> {
-  const dataSource = createDataSource(databasePath);
+// COUNT(*) and SUM() come back from PostgreSQL as int8, which pg hands over as strings; our counts
+// stay far below 2^53, so read them as numbers like SQLite does.
+pg.types.setTypeParser(pg.types.builtins.INT8, (value: string) => Number(value));
+
+/** Connections per instance: a request holds one only for its statements (the write lock queues in process first). */
+const POSTGRES_POOL_SIZE = 10;
+
+function postgresDataSource(url: string): DataSource {
+  return new DataSource({
+    type: 'postgres',
+    url,
+    entities,
+    migrations,
+    synchronize: false,
+    migrationsRun: false,
+    extra: { max: POSTGRES_POOL_SIZE },
+  });
+}
+
+/** Opens the database (a SQLite file path or a PostgreSQL URL) and brings its schema up to date. */
+export async function openDatabase(target: string): Promise<DataSource> {
+  const dataSource = createDataSource(target);
   await dataSource.initialize();
   await dataSource.runMigrations({ transaction: 'each' });
   return dataSource;

@@ -5,7 +5,7 @@ import { KINDS } from '../catalog/catalog-kinds';
 import { PriceEntry } from '../catalog/price-entry.entity';
 import { ImportChange } from './import-change.entity';
 import type { ImportPlan } from './import-plan';
-import { sqliteHandle } from '../db/sqlite-handle';
+import { dialectOf } from '../db/dialect';
 
 const BATCH = 500;
 
@@ -33,7 +33,7 @@ export async function applyCatalogPlan(manager: EntityManager, kind: CatalogKind
   for (const batch of chunks(changes)) await manager.insert(ImportChange, batch);
 }
 
-/** Writes a price plan for one distributor; on SQLite through prepared statements (100k rows in well under a second). */
+/** Writes a price plan for one distributor through the database's bulk path (prepared statements on SQLite, multi-row statements on PostgreSQL). */
 export async function applyPricePlan(manager: EntityManager, distributorId: number, plan: ImportPlan, importId: number): Promise<void> {
   const entry = (v: Record<string, unknown>) => ({
     distributorId,
@@ -49,28 +49,21 @@ export async function applyPricePlan(manager: EntityManager, distributorId: numb
     const { id, ...before } = existing;
     return { importId, entity: 'price_entries', rowId: id, before: JSON.stringify(before), beforeImportId: existing.importId };
   });
-  const raw = sqliteHandle(manager);
-  if (raw) {
-    const insert = raw.prepare(
-      'INSERT INTO price_entries (distributorId, model, normalizedModel, priceCents, currency, effectiveFrom, description, importId) VALUES (?, ?, ?, ?, ?, ?, ?, ?)',
-    );
-    for (const r of plan.inserts) {
-      const e = entry(r.values);
-      insert.run(e.distributorId, e.model, e.normalizedModel, e.priceCents, e.currency, e.effectiveFrom, e.description, e.importId);
-    }
-    const update = raw.prepare('UPDATE price_entries SET model = ?, priceCents = ?, currency = ?, description = COALESCE(?, description), importId = ? WHERE id = ?');
-    for (const { row, existing } of plan.updates) {
+  const dialect = dialectOf(manager);
+  const insertColumns = ['distributorId', 'model', 'normalizedModel', 'priceCents', 'currency', 'effectiveFrom', 'description', 'importId'] as const;
+  await dialect.insertRows(manager, PriceEntry, [...insertColumns], plan.inserts.map((r) => {
+    const e = entry(r.values);
+    return insertColumns.map((c) => e[c]);
+  }));
+  await dialect.updateRowsById(
+    manager,
+    PriceEntry,
+    ['model', 'priceCents', 'currency', 'description', 'importId'],
+    plan.updates.map(({ row, existing }) => {
       const e = entry(row.values);
-      update.run(e.model, e.priceCents, e.currency, e.description, importId, existing.id);
-    }
-    const change = raw.prepare('INSERT INTO import_changes (importId, entity, rowId, before, beforeImportId) VALUES (?, ?, ?, ?, ?)');
-    for (const c of changes) change.run(c.importId, c.entity, c.rowId, c.before, c.beforeImportId);
-    return;
-  }
-  for (const batch of chunks(plan.inserts)) await manager.insert(PriceEntry, batch.map((r) => entry(r.values)));
-  for (const { row, existing } of plan.updates) {
-    const e = entry(row.values);
-    await manager.update(PriceEntry, existing.id, { model: e.model, priceCents: e.priceCents, currency: e.currency, importId, ...(e.description !== null ? { description: e.description } : {}) });
-  }
-  for (const batch of chunks(changes)) await manager.insert(ImportChange, batch);
+      return [existing.id, e.model, e.priceCents, e.currency, e.description, importId];
+    }),
+    ['description'],
+  );
+  await dialect.insertRows(manager, ImportChange, ['importId', 'entity', 'rowId', 'before', 'beforeImportId'], changes.map((c) => [c.importId, c.entity, c.rowId, c.before, c.beforeImportId]));
 }

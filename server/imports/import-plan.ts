@@ -47,6 +47,9 @@ async function catalogModels(manager: EntityManager): Promise<Set<string>> {
   return models;
 }
 
+// Selected by property name so the raw rows keep camelCase keys on PostgreSQL too (TypeORM quotes them).
+const PRICE_PLAN_COLUMNS = ['normalizedModel', 'effectiveFrom', 'priceCents', 'currency', 'description', 'model', 'importId'] as const;
+
 /**
  * Plans a price import for one distributor (null: not yet created, so nothing exists). A blank
  * description keeps the stored one, so it is not a change.
@@ -55,11 +58,7 @@ export async function planPrices(manager: EntityManager, distributorId: number |
   const existing: Row[] =
     distributorId === null
       ? []
-      : await manager
-          .getRepository(PriceEntry)
-          .createQueryBuilder('p')
-          .select(['p.id AS id', 'p.normalizedModel AS normalizedModel', 'p.effectiveFrom AS effectiveFrom', 'p.priceCents AS priceCents'])
-          .addSelect(['p.currency AS currency', 'p.description AS description', 'p.model AS model', 'p.importId AS importId'])
+      : await PRICE_PLAN_COLUMNS.reduce((qb, c) => qb.addSelect(`p.${c}`, c), manager.getRepository(PriceEntry).createQueryBuilder('p').select('p.id', 'id'))
           .where('p.distributorId = :distributorId', { distributorId })
           .getRawMany();
   const byKey = new Map(existing.map((e) => [`${e.normalizedModel}|${e.effectiveFrom}`, e]));

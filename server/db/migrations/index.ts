@@ -4,6 +4,7 @@ import { RuleSettings1764800000000 } from './1764800000000-rule-settings';
 import { EngineSecondPass1764900000000 } from './1764900000000-engine-second-pass';
 import { ImportBounds1764950000000 } from './1764950000000-import-bounds';
 import { Jobs1765000000000 } from './1765000000000-jobs';
+import { CatalogVersions1765300000000 } from './1765300000000-catalog-versions';
 
 /** Every migration, in order. Add new ones at the end (one file per change, named by timestamp). */
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   EngineSecondPass1764900000000,
   ImportBounds1764950000000,
   Jobs1765000000000,
+  CatalogVersions1765300000000,
 ];
