@@ -6,11 +6,11 @@ import { createInterface } from 'node:readline';
  * Starts a bench server script (bench/<file>) in a process of its own, under tsx with the server's
  * tsconfig, and waits for the one JSON line it prints when it is ready (port, tokens, fixtures).
  */
-export async function startBenchServer<T>(file: string): Promise<{ child: ChildProcess; info: T }> {
+export async function startBenchServer<T>(file: string, env: Record<string, string> = {}): Promise<{ child: ChildProcess; info: T }> {
   const root = path.resolve(__dirname, '..');
   const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, file)], {
     cwd: root,
-    env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json') },
+    env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json'), ...env },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
   try {
