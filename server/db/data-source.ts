@@ -62,6 +62,27 @@ function postgresDataSource(url: string): DataSource {
 export async function openDatabase(target: string): Promise<DataSource> {
   const dataSource = createDataSource(target);
   await dataSource.initialize();
-  await dataSource.runMigrations({ transaction: 'each' });
+  if (dataSource.options.type === 'postgres') await migrateAlone(dataSource);
+  else await dataSource.runMigrations({ transaction: 'each' });
   return dataSource;
+}
+
+// Any constant; every instance uses the same one.
+const MIGRATION_LOCK_KEY = 0x54616e6d6967;
+
+/**
+ * Several instances starting at once on one PostgreSQL database would each run the pending migrations
+ * (TypeORM takes no lock): the first holds a session advisory lock while it migrates, the others wait
+ * and then find nothing left to do.
+ */
+async function migrateAlone(dataSource: DataSource): Promise<void> {
+  const runner = dataSource.createQueryRunner();
+  await runner.connect();
+  try {
+    await runner.query('SELECT pg_advisory_lock($1)', [MIGRATION_LOCK_KEY]);
+    await dataSource.runMigrations({ transaction: 'each' });
+  } finally {
+    await runner.query('SELECT pg_advisory_unlock($1)', [MIGRATION_LOCK_KEY]).catch(() => undefined);
+    await runner.release();
+  }
 }

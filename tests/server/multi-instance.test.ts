@@ -1,13 +1,16 @@
 import type { Express } from 'express';
+import pg from 'pg';
 import pino from 'pino';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
+import { migrations } from '../../server/db/migrations';
 import { databaseTarget } from '../../server/env';
 import { createTestApp, TEST_PASSWORD, type TestApp } from '../helpers/test-app';
-import { onPostgres } from '../helpers/test-database';
+import { sql } from '../helpers/sql';
+import { databaseUrl, onPostgres, testPostgresUrl } from '../helpers/test-database';
 
 // Two server instances on one PostgreSQL database (issue 13): A is a test app, B a second app with its
 // own connection pool, in-memory catalog index and rate limits, sharing only the database and the
@@ -79,4 +82,26 @@ describe.skipIf(!onPostgres)('two instances on one PostgreSQL', () => {
     const list = await request(b).get('/api/catalog/outdoor-units').query({ q: 'MI-', pageSize: 100 }).set('Authorization', `Bearer ${admin}`).expect(200);
     expect(models(list).sort()).toEqual(['MI-A-1', 'MI-B-1', 'MI-C-1']);
   });
+
+  it('when two instances start at once on an empty database, then both open and each migration ran once', async () => {
+    const serverUrl = testPostgresUrl()!;
+    const name = `tandem_empty_${process.pid}_${Date.now()}`;
+    const admin = new pg.Client({ connectionString: serverUrl });
+    await admin.connect();
+    try {
+      await admin.query(`CREATE DATABASE "${name}"`);
+      const url = databaseUrl(serverUrl, name);
+      const both = await Promise.all([openDatabase(url), openDatabase(url)]);
+      try {
+        const ran = await sql<{ name: string }>(both[1], 'SELECT name FROM migrations ORDER BY id');
+        expect(ran.map((r) => r.name)).toEqual(migrations.map((m) => m.name));
+      } finally {
+        await Promise.all(both.map((d) => d.destroy()));
+      }
+    } finally {
+      await admin.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);
+      await admin.end();
+    }
+  });
 });
+
