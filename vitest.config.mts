@@ -1,7 +1,19 @@
 import { defineConfig } from 'vitest/config';
+import { postgresBinDir } from './scripts/postgres-cluster.mjs';
 
-// One config, three projects: pure unit tests, API tests in-process, and browser tests that
-// build the web export once and drive it in Debian's Chromium.
+// The API suite runs twice when PostgreSQL is at hand (installed, or TANDEM_TEST_DATABASE_URL given):
+// once on SQLite (`api`) and once on PostgreSQL (`api-pg`). Without it, only on SQLite.
+const withPostgres = Boolean(process.env.TANDEM_TEST_DATABASE_URL) || postgresBinDir() !== null;
+
+const apiTest = {
+  include: ['tests/server/**/*.test.ts'],
+  environment: 'node' as const,
+  setupFiles: ['tests/helpers/setup-reflect.ts'],
+  testTimeout: 30000,
+};
+
+// One config, up to four projects: pure unit tests, API tests in-process (on each database), and
+// browser tests that build the web export once and drive it in Debian's Chromium.
 export default defineConfig({
   resolve: { tsconfigPaths: true },
   test: {
@@ -13,14 +25,16 @@ export default defineConfig({
       },
       {
         extends: true,
-        test: {
-          name: 'api',
-          include: ['tests/server/**/*.test.ts'],
-          environment: 'node',
-          setupFiles: ['tests/helpers/setup-reflect.ts'],
-          testTimeout: 30000,
-        },
+        test: { name: 'api', ...apiTest, env: { TANDEM_TEST_ON_SQLITE: '1' } },
       },
+      ...(withPostgres
+        ? [
+            {
+              extends: true,
+              test: { name: 'api-pg', ...apiTest, globalSetup: ['tests/helpers/postgres-global-setup.ts'] },
+            },
+          ]
+        : []),
       {
         extends: true,
         test: {

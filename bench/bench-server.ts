@@ -8,13 +8,13 @@ import { pathToFileURL } from 'node:url';
  * `npm start` runs the server (scripts/bundle-server.mjs), and waits for the one JSON line it prints
  * when it is ready (port, tokens, fixtures).
  */
-export async function startBenchServer<T>(file: string): Promise<{ child: ChildProcess; info: T }> {
+export async function startBenchServer<T>(file: string, env: Record<string, string> = {}): Promise<{ child: ChildProcess; info: T }> {
   const root = path.resolve(__dirname, '..');
   const { bundleServer } = (await import(pathToFileURL(path.join(root, 'scripts/bundle-server.mjs')).href)) as {
     bundleServer(entry: string, outfile: string): Promise<string>;
   };
   const bundle = await bundleServer(`bench/${file}`, `build/bench/${file.replace(/\.ts$/, '.cjs')}`);
-  const child = spawn(process.execPath, [bundle], { cwd: root, env: process.env, stdio: ['ignore', 'pipe', 'inherit'] });
+  const child = spawn(process.execPath, [bundle], { cwd: root, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'inherit'] });
   try {
     const line = await new Promise<string>((resolve, reject) => {
       createInterface({ input: child.stdout! }).once('line', resolve);

@@ -1,7 +1,10 @@
 /**
- * The server side of bench/checks-api.bench.ts, run as its own process (as in production) so the load
- * generator does not share its event loop: a temp database with a few invented catalog items, then
- * one line of JSON on stdout with the port, a token and a realistic check body.
+ * The server side of bench/checks-api.bench.ts and bench/databases.bench.ts, run as its own process
+ * (as in production) so the load generator does not share its event loop: a temp database with a few
+ * invented catalog items, then one line of JSON on stdout with the port, a token and a realistic check body.
+ * BENCH_DATABASE_URL runs it on that (empty) PostgreSQL database instead of a temp SQLite file; with
+ * BENCH_JOIN=1 and BENCH_JWT_SECRET it joins a database another bench server already seeded (a second
+ * instance).
  */
 import 'reflect-metadata';
 import { randomBytes } from 'node:crypto';
@@ -14,7 +17,7 @@ import { createApp } from '../server/app';
 import { signToken } from '../server/auth/tokens';
 import type { AppContext } from '../server/context';
 import { openDatabase } from '../server/db/data-source';
-import type { AppConfig } from '../server/env';
+import { databaseTarget, type AppConfig } from '../server/env';
 import { uploadImport } from '../server/imports/imports.service';
 import { User } from '../server/users/user.entity';
 
@@ -35,12 +38,28 @@ async function seedCatalog(ctx: AppContext, userId: number) {
 
 async function main() {
   const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-bench-checks-'));
-  const config: AppConfig = { port: 0, databasePath: path.join(dir, 'bench.sqlite'), dataDir: dir, demo: false, jwtSecret: randomBytes(32).toString('hex'), webDir: process.env.TANDEM_WEB_DIR ?? path.join(dir, 'web'), logLevel: 'silent', signInLimit: 10_000 };
-  const dataSource = await openDatabase(config.databasePath);
+  const config: AppConfig = {
+    port: 0,
+    databasePath: path.join(dir, 'bench.sqlite'),
+    databaseUrl: process.env.BENCH_DATABASE_URL || undefined,
+    dataDir: dir,
+    demo: false,
+    jwtSecret: process.env.BENCH_JWT_SECRET || randomBytes(32).toString('hex'),
+    webDir: process.env.TANDEM_WEB_DIR ?? path.join(dir, 'web'),
+    logLevel: 'silent',
+    signInLimit: 10_000,
+  };
+  const dataSource = await openDatabase(databaseTarget(config));
   const ctx: AppContext = { dataSource, config, logger: pino({ level: 'silent' }) };
   const users = dataSource.getRepository(User);
-  const tech = await users.save(users.create({ email: 'bench-tech@test.invalid', name: 'Bench tech', role: 'tech', passwordHash: 'x', active: true }));
-  await seedCatalog(ctx, tech.id);
+  const join = process.env.BENCH_JOIN === '1';
+  const benchUser = async (role: 'tech' | 'admin') => {
+    const email = `bench-${role}@test.invalid`;
+    if (join) return users.findOneByOrFail({ email });
+    return users.save(users.create({ email, name: `Bench ${role}`, role, passwordHash: 'x', active: true }));
+  };
+  const tech = await benchUser('tech');
+  if (!join) await seedCatalog(ctx, tech.id);
   const ids = async (table: string) => ((await dataSource.query(`SELECT id FROM ${table} ORDER BY id`)) as { id: number }[])[0].id;
   const body = {
     scope: 'new-system',
@@ -55,9 +74,9 @@ async function main() {
   const server = createApp(ctx).listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   const token = signToken(config.jwtSecret, { userId: tech.id, role: 'tech' });
-  const admin = await users.save(users.create({ email: 'bench-admin@test.invalid', name: 'Bench admin', role: 'admin', passwordHash: 'x', active: true }));
+  const admin = await benchUser('admin');
   const adminToken = signToken(config.jwtSecret, { userId: admin.id, role: 'admin' });
-  process.stdout.write(`${JSON.stringify({ port: (server.address() as AddressInfo).port, token, adminToken, body })}\n`);
+  process.stdout.write(`${JSON.stringify({ port: (server.address() as AddressInfo).port, token, adminToken, body, jwtSecret: config.jwtSecret })}\n`);
   process.on('SIGTERM', () => {
     server.close(() => void dataSource.destroy().finally(() => {
       rmSync(dir, { recursive: true, force: true });

@@ -9,11 +9,12 @@ import { uploadImport } from '../server/imports/imports.service';
 
 /**
  * One price import end to end through the service (parse, validate, plan, upsert in one
- * transaction), in its own process; prints { seconds, peakRssMb, rows } as JSON.
+ * transaction), in its own process, on SQLite or PostgreSQL; prints { seconds, peakRssMb, rows } as JSON.
  */
 async function main() {
-  const [dir, file] = process.argv.slice(2);
-  const ds = await openDatabase(path.join(dir, 'real.sqlite'));
+  // A third argument runs it on that (empty) PostgreSQL database instead of a temp SQLite file.
+  const [dir, file, databaseUrl] = process.argv.slice(2);
+  const ds = await openDatabase(databaseUrl ?? path.join(dir, 'real.sqlite'));
   const config = { databasePath: path.join(dir, 'real.sqlite'), dataDir: dir, jwtSecret: 'x'.repeat(32), webDir: dir, logLevel: 'silent', signInLimit: 10, port: 0, demo: false } as AppConfig;
   const ctx: AppContext = { dataSource: ds, config, logger: pino({ level: 'silent' }) };
   let peak = process.memoryUsage().rss;

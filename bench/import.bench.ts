@@ -10,7 +10,7 @@ import { round, type Measure } from './measure';
 const ROWS = 100_000;
 
 /** A distributor-style price file: quoted descriptions, "$1,234.50" prices, a few effective dates. */
-function priceCsv(rows: number): string {
+export function priceCsv(rows: number): string {
   const lines = ['model,price,effective_from,description'];
   for (let i = 0; i < rows; i++) {
     const dollars = 100 + ((i * 7919) % 500000) / 100;
@@ -43,10 +43,10 @@ async function baseline(dir: string, file: string): Promise<number> {
 }
 
 /** The real import in a process of its own, so its peak RSS is the import's alone (bench/import-run.ts). */
-function realImport(dir: string, file: string): Promise<{ seconds: number; peakRssMb: number; rows: number }> {
+export function realImport(dir: string, file: string, databaseUrl?: string): Promise<{ seconds: number; peakRssMb: number; rows: number }> {
   const root = path.resolve(__dirname, '..');
   return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'import-run.ts'), dir, file], {
+    const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'import-run.ts'), dir, file, ...(databaseUrl ? [databaseUrl] : [])], {
       cwd: root,
       env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json') },
       stdio: ['ignore', 'pipe', 'inherit'],

@@ -4,6 +4,7 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.routes';
+import { catalogVersionScope } from './catalog/catalog-version';
 import type { AppContext } from './context';
 import { defaultEmptyBody, requireKnownBodyType } from './lib/body-type';
 import { apiNotFound, errorMiddleware } from './lib/errors';
@@ -43,7 +44,7 @@ export function createApp(ctx: AppContext): Express {
     }),
   );
   if (ctx.config.corsOrigin) app.use('/api', devCors(ctx.config.corsOrigin));
-  app.use('/api', requireKnownBodyType, express.json({ limit: '1mb' }), defaultEmptyBody);
+  app.use('/api', requireKnownBodyType, express.json({ limit: '1mb' }), defaultEmptyBody, catalogVersionScope);
 
   app.get('/api/health', (_req, res) => {
     res.json({ status: 'ok' });

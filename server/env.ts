@@ -11,6 +11,11 @@ import { StorageEnvShape, storageConfigOf, type StorageConfig } from './storage/
 const EnvSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(8080),
   DATABASE_PATH: z.string().min(1).default('data/tandem.sqlite'),
+  /** Set: PostgreSQL at this URL instead of the SQLite file at DATABASE_PATH. */
+  DATABASE_URL: z.preprocess(
+    (value) => (value === '' ? undefined : value),
+    z.string().regex(/^postgres(ql)?:\/\/[^\s]+$/, 'must be a postgres:// or postgresql:// URL').optional(),
+  ),
   TANDEM_DATA_DIR: z.string().min(1).default('data'),
   TANDEM_DEMO: z.enum(['0', '1']).default('0'),
   TANDEM_JWT_SECRET: z.string().min(16).optional(),
@@ -31,6 +36,8 @@ const EnvSchema = z.object({
 export interface AppConfig {
   port: number;
   databasePath: string;
+  /** PostgreSQL connection URL; absent means the SQLite file at databasePath. */
+  databaseUrl?: string;
   dataDir: string;
   demo: boolean;
   jwtSecret: string;
@@ -106,6 +113,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   return {
     port: e.PORT,
     databasePath: e.DATABASE_PATH === ':memory:' ? e.DATABASE_PATH : path.resolve(e.DATABASE_PATH),
+    databaseUrl: e.DATABASE_URL,
     dataDir,
     demo: e.TANDEM_DEMO === '1',
     jwtSecret: e.TANDEM_JWT_SECRET ?? loadOrCreateSecret(dataDir),
@@ -119,4 +127,16 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     localMailPort: e.TANDEM_LOCAL_MAIL_PORT,
     storage: storageConfigOf(e),
   };
+}
+
+/** What openDatabase opens for this configuration: the PostgreSQL URL when set, else the SQLite file. */
+export function databaseTarget(config: Pick<AppConfig, 'databasePath' | 'databaseUrl'>): string {
+  return config.databaseUrl ?? config.databasePath;
+}
+
+/** A short description of the database for logs (no password). */
+export function databaseLabel(config: Pick<AppConfig, 'databasePath' | 'databaseUrl'>): string {
+  if (!config.databaseUrl) return `SQLite ${config.databasePath}`;
+  const url = new URL(config.databaseUrl);
+  return `PostgreSQL ${url.hostname}${url.port ? `:${url.port}` : ''}${url.pathname}`;
 }

@@ -3,7 +3,7 @@ import { seedDemoIfEmpty } from '../seed/demo';
 import { createApp } from './app';
 import type { AppContext } from './context';
 import { openDatabase } from './db/data-source';
-import { loadConfig } from './env';
+import { databaseLabel, databaseTarget, loadConfig } from './env';
 import { createLogger } from './lib/logger';
 import { startLocalMailService } from './mail/local-mail-service';
 import { verifyStorage } from './storage/storage-for';
@@ -12,7 +12,8 @@ import { verifyStorage } from './storage/storage-for';
 async function main() {
   const config = loadConfig();
   const logger = createLogger(config);
-  const dataSource = await openDatabase(config.databasePath);
+  const dataSource = await openDatabase(databaseTarget(config));
+  logger.info(`database: ${databaseLabel(config)}`);
   const ctx: AppContext = { dataSource, config, logger };
   await verifyStorage(ctx);
   if (config.demo && (await seedDemoIfEmpty(ctx))) logger.info('demo data loaded');

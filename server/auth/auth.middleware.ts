@@ -2,8 +2,7 @@ import type { RequestHandler } from 'express';
 import type { Role } from '../../shared/schemas/auth';
 import type { AppContext } from '../context';
 import { forbidden, unauthorized } from '../lib/errors';
-import { sqliteHandle, type RawSqlite } from '../db/sqlite-handle';
-import { User } from '../users/user.entity';
+import { dialectOf } from '../db/dialect';
 import { verifyToken } from './tokens';
 
 export interface AuthUser {
@@ -32,29 +31,15 @@ export function requireAuth(ctx: AppContext): RequestHandler {
     const claims = verifyToken(ctx.config.jwtSecret, match[1]);
     const user = await findUser(claims.userId);
     if (!user || !user.active) throw unauthorized('This account is not active. Ask your office.');
-    req.user = { id: user.id, email: user.email, name: user.name, role: user.role };
+    req.user = { id: user.id, email: user.email, name: user.name, role: user.role as Role };
     next();
   };
 }
 
-type UserRow = Pick<User, 'id' | 'email' | 'name' | 'role' | 'active'>;
-
-/**
- * The user behind a token, read on every request: a prepared statement on SQLite (TypeORM's query
- * builder costs more than the rest of a check), the repository on other databases.
- */
-function userLookup(ctx: AppContext): (id: number) => Promise<UserRow | null> {
-  const users = ctx.dataSource.getRepository(User);
-  let statement: ReturnType<RawSqlite['prepare']> | null | undefined;
-  return async (id) => {
-    if (statement === undefined) {
-      const handle = sqliteHandle(ctx.dataSource.manager);
-      statement = handle ? handle.prepare('SELECT id, email, name, role, active FROM users WHERE id = ?') : null;
-    }
-    if (!statement) return users.findOneBy({ id });
-    const row = statement.get(id) as (Omit<UserRow, 'active'> & { active: number }) | undefined;
-    return row ? { ...row, active: row.active === 1 } : null;
-  };
+/** The user behind a token, read on every request through the database's fast path (no query builder). */
+function userLookup(ctx: AppContext) {
+  const dialect = dialectOf(ctx.dataSource);
+  return (id: number) => dialect.userById(ctx.dataSource, id);
 }
 
 /** Allows only the listed roles (use after requireAuth). */

@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { CatalogKind } from '../../shared/schemas/equipment';
-import { ImportRecord } from '../imports/import.entity';
 import { KINDS } from './catalog-kinds';
+import { catalogVersions, forgetCatalogVersions } from './catalog-version';
 import { CatalogSearch } from './catalog-search';
 
 type Row = Record<string, unknown> & { id: number };
@@ -48,49 +48,24 @@ const EQUIPMENT_KEYS = [
 ];
 
 const cache = new WeakMap<DataSource, Map<CatalogKind, KindIndex>>();
-/** How long a read catalog version is trusted before asking the database again (other instances' imports). */
-const VERSION_TTL_MS = 250;
-const versions = new WeakMap<DataSource, { at: number; byKind: Promise<Map<string, string>> }>();
 
 /**
- * A kind changes only when an import of that kind commits or reverts, so the count and latest id of
- * those is its version: a price commit (the frequent one) never rebuilds the equipment indexes the
- * checks read. Read in one small grouped query, so every server instance sees a change.
+ * A kind changes only when an import of that kind commits or reverts, which bumps its row in
+ * catalog_versions in the same transaction: a price commit (the frequent one) never rebuilds the
+ * equipment indexes the checks read, and every server instance sees a change on its next request.
  */
-async function catalogVersions(dataSource: DataSource): Promise<Map<string, string>> {
-  const rows = await dataSource
-    .getRepository(ImportRecord)
-    .createQueryBuilder('i')
-    .select('i.kind', 'kind')
-    .addSelect('COUNT(i.committedAt)', 'committed')
-    .addSelect('COUNT(i.revertedAt)', 'reverted')
-    .addSelect('MAX(i.id)', 'last')
-    .where('i.status != :preview', { preview: 'preview' })
-    .groupBy('i.kind')
-    .getRawMany<{ kind: string; committed: number; reverted: number; last: number | null }>();
-  return new Map(rows.map((r) => [r.kind, `${r.committed}|${r.reverted}|${r.last ?? 0}`]));
-}
-
-/** The kind's catalog version, read at most every VERSION_TTL_MS: a check asks for several kinds at once. */
 async function currentVersion(dataSource: DataSource, kind: CatalogKind): Promise<string> {
-  const now = Date.now();
-  let known = versions.get(dataSource);
-  if (!known || now - known.at >= VERSION_TTL_MS) {
-    known = { at: now, byKind: catalogVersions(dataSource) };
-    versions.set(dataSource, known);
-    known.byKind.catch(() => versions.delete(dataSource));
-  }
-  return (await known.byKind).get(kind) ?? '0|0|0';
+  return String((await catalogVersions(dataSource)).get(kind) ?? 0);
 }
 
-/** Forgets the cached versions: an import committed or reverted in this process is seen at once. */
+/** Forgets the version read in flight: an import committed or reverted in this process is seen at once. */
 export function invalidateCatalogIndex(dataSource: DataSource): void {
-  versions.delete(dataSource);
+  forgetCatalogVersions(dataSource);
 }
 
 /** Forgets every cached index and version: after a write that rolled back, nothing cached is trusted. */
 export function dropCatalogIndex(dataSource: DataSource): void {
-  versions.delete(dataSource);
+  forgetCatalogVersions(dataSource);
   cache.delete(dataSource);
 }
 

@@ -5,5 +5,5 @@ import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeor
 export class Distributor {
   @PrimaryGeneratedColumn({ type: 'integer' }) id: number;
   @Column({ type: 'varchar', length: 120, unique: true }) name: string;
-  @CreateDateColumn({ type: 'datetime' }) createdAt: Date;
+  @CreateDateColumn({ type: Date }) createdAt: Date;
 }

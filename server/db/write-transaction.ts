@@ -10,8 +10,10 @@ import { AppError } from '../lib/errors';
  * and its `transaction()` issues a deferred BEGIN — a second request's transaction then nests as a
  * SAVEPOINT inside the first and both pass their checks. So writers queue on an in-process lock per
  * DataSource, then run `BEGIN IMMEDIATE` (which also locks out other processes, e.g. a CLI task).
- * Another database slots in as another `WriteLockStrategy` (PostgreSQL: SERIALIZABLE or
- * `SELECT … FOR UPDATE` inside `work`).
+ *
+ * PostgreSQL: writers queue the same way in process (so at most one pooled connection per instance
+ * waits), then take one transaction-scoped advisory lock that every instance shares, so the same
+ * invariants hold across several server instances on one database (issue 13).
  */
 export async function withWriteLock<T>(ctx: { dataSource: DataSource }, work: (manager: EntityManager) => Promise<T>): Promise<T> {
   return strategyFor(ctx.dataSource)(ctx.dataSource, work);
@@ -20,11 +22,8 @@ export async function withWriteLock<T>(ctx: { dataSource: DataSource }, work: (m
 type WriteLockStrategy = <T>(dataSource: DataSource, work: (manager: EntityManager) => Promise<T>) => Promise<T>;
 
 function strategyFor(dataSource: DataSource): WriteLockStrategy {
-  return dataSource.options.type === 'better-sqlite3' || dataSource.options.type === 'sqlite' ? sqliteImmediate : serializable;
+  return dataSource.options.type === 'postgres' ? postgresAdvisory : sqliteImmediate;
 }
-
-/** Databases with real per-connection transactions: let the database serialise the writers. */
-const serializable: WriteLockStrategy = (dataSource, work) => dataSource.transaction('SERIALIZABLE', work);
 
 // The tail of each DataSource's queue of writers: a writer waits for the one before it to finish.
 const queues = new WeakMap<DataSource, Promise<unknown>>();
@@ -33,22 +32,29 @@ const queues = new WeakMap<DataSource, Promise<unknown>>();
 // `open` turns false at commit/rollback: a callback started inside the work that runs later is not nested.
 const held = new AsyncLocalStorage<{ dataSource: DataSource; manager: EntityManager; open: boolean }>();
 
-const sqliteImmediate: WriteLockStrategy = async (dataSource, work) => {
-  const outer = held.getStore();
-  // Nested: a SAVEPOINT inside the transaction already held (its failure undoes only its own writes).
-  if (outer?.open && outer.dataSource === dataSource) return outer.manager.transaction(work);
+/** Runs `begin` once the writers queued before it on this DataSource are done; nested calls become savepoints. */
+const queued =
+  (begin: WriteLockStrategy): WriteLockStrategy =>
+  async (dataSource, work) => {
+    const outer = held.getStore();
+    // Nested: a SAVEPOINT inside the transaction already held (its failure undoes only its own writes).
+    if (outer?.open && outer.dataSource === dataSource) return outer.manager.transaction(work);
+    return inQueue(dataSource, () => begin(dataSource, work));
+  };
+
+async function inQueue<T>(dataSource: DataSource, run: () => Promise<T>): Promise<T> {
   const previous = queues.get(dataSource) ?? Promise.resolve();
   let release!: () => void;
   const mine = new Promise<void>((resolve) => (release = resolve));
   queues.set(dataSource, mine);
   await previous.catch(() => undefined);
   try {
-    return await runImmediate(dataSource, work);
+    return await run();
   } finally {
     if (queues.get(dataSource) === mine) queues.delete(dataSource);
     release();
   }
-};
+}
 
 /** TypeORM's bookkeeping (its flags decide whether save() opens its own transaction) kept in step by hand. */
 interface RunnerFlags {
@@ -57,6 +63,9 @@ interface RunnerFlags {
 }
 
 const PLAIN_TRANSACTION_WAIT_MS = 10_000;
+
+const sqliteImmediate: WriteLockStrategy = queued(runImmediate);
+const postgresAdvisory: WriteLockStrategy = queued(runAdvisory);
 
 async function runImmediate<T>(dataSource: DataSource, work: (manager: EntityManager) => Promise<T>): Promise<T> {
   const runner = dataSource.createQueryRunner();
@@ -80,17 +89,41 @@ async function runImmediate<T>(dataSource: DataSource, work: (manager: EntityMan
   }
 }
 
+// Any constant works; every instance must use the same one ("Tandem" in ASCII).
+export const WRITE_LOCK_KEY = 0x54616e64656d;
+
+async function runAdvisory<T>(dataSource: DataSource, work: (manager: EntityManager) => Promise<T>): Promise<T> {
+  const runner = dataSource.createQueryRunner();
+  await runner.connect();
+  const store = { dataSource, manager: runner.manager, open: true };
+  try {
+    await runner.startTransaction();
+    await runner.query('SELECT pg_advisory_xact_lock($1)', [WRITE_LOCK_KEY]);
+    const result = await held.run(store, () => work(runner.manager));
+    store.open = false;
+    await runner.commitTransaction();
+    return result;
+  } catch (err) {
+    store.open = false;
+    if (runner.isTransactionActive) await runner.rollbackTransaction().catch(() => undefined);
+    throw err;
+  } finally {
+    await runner.release();
+  }
+}
+
 /**
  * Sends the DataSource's own `transaction()` (and so every plain `dataSource.transaction(...)` in
  * the code) through the same queue and lock, so a writer that was not converted can not nest inside
- * another's transaction. SQLite only; called once where the DataSource is created.
+ * another's transaction (SQLite) or skip the lock its invariant checks rely on (PostgreSQL). Called
+ * once where the DataSource is created.
  */
 export function lockPlainTransactions(dataSource: DataSource): void {
-  if (strategyFor(dataSource) !== sqliteImmediate) return;
+  const strategy = strategyFor(dataSource);
   const manager = dataSource.manager;
   manager.transaction = ((isolationOrWork: unknown, maybeWork?: unknown) => {
     const work = (typeof isolationOrWork === 'function' ? isolationOrWork : maybeWork) as (m: EntityManager) => Promise<unknown>;
-    return sqliteImmediate(dataSource, work);
+    return strategy(dataSource, work);
   }) as EntityManager['transaction'];
 }
 

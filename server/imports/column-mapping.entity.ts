@@ -12,5 +12,5 @@ export class ColumnMapping {
   @Column({ type: 'simple-json' }) mapping: Record<string, string>;
   /** Price files: the decimal mark this distributor's last file showed (point 1,234.50 or comma 1.234,50). */
   @Column({ type: 'varchar', length: 8, nullable: true }) decimalConvention: DecimalConvention | null;
-  @Column({ type: 'datetime', nullable: true }) updatedAt: Date | null;
+  @Column({ type: Date, nullable: true }) updatedAt: Date | null;
 }

@@ -5,12 +5,20 @@ import { KINDS } from '../catalog/catalog-kinds';
 import { PriceEntry } from '../catalog/price-entry.entity';
 import { ImportChange } from './import-change.entity';
 import type { ImportPlan } from './import-plan';
-import { sqliteHandle } from '../db/sqlite-handle';
+import { dialectOf } from '../db/dialect';
 
 const BATCH = 500;
 /** Rows written between two yields to the event loop (a few ms), so checks are answered during a large commit. */
 const ROWS_PER_SLICE = 2000;
 const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
+
+/** Writes rows a slice at a time, letting other requests in between slices. */
+async function inSlices(rows: unknown[][], write: (slice: unknown[][]) => Promise<void>): Promise<void> {
+  for (let i = 0; i < rows.length; i += ROWS_PER_SLICE) {
+    if (i > 0) await nextTurn();
+    await write(rows.slice(i, i + ROWS_PER_SLICE));
+  }
+}
 
 function chunks<T>(items: T[], size = BATCH): T[][] {
   const out: T[][] = [];
@@ -37,9 +45,10 @@ export async function applyCatalogPlan(manager: EntityManager, kind: CatalogKind
 }
 
 /**
- * Writes a price plan for one distributor; on SQLite through prepared statements (100k rows in well
- * under a second), yielding to the event loop every ROWS_PER_SLICE rows. The caller holds the write
- * lock and the transaction throughout, so other writers wait and a crash still leaves all or nothing.
+ * Writes a price plan for one distributor through the database's bulk path (prepared statements on
+ * SQLite, multi-row statements on PostgreSQL), yielding to the event loop every ROWS_PER_SLICE rows.
+ * The caller holds the write lock and the transaction throughout, so other writers wait and a crash
+ * still leaves all or nothing.
  */
 export async function applyPricePlan(manager: EntityManager, distributorId: number, plan: ImportPlan, importId: number): Promise<void> {
   const entry = (v: Record<string, unknown>) => ({
@@ -56,34 +65,21 @@ export async function applyPricePlan(manager: EntityManager, distributorId: numb
     const { id, ...before } = existing;
     return { importId, entity: 'price_entries', rowId: id, before: JSON.stringify(before), beforeImportId: existing.importId };
   });
-  const raw = sqliteHandle(manager);
-  if (raw) {
-    const insert = raw.prepare(
-      'INSERT INTO price_entries (distributorId, model, normalizedModel, priceCents, currency, effectiveFrom, description, importId) VALUES (?, ?, ?, ?, ?, ?, ?, ?)',
-    );
-    let written = 0;
-    for (const r of plan.inserts) {
-      const e = entry(r.values);
-      insert.run(e.distributorId, e.model, e.normalizedModel, e.priceCents, e.currency, e.effectiveFrom, e.description, e.importId);
-      if (++written % ROWS_PER_SLICE === 0) await nextTurn();
-    }
-    const update = raw.prepare('UPDATE price_entries SET model = ?, priceCents = ?, currency = ?, description = COALESCE(?, description), importId = ? WHERE id = ?');
-    for (const { row, existing } of plan.updates) {
+  const dialect = dialectOf(manager);
+  const insertColumns = ['distributorId', 'model', 'normalizedModel', 'priceCents', 'currency', 'effectiveFrom', 'description', 'importId'] as const;
+  await inSlices(plan.inserts.map((r) => {
+    const e = entry(r.values);
+    return insertColumns.map((c) => e[c]);
+  }), (rows) => dialect.insertRows(manager, PriceEntry, [...insertColumns], rows));
+  await inSlices(
+    plan.updates.map(({ row, existing }) => {
       const e = entry(row.values);
-      update.run(e.model, e.priceCents, e.currency, e.description, importId, existing.id);
-      if (++written % ROWS_PER_SLICE === 0) await nextTurn();
-    }
-    const change = raw.prepare('INSERT INTO import_changes (importId, entity, rowId, before, beforeImportId) VALUES (?, ?, ?, ?, ?)');
-    for (const c of changes) {
-      change.run(c.importId, c.entity, c.rowId, c.before, c.beforeImportId);
-      if (++written % ROWS_PER_SLICE === 0) await nextTurn();
-    }
-    return;
-  }
-  for (const batch of chunks(plan.inserts)) await manager.insert(PriceEntry, batch.map((r) => entry(r.values)));
-  for (const { row, existing } of plan.updates) {
-    const e = entry(row.values);
-    await manager.update(PriceEntry, existing.id, { model: e.model, priceCents: e.priceCents, currency: e.currency, importId, ...(e.description !== null ? { description: e.description } : {}) });
-  }
-  for (const batch of chunks(changes)) await manager.insert(ImportChange, batch);
+      return [existing.id, e.model, e.priceCents, e.currency, e.description, importId];
+    }),
+    (rows) => dialect.updateRowsById(manager, PriceEntry, ['model', 'priceCents', 'currency', 'description', 'importId'], rows, ['description']),
+  );
+  await inSlices(
+    changes.map((c) => [c.importId, c.entity, c.rowId, c.before, c.beforeImportId]),
+    (rows) => dialect.insertRows(manager, ImportChange, ['importId', 'entity', 'rowId', 'before', 'beforeImportId'], rows),
+  );
 }

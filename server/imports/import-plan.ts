@@ -2,6 +2,7 @@ import type { EntityManager } from 'typeorm';
 import type { CatalogKind, ImportKind } from '../../shared/schemas/equipment';
 import { normalizeModel } from '../../shared/schemas/fields';
 import { EQUIPMENT_KINDS, KINDS } from '../catalog/catalog-kinds';
+import { PriceEntry } from '../catalog/price-entry.entity';
 import { sqliteHandle } from '../db/sqlite-handle';
 import type { ParsedRow } from './import-parse';
 
@@ -50,15 +51,14 @@ interface PriceLookups {
   inCatalog(normalizedModel: string): boolean | Promise<boolean>;
 }
 
-function priceLookups(manager: EntityManager, distributorId: number | null): PriceLookups {
+async function priceLookups(manager: EntityManager, distributorId: number | null): Promise<PriceLookups> {
   const raw = sqliteHandle(manager);
-  const tables = EQUIPMENT_KINDS.map((kind) => KINDS[kind].table);
   if (raw) {
     const entry = raw.prepare(`SELECT ${PRICE_COLUMNS} FROM price_entries WHERE distributorId = ? AND normalizedModel = ? AND effectiveFrom = ?`);
     // The catalog's models, read once per file (bounded by the catalog, unlike the price history).
     const models = new Set<string>();
-    for (const table of tables) {
-      for (const model of raw.prepare(`SELECT normalizedModel FROM ${table}`).pluck().all()) models.add(model as string);
+    for (const kind of EQUIPMENT_KINDS) {
+      for (const model of raw.prepare(`SELECT normalizedModel FROM ${KINDS[kind].table}`).pluck().all()) models.add(model as string);
     }
     // Synchronous on SQLite: no promise per row for a 100,000-row file.
     return {
@@ -66,25 +66,29 @@ function priceLookups(manager: EntityManager, distributorId: number | null): Pri
       inCatalog: (model) => models.has(model),
     };
   }
-  // Other drivers: the same lookups through the query builder (its parameters suit every driver).
-  return {
-    existing: async (model, from) =>
-      distributorId === null
-        ? undefined
-        : ((await manager
-            .createQueryBuilder()
-            .select(PRICE_COLUMNS.split(', ').map((c) => `p.${c} AS ${c}`))
-            .from('price_entries', 'p')
-            .where('p.distributorId = :distributorId AND p.normalizedModel = :model AND p.effectiveFrom = :from', { distributorId, model, from })
-            .getRawOne<Row>()) ?? undefined),
-    inCatalog: async (model) => {
-      for (const table of tables) {
-        if (await manager.createQueryBuilder().select('e.id').from(table, 'e').where('e.normalizedModel = :model', { model }).getRawOne()) return true;
-      }
-      return false;
-    },
-  };
+  // PostgreSQL: a round trip per row would dominate, so the distributor's entries and the catalog's
+  // models are read once per file through the query builder (it quotes the camelCase aliases).
+  const existing: Row[] =
+    distributorId === null
+      ? []
+      : await PRICE_PLAN_COLUMNS.reduce((qb, c) => qb.addSelect(`p.${c}`, c), manager.getRepository(PriceEntry).createQueryBuilder('p').select('p.id', 'id'))
+          .where('p.distributorId = :distributorId', { distributorId })
+          .getRawMany();
+  const byKey = new Map(existing.map((e) => [`${String(e.normalizedModel)}|${String(e.effectiveFrom)}`, e]));
+  const models = new Set<string>();
+  for (const kind of EQUIPMENT_KINDS) {
+    const rows: { normalizedModel: string }[] = await manager
+      .getRepository(KINDS[kind].entity)
+      .createQueryBuilder('e')
+      .select('e.normalizedModel', 'normalizedModel')
+      .getRawMany();
+    for (const r of rows) models.add(r.normalizedModel);
+  }
+  return { existing: (model, from) => byKey.get(`${model}|${from}`), inCatalog: (model) => models.has(model) };
 }
+
+// Selected by property name so the raw rows keep camelCase keys on PostgreSQL too (TypeORM quotes them).
+const PRICE_PLAN_COLUMNS = ['normalizedModel', 'effectiveFrom', 'priceCents', 'currency', 'description', 'model', 'importId'] as const;
 
 /**
  * Plans a price import for one distributor (null: not yet created, so nothing exists). A blank
@@ -92,7 +96,7 @@ function priceLookups(manager: EntityManager, distributorId: number | null): Pri
  * LOOKUPS_PER_SLICE rows so checks keep being answered while a large file is planned.
  */
 export async function planPrices(manager: EntityManager, distributorId: number | null, rows: ParsedRow[]): Promise<ImportPlan> {
-  const lookups = priceLookups(manager, distributorId);
+  const lookups = await priceLookups(manager, distributorId);
   const plan: ImportPlan = { kind: 'prices', inserts: [], updates: [], unchanged: 0, unmatched: 0 };
   for (let i = 0; i < rows.length; i++) {
     if (i > 0 && i % LOOKUPS_PER_SLICE === 0) await nextTurn();

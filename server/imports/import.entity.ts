@@ -25,7 +25,7 @@ export class ImportRecord {
   @Column({ type: 'varchar', length: 8, nullable: true }) decimalSource: DecimalSource | null;
   /** The preview's valid rows as JSON (cleared on commit). */
   @Column({ type: 'text', nullable: true }) payload: string | null;
-  @CreateDateColumn({ type: 'datetime' }) createdAt: Date;
-  @Column({ type: 'datetime', nullable: true }) committedAt: Date | null;
-  @Column({ type: 'datetime', nullable: true }) revertedAt: Date | null;
+  @CreateDateColumn({ type: Date }) createdAt: Date;
+  @Column({ type: Date, nullable: true }) committedAt: Date | null;
+  @Column({ type: Date, nullable: true }) revertedAt: Date | null;
 }

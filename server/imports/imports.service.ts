@@ -2,6 +2,7 @@ import type { EntityManager } from 'typeorm';
 import type { ImportKind } from '../../shared/schemas/equipment';
 import type { DecimalConvention, ImportErrorPage } from '../../shared/schemas/imports';
 import { dropCatalogIndex, invalidateCatalogIndex } from '../catalog/catalog-index';
+import { bumpCatalogVersion } from '../catalog/catalog-version';
 import { withWriteLock } from '../db/write-transaction';
 import { Distributor } from '../catalog/distributor.entity';
 import type { AppContext } from '../context';
@@ -82,6 +83,7 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
     );
     if (!input.dryRun) {
       await applyPlan(manager, plan, record);
+      await bumpCatalogVersion(manager, input.kind);
       record.status = 'committed';
       record.committedAt = new Date();
       await manager.save(record);
@@ -101,6 +103,7 @@ export async function commitImport(ctx: AppContext, id: number): Promise<ImportD
     const payload = JSON.parse(record.payload ?? '{"rows":[]}') as PreviewPayload;
     const plan = await planFor(manager, record.kind as ImportKind, record.distributorId, payload.rows);
     await applyPlan(manager, plan, record);
+    await bumpCatalogVersion(manager, record.kind);
     Object.assign(record, planCounts(plan), { status: 'committed', committedAt: new Date(), payload: null });
     await manager.save(record);
     return toImportDetail(record, await distributorName(manager, record.distributorId));
@@ -116,6 +119,7 @@ export async function revertImport(ctx: AppContext, id: number): Promise<ImportD
     if (!record) throw notFound('Import');
     if (record.status !== 'committed') throw conflict(`This import is ${record.status}; only a committed import can be reverted.`);
     await revertImportRows(manager, record);
+    await bumpCatalogVersion(manager, record.kind);
     record.status = 'reverted';
     record.revertedAt = new Date();
     await manager.save(record);

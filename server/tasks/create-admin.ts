@@ -2,7 +2,7 @@ import 'reflect-metadata';
 import { createInterface } from 'node:readline/promises';
 import { UserCreateSchema } from '../../shared/schemas/auth';
 import { openDatabase } from '../db/data-source';
-import { loadConfig } from '../env';
+import { databaseTarget, loadConfig } from '../env';
 import { createLogger } from '../lib/logger';
 import { createUser } from '../users/users.service';
 
@@ -44,7 +44,7 @@ async function main() {
     process.exit(2);
   }
   const config = loadConfig();
-  const dataSource = await openDatabase(config.databasePath);
+  const dataSource = await openDatabase(databaseTarget(config));
   const user = await createUser({ dataSource, config, logger: createLogger({ logLevel: 'warn' }) }, input.data);
   await dataSource.destroy();
   console.log(`admin ${user.email} created`);

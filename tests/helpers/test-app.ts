@@ -1,6 +1,4 @@
 import { randomBytes } from 'node:crypto';
-import { mkdtempSync, rmSync } from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import bcrypt from 'bcryptjs';
 import type { Express } from 'express';
@@ -9,9 +7,10 @@ import type { Role } from '../../shared/schemas/auth';
 import { createApp } from '../../server/app';
 import { signToken } from '../../server/auth/tokens';
 import type { AppContext } from '../../server/context';
-import { openDatabase } from '../../server/db/data-source';
-import type { AppConfig } from '../../server/env';
+import { isPostgresUrl, openDatabase } from '../../server/db/data-source';
+import { databaseTarget, type AppConfig } from '../../server/env';
 import { User } from '../../server/users/user.entity';
+import { createTestDatabase } from './test-database';
 
 /** The password of every user createTestApp makes. */
 export const TEST_PASSWORD = 'test-password-123';
@@ -25,15 +24,19 @@ export interface TestApp {
 }
 
 /**
- * A fresh app on its own temp SQLite file (migrations run), a silent logger, a random JWT secret and
- * one active user per role. Call close() in afterAll/afterEach: it closes the database and removes the folder.
+ * A fresh app on its own database — a temp SQLite file, or a new PostgreSQL database in the api-pg
+ * project (tests/helpers/test-database.ts) — with a silent logger, a random JWT secret and one active
+ * user per role. Call close() in afterAll/afterEach: it closes and drops the database and removes the folder.
  */
 export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise<TestApp> {
-  const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-test-'));
+  const database = await createTestDatabase();
+  const dir = database.dir;
   const webDir = path.join(dir, 'web');
+  const onPostgresUrl = isPostgresUrl(database.target) ? database.target : undefined;
   const config: AppConfig = {
     port: 0,
-    databasePath: path.join(dir, 'test.sqlite'),
+    databasePath: onPostgresUrl ? path.join(dir, 'unused.sqlite') : database.target,
+    databaseUrl: onPostgresUrl,
     dataDir: dir,
     demo: false,
     jwtSecret: randomBytes(32).toString('hex'),
@@ -42,7 +45,7 @@ export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise
     signInLimit: 10_000,
     ...overrides,
   };
-  const dataSource = await openDatabase(config.databasePath);
+  const dataSource = await openDatabase(databaseTarget(config));
   const ctx: AppContext = { dataSource, config, logger: pino({ level: 'silent' }) };
 
   // A low bcrypt cost keeps the helper fast; the strength of the hash is not under test here.
@@ -64,7 +67,7 @@ export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise
     tokenFor: (role) => signToken(config.jwtSecret, { userId: users[role].id, role }),
     close: async () => {
       if (dataSource.isInitialized) await dataSource.destroy();
-      rmSync(dir, { recursive: true, force: true });
+      await database.drop();
     },
   };
 }

@@ -1,5 +1,6 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 import { Table } from 'typeorm';
+import { portableTable } from './portable-table';
 
 /** Users and their roles (Foundation). Written with the Table API so it runs on SQLite and PostgreSQL. */
 export class Users1764650000000 implements MigrationInterface {
@@ -7,7 +8,7 @@ export class Users1764650000000 implements MigrationInterface {
 
   async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.createTable(
-      new Table({
+      portableTable(queryRunner, new Table({
         name: 'users',
         columns: [
           { name: 'id', type: 'integer', isPrimary: true, isGenerated: true, generationStrategy: 'increment' },
@@ -19,7 +20,7 @@ export class Users1764650000000 implements MigrationInterface {
           { name: 'createdAt', type: 'datetime', default: 'CURRENT_TIMESTAMP' },
           { name: 'updatedAt', type: 'datetime', default: 'CURRENT_TIMESTAMP' },
         ],
-      }),
+      })),
     );
   }
 

@@ -1,5 +1,6 @@
 import type { MigrationInterface, QueryRunner, TableColumnOptions } from 'typeorm';
 import { Table, TableIndex } from 'typeorm';
+import { portableTable } from './portable-table';
 
 /**
  * Catalog, distributors, prices, imports, column mappings and import changes (issue 3).
@@ -150,7 +151,7 @@ export class Catalog1764700000000 implements MigrationInterface {
 
   async up(queryRunner: QueryRunner): Promise<void> {
     for (const { table, indices } of tables) {
-      await queryRunner.createTable(table);
+      await queryRunner.createTable(portableTable(queryRunner, table));
       for (const index of indices) await queryRunner.createIndex(table.name, index);
     }
   }

@@ -5,6 +5,7 @@ import { EngineSecondPass1764900000000 } from './1764900000000-engine-second-pas
 import { ImportBounds1764950000000 } from './1764950000000-import-bounds';
 import { Jobs1765000000000 } from './1765000000000-jobs';
 import { JobOptions1765200000000 } from './1765200000000-job-options';
+import { CatalogVersions1765300000000 } from './1765300000000-catalog-versions';
 
 /** Every migration, in order. Add new ones at the end (one file per change, named by timestamp). */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   ImportBounds1764950000000,
   Jobs1765000000000,
   JobOptions1765200000000,
+  CatalogVersions1765300000000,
 ];

@@ -31,8 +31,8 @@ describe('demo catalog', () => {
   it('when the demo catalog is loaded, then every rated combination names catalog equipment', async () => {
     const orphans = await t.ctx.dataSource.query(
       `SELECT r.id FROM rated_combinations r
-       LEFT JOIN outdoor_units o ON o.normalizedModel = r.normalizedOutdoorModel
-       LEFT JOIN indoor_coils c ON c.normalizedModel = r.normalizedIndoorModel
+       LEFT JOIN outdoor_units o ON o."normalizedModel" = r."normalizedOutdoorModel"
+       LEFT JOIN indoor_coils c ON c."normalizedModel" = r."normalizedIndoorModel"
        WHERE o.id IS NULL OR c.id IS NULL`,
     );
     expect(orphans).toEqual([]);

@@ -2,9 +2,11 @@ import { setTimeout as sleep } from 'node:timers/promises';
 import Database from 'better-sqlite3';
 import type { EntityManager } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { withWriteLock } from '../../../server/db/write-transaction';
+import pg from 'pg';
+import { WRITE_LOCK_KEY, withWriteLock } from '../../../server/db/write-transaction';
 import { User } from '../../../server/users/user.entity';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { onPostgres } from '../../helpers/test-database';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -91,7 +93,8 @@ describe('withWriteLock', () => {
     expect((await repo.findOneByOrFail({ id: t.users.tech.id })).name).toBe('after');
   });
 
-  it('when another connection (another process) asks for the write lock meanwhile, then it is refused as busy', async () => {
+  // SQLite only: a second better-sqlite3 connection on the same file; the PostgreSQL form follows.
+  it.skipIf(onPostgres)('when another connection (another process) asks for the write lock meanwhile, then it is refused as busy', async () => {
     const other = new Database(t.ctx.config.databasePath, { timeout: 0 });
     try {
       await withWriteLock(t.ctx, async () => {
@@ -101,6 +104,21 @@ describe('withWriteLock', () => {
       other.exec('ROLLBACK');
     } finally {
       other.close();
+    }
+  });
+
+  it.skipIf(!onPostgres)('when another instance asks for the write lock meanwhile, then it waits for the advisory lock (PostgreSQL)', async () => {
+    const other = new pg.Client({ connectionString: t.ctx.config.databaseUrl });
+    await other.connect();
+    try {
+      const tryLock = async () => (await other.query<{ got: boolean }>('SELECT pg_try_advisory_lock($1) AS got', [WRITE_LOCK_KEY])).rows[0].got;
+      await withWriteLock(t.ctx, async () => {
+        expect(await tryLock()).toBe(false);
+      });
+      expect(await tryLock()).toBe(true);
+      await other.query('SELECT pg_advisory_unlock($1)', [WRITE_LOCK_KEY]);
+    } finally {
+      await other.end();
     }
   });
 });

@@ -37,7 +37,7 @@ describe('imports under concurrency', () => {
     const b = await preview('Overlap', rows(100, 2000)).expect(201);
     const [ca, cb] = await Promise.all([auth(request(t.app).post(`/api/imports/${a.body.import.id}/commit`)), auth(request(t.app).post(`/api/imports/${b.body.import.id}/commit`))]);
     expect([ca.status, cb.status]).toEqual([200, 200]);
-    const stored = (await t.ctx.dataSource.query("SELECT DISTINCT p.priceCents AS c FROM price_entries p JOIN distributors d ON d.id = p.distributorId WHERE d.name = 'Overlap'")) as { c: number }[];
+    const stored = (await t.ctx.dataSource.query(`SELECT DISTINCT p."priceCents" AS c FROM price_entries p JOIN distributors d ON d.id = p."distributorId" WHERE d.name = 'Overlap'`)) as { c: number }[];
     // All 100 rows carry the price of whichever commit ran second: never a mix of the two files.
     expect(stored).toHaveLength(1);
     const second = stored[0].c === 2000 ? b : a;
@@ -46,6 +46,6 @@ describe('imports under concurrency', () => {
     await auth(request(t.app).post(`/api/imports/${first.body.import.id}/revert`)).expect(409);
     await auth(request(t.app).post(`/api/imports/${second.body.import.id}/revert`)).expect(200);
     await auth(request(t.app).post(`/api/imports/${first.body.import.id}/revert`)).expect(200);
-    expect(await t.ctx.dataSource.query("SELECT COUNT(*) AS n FROM price_entries p JOIN distributors d ON d.id = p.distributorId WHERE d.name = 'Overlap'")).toEqual([{ n: 0 }]);
+    expect(await t.ctx.dataSource.query(`SELECT COUNT(*) AS n FROM price_entries p JOIN distributors d ON d.id = p."distributorId" WHERE d.name = 'Overlap'`)).toEqual([{ n: 0 }]);
   });
 });

@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { sql } from '../../helpers/sql';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -20,7 +21,7 @@ function upload(fields: Record<string, string>, body: string | Buffer, fileName 
 const get = (path: string) => request(t.app).get(path).set('Authorization', `Bearer ${t.tokenFor('admin')}`);
 const prices = (distributor: string, csv: string, extra: Record<string, string> = {}) => upload({ kind: 'prices', distributor, dryRun: 'true', ...extra }, csv);
 const storedPrices = async (distributor: string) =>
-  (await t.ctx.dataSource.query('SELECT p.model, p.priceCents FROM price_entries p JOIN distributors d ON d.id = p.distributorId WHERE d.name = ? ORDER BY p.model', [distributor])) as { model: string; priceCents: number }[];
+  await sql<{ model: string; priceCents: number }>(t.ctx.dataSource, 'SELECT p.model, p."priceCents" FROM price_entries p JOIN distributors d ON d.id = p."distributorId" WHERE d.name = ? ORDER BY p.model', [distributor]);
 
 describe('price number formats', () => {
   it('when a file writes decimal commas, then the preview says so and each amount is read in cents, never 100× off', async () => {

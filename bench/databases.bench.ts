@@ -1,0 +1,159 @@
+import type { ChildProcess } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import pg from 'pg';
+// autocannon ships no types here; the options and result fields used are documented in its README.
+// eslint-disable-next-line @typescript-eslint/ban-ts-comment
+// @ts-ignore
+import autocannon from 'autocannon';
+// @ts-expect-error -- a plain .mjs script shared with scripts/with-postgres.mjs and the api-pg tests
+import { postgresBinDir, startCluster } from '../scripts/postgres-cluster.mjs';
+import { startBenchServer } from './bench-server';
+import { priceCsv, realImport } from './import.bench';
+import { round, type Measure } from './measure';
+
+/**
+ * Issue 13: the same API on SQLite and on PostgreSQL in one run — checks/s and catalog searches/s on
+ * one SQLite server, one PostgreSQL server, and two server processes sharing one PostgreSQL — and the
+ * 100k-row price import on PostgreSQL beside SQLite. Starts its own throwaway cluster (PostgreSQL's
+ * default durability settings) through scripts/postgres-cluster.mjs; without PostgreSQL it is skipped.
+ */
+
+const CONNECTIONS = 50;
+const DURATION_S = 10;
+const IMPORT_ROWS = 100_000;
+
+interface ServerInfo {
+  port: number;
+  token: string;
+  body: unknown;
+  jwtSecret: string;
+}
+
+interface Load {
+  name: 'checks' | 'search';
+  path: string;
+  method: 'GET' | 'POST';
+}
+const LOADS: Load[] = [
+  { name: 'checks', path: '/api/checks', method: 'POST' },
+  // A catalog search as the Check screen's part picker sends it (fuse.js over the in-memory index).
+  { name: 'search', path: '/api/catalog/outdoor-units?q=BX-HP&pageSize=20', method: 'GET' },
+];
+
+/** Requests per second of one load spread over the servers (the connections split between them). */
+async function rps(servers: ServerInfo[], load: Load, durationS = DURATION_S): Promise<{ rps: number; failed: number }> {
+  const runs = servers.map(
+    (s) =>
+      autocannon({
+        url: `http://127.0.0.1:${s.port}${load.path}`,
+        method: load.method,
+        headers: { Authorization: `Bearer ${s.token}`, 'Content-Type': 'application/json' },
+        ...(load.method === 'POST' ? { body: JSON.stringify(s.body) } : {}),
+        connections: Math.ceil(CONNECTIONS / servers.length),
+        duration: durationS,
+      }) as Promise<{ requests: { average: number }; non2xx: number; errors: number }>,
+  );
+  const results = await Promise.all(runs);
+  return { rps: results.reduce((sum, r) => sum + r.requests.average, 0), failed: results.reduce((sum, r) => sum + r.non2xx + r.errors, 0) };
+}
+
+/** Every load against these servers, each after a short warm-up. */
+async function measureAll(servers: ServerInfo[]): Promise<Record<Load['name'], { rps: number; failed: number }>> {
+  const out = {} as Record<Load['name'], { rps: number; failed: number }>;
+  for (const load of LOADS) {
+    await rps(servers, load, 3);
+    out[load.name] = await rps(servers, load);
+  }
+  return out;
+}
+
+async function createDatabase(serverUrl: string, name: string): Promise<string> {
+  const admin = new pg.Client({ connectionString: serverUrl });
+  await admin.connect();
+  try {
+    await admin.query(`CREATE DATABASE "${name}"`);
+  } finally {
+    await admin.end();
+  }
+  const url = new URL(serverUrl);
+  url.pathname = `/${name}`;
+  return url.toString();
+}
+
+export async function run(): Promise<Measure[]> {
+  if (!postgresBinDir()) {
+    console.log('skipped: no PostgreSQL');
+    return [];
+  }
+  const children: ChildProcess[] = [];
+  const start = async (env: Record<string, string> = {}) => {
+    const { child, info } = await startBenchServer<ServerInfo>('checks-server.ts', env);
+    children.push(child);
+    return info;
+  };
+  const stopAll = () => {
+    for (const child of children.splice(0)) child.kill('SIGTERM');
+  };
+  const cluster = (await startCluster({ durable: true })) as { url: string; stop(): Promise<void> };
+  const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-bench-databases-'));
+  try {
+    const sqlite = await measureAll([await start()]);
+    stopAll();
+
+    const apiUrl = await createDatabase(cluster.url, 'bench_api');
+    const first = await start({ BENCH_DATABASE_URL: apiUrl });
+    const onePg = await measureAll([first]);
+    const second = await start({ BENCH_DATABASE_URL: apiUrl, BENCH_JOIN: '1', BENCH_JWT_SECRET: first.jwtSecret });
+    const twoPg = await measureAll([first, second]);
+    stopAll();
+
+    const file = path.join(dir, 'prices.csv');
+    writeFileSync(file, priceCsv(IMPORT_ROWS));
+    const sqliteImport = await realImport(dir, file);
+    const pgImport = await realImport(dir, file, await createDatabase(cluster.url, 'bench_import'));
+    if (pgImport.rows !== IMPORT_ROWS) throw new Error(`PostgreSQL import inserted ${pgImport.rows} of ${IMPORT_ROWS} rows`);
+
+    const note = `${CONNECTIONS} connections × ${DURATION_S} s on loopback after a 3 s warm-up; servers in their own processes, PostgreSQL 15 on the same machine (default durability)`;
+    const failures = (r: { failed: number }) => (r.failed ? `; ${r.failed} failed requests` : '');
+    const measures: Measure[] = [];
+    for (const load of LOADS) {
+      const s = sqlite[load.name];
+      const p1 = onePg[load.name];
+      const p2 = twoPg[load.name];
+      measures.push(
+        { id: `api.${load.name}.rps.sqlite`, value: round(s.rps, 0), unit: 'req/s', note: `${note}; one server on SQLite${failures(s)}` },
+        {
+          id: `api.${load.name}.rps.postgres`,
+          value: round(p1.rps, 0),
+          unit: 'req/s',
+          baseline: round(s.rps, 0),
+          ratio: round(p1.rps / s.rps, 3),
+          note: `${note}; one server on PostgreSQL; baseline api.${load.name}.rps.sqlite; target ratio ≥ 0.67 (within 1.5×)${failures(p1)}`,
+        },
+        {
+          id: `api.${load.name}.rps.postgres-2`,
+          value: round(p2.rps, 0),
+          unit: 'req/s',
+          baseline: round(p1.rps, 0),
+          ratio: round(p2.rps / p1.rps, 3),
+          note: `${note}; two server processes on one PostgreSQL, connections split between them; baseline one server; target ratio ≥ 1.6 (needs a core per server)${failures(p2)}`,
+        },
+      );
+    }
+    measures.push({
+      id: 'import.prices-100k.postgres.s',
+      value: round(pgImport.seconds, 3),
+      unit: 's',
+      baseline: round(sqliteImport.seconds, 3),
+      ratio: round(pgImport.seconds / sqliteImport.seconds, 2),
+      note: `${IMPORT_ROWS.toLocaleString('en-US')}-row price file through the import service on PostgreSQL (multi-row INSERTs); baseline the same on SQLite in this run`,
+    });
+    return measures;
+  } finally {
+    stopAll();
+    rmSync(dir, { recursive: true, force: true });
+    await cluster.stop();
+  }
+}

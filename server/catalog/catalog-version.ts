@@ -1,0 +1,51 @@
+import { AsyncLocalStorage } from 'node:async_hooks';
+import type { RequestHandler } from 'express';
+import type { DataSource, EntityManager } from 'typeorm';
+import { dialectOf } from '../db/dialect';
+
+/**
+ * Counts a commit or revert of one catalog kind, inside the caller's transaction: it becomes visible
+ * to every server instance exactly when the rows do. The upsert is the same SQL on SQLite and PostgreSQL.
+ */
+export async function bumpCatalogVersion(manager: EntityManager, kind: string): Promise<void> {
+  const [sql, params] = manager.connection.driver.escapeQueryWithParameters(
+    'INSERT INTO "catalog_versions" ("kind", "version") VALUES (:kind, 1) ' +
+      'ON CONFLICT ("kind") DO UPDATE SET "version" = "catalog_versions"."version" + 1',
+    { kind },
+    {},
+  );
+  await manager.query(sql, params);
+}
+
+// One read of the version table per request, shared by every kind it looks at (a check reads four).
+const requestScope = new AsyncLocalStorage<Map<DataSource, Promise<Map<string, number>>>>();
+
+/** Opens the per-request memo for catalog versions (mount after the body parsers). */
+export const catalogVersionScope: RequestHandler = (_req, _res, next) => requestScope.run(new Map(), next);
+
+// Outside a request (tasks, benches): concurrent callers share the read in flight, nothing more.
+const inFlight = new WeakMap<DataSource, Promise<Map<string, number>>>();
+
+/**
+ * Every kind's version as the database has it now: read once per request, so a request that starts
+ * after another instance's import committed sees that import.
+ */
+export function catalogVersions(dataSource: DataSource): Promise<Map<string, number>> {
+  const memo = requestScope.getStore();
+  const known = memo?.get(dataSource) ?? (memo ? undefined : inFlight.get(dataSource));
+  if (known) return known;
+  const read = dialectOf(dataSource).catalogVersions(dataSource);
+  if (memo) memo.set(dataSource, read);
+  else {
+    inFlight.set(dataSource, read);
+    const forget = () => inFlight.get(dataSource) === read && inFlight.delete(dataSource);
+    read.then(forget, forget);
+  }
+  return read;
+}
+
+/** Drops the versions read so far in this request and in flight (after this process wrote the catalog). */
+export function forgetCatalogVersions(dataSource: DataSource): void {
+  requestScope.getStore()?.delete(dataSource);
+  inFlight.delete(dataSource);
+}
