@@ -62,7 +62,7 @@ export class JobOptions1765200000000 implements MigrationInterface {
 
   async down(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.dropColumn('outbound_emails', 'jobId');
-    await queryRunner.query('DELETE FROM outbound_emails WHERE systemId IS NULL');
+    await queryRunner.query('DELETE FROM outbound_emails WHERE "systemId" IS NULL');
     await queryRunner.changeColumns('outbound_emails', [
       {
         oldColumn: new TableColumn({ name: 'systemId', type: 'integer', isNullable: true }),
