@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
-import { queryString } from '@/hooks/api-client';
+import { ApiError, queryString } from '@/hooks/api-client';
 import { errorText } from '@/hooks/error-text';
 import { energyParams, useSendProposal } from '@/hooks/use-options';
 import { ProposalSendSchema, type EnergyQuery } from '@/shared/schemas/options';
@@ -11,7 +11,6 @@ import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { SectionCard } from '@/components/ui/section-card';
 import { openPdf } from '@/components/systems/open-pdf';
-import { recentlySent, rememberSent } from './proposal-sends';
 
 interface Props {
   jobId: number;
@@ -35,23 +34,20 @@ export function ProposalCard({ jobId, contactEmail, energy, optionCount }: Props
     openPdf(`/jobs/${jobId}/proposal.pdf${queryString(energyParams(energy))}`, `proposal-job-${jobId}.pdf`).catch((e) => setPdfError(errorText(e)));
   };
   const doSend = (confirmed: boolean) => {
-    const parsed = ProposalSendSchema.safeParse({ to: address.trim(), energy });
+    const parsed = ProposalSendSchema.safeParse({ to: address.trim(), energy, ...(confirmed ? { confirm: true } : {}) });
     if (!parsed.success) {
       setToError(parsed.error.issues[0]?.message);
       return;
     }
     setToError(undefined);
-    // Like the record report: sending the same proposal again within a minute asks first.
-    const recent = recentlySent(jobId, Date.now());
-    if (recent && !confirmed) {
-      setAskAgain(`The proposal went to ${recent.to} less than a minute ago. Send it again?`);
-      return;
-    }
     send.mutate(parsed.data, {
-      onSuccess: (r) => {
-        rememberSent(jobId, r.to, Date.now());
+      onSuccess: () => {
         setOpen(false);
         setAskAgain(null);
+      },
+      onError: (err) => {
+        // Like the record report: the server asks before the same proposal goes out twice within a minute.
+        if (err instanceof ApiError && err.code === 'recently-sent') setAskAgain(err.message);
       },
     });
   };
@@ -108,7 +104,7 @@ export function ProposalCard({ jobId, contactEmail, energy, optionCount }: Props
           testID="proposal-send-to"
         />
         {askAgain ? <MessageBanner tone="info">{askAgain}</MessageBanner> : null}
-        {send.isError ? <MessageBanner tone="error">{errorText(send.error)}</MessageBanner> : null}
+        {send.isError && !askAgain ? <MessageBanner tone="error">{errorText(send.error)}</MessageBanner> : null}
       </AppDialog>
     </SectionCard>
   );

@@ -7,15 +7,18 @@ import { SAFETY_NOTE } from '../reports/report-text';
 import { storageFor } from '../storage/storage-for';
 import { createMailTransport } from './mail-transport';
 import { OutboundEmailRow } from './outbound-email.entity';
+import { assertNotRecentlySent } from './resend-guard';
 
 /**
- * POST /api/jobs/:id/proposal/send: renders the proposal and sends it over SMTP. A failure answers 502 and
+ * POST /api/jobs/:id/proposal/send: renders the proposal and sends it over SMTP (a second send within a
+ * minute asks first: 409 `recently-sent` unless `confirm`). A failure answers 502 and
  * the outbox records the failed attempt; nothing else changes.
  */
 export async function sendProposal(ctx: AppContext, jobId: number, body: ProposalSend, userId: number): Promise<ProposalSendResult> {
   const smtp = ctx.config.smtp;
   if (!smtp)
     throw new AppError('mail-not-configured', 'E-mail is not set up on this server: ask your office to add the SMTP settings.', 503);
+  if (!body.confirm) await assertNotRecentlySent(ctx, { jobId }, 'proposal');
   const { pdf, fileName, job } = await renderProposal(ctx, jobId, { paper: body.paper ?? 'letter', energy: body.energy ?? {} });
   const shop = ctx.config.shopName ?? 'Tandem';
   const subject = `${shop}: your heating and cooling options for ${job.siteAddress}`.slice(0, 200);

@@ -1,4 +1,3 @@
-import { MoreThan } from 'typeorm';
 import type { SendReport } from '../../shared/schemas/systems';
 import type { AppContext } from '../context';
 import { withWriteLock } from '../db/write-transaction';
@@ -11,9 +10,7 @@ import { loadCurrent } from '../systems/systems.service';
 import { createMailTransport } from './mail-transport';
 import { OutboundEmailRow } from './outbound-email.entity';
 import { outboxView } from './outbox.service';
-
-/** A second send of the same record within this window asks first (409 unless `confirm`). */
-export const RESEND_WINDOW_MS = 60_000;
+import { assertNotRecentlySent } from './resend-guard';
 
 /**
  * POST /api/systems/:id/send: renders the report and sends it over SMTP. A failure answers 502 and
@@ -24,19 +21,7 @@ export async function sendReport(ctx: AppContext, id: number, body: SendReport, 
   const smtp = ctx.config.smtp;
   if (!smtp)
     throw new AppError('mail-not-configured', 'E-mail is not set up on this server: ask your office to add the SMTP settings.', 503);
-  if (!body.confirm) {
-    const since = new Date(Date.now() - RESEND_WINDOW_MS).toISOString();
-    const recent = await ctx.dataSource
-      .getRepository(OutboundEmailRow)
-      .findOne({ where: { systemId: id, status: 'sent', createdAt: MoreThan(since) }, order: { id: 'DESC' } });
-    if (recent) {
-      throw new AppError('recently-sent', `This report was sent to ${recent.to} less than a minute ago. Send it again?`, 409, {
-        sentAt: recent.createdAt,
-        to: recent.to,
-        confirmWith: { confirm: true },
-      });
-    }
-  }
+  if (!body.confirm) await assertNotRecentlySent(ctx, { systemId: id }, 'report');
   const job = await ctx.dataSource.getRepository(JobRow).findOneByOrFail({ id: record.jobId });
   const report = await renderSystemReport(ctx, id, { paper: body.paper ?? 'letter' });
   const shop = ctx.config.shopName ?? 'Tandem';

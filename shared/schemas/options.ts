@@ -18,7 +18,7 @@ import { isoDate, REFRIGERANT_IDS } from './fields';
  * - POST   /api/options/:id/make-record               → 201 the draft matched-system record (as POST /api/jobs/:id/systems)
  * - POST   /api/jobs/:id/repair-or-replace  RepairOrReplaceInput → RepairOrReplaceResult
  * - GET    /api/jobs/:id/proposal.pdf?<EnergyQuery>&paper=letter|a4 → application/pdf
- * - POST   /api/jobs/:id/proposal/send  ProposalSendBody → { emailId, messageId, to } (mail failure → 502, nothing recorded as sent)
+ * - POST   /api/jobs/:id/proposal/send  ProposalSendBody → { emailId, messageId, to } (mail failure → 502, nothing recorded as sent; a second send within a minute → 409 `recently-sent` unless `confirm: true`)
  * - GET    /api/settings/shop → ShopSettingsResponse; PUT /api/settings/shop ShopSettings (admin) → ShopSettingsResponse
  *
  * Money is whole cents throughout. Lines for catalog parts are priced from the best current price
@@ -327,6 +327,8 @@ export const ProposalSendSchema = z
     to: z.email({ error: 'enter a valid e-mail' }).max(254),
     paper: z.enum(['letter', 'a4']).optional(),
     energy: EnergyQuerySchema.optional(),
+    /** Send even though the proposal went out under a minute ago (otherwise 409 `recently-sent`). */
+    confirm: z.boolean().optional(),
   })
   .strict();
 export type ProposalSend = z.infer<typeof ProposalSendSchema>;

@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import type { OptionLine, OptionView } from '@/shared/schemas/options';
 import { buildOptionInput, draftFromOption, emptyDraft, lineInput, type OptionDraft } from '@/components/options/option-draft';
 import { energyQueryOf, emptyRepairTexts, repairInputOf } from '@/components/options/repair-draft';
-import { recentlySent, rememberSent, RESEND_ASK_MS } from '@/components/options/proposal-sends';
 
 const savedLine = (over: Partial<OptionLine>): OptionLine => ({
   kind: 'filter-drier',
@@ -95,14 +94,5 @@ describe('repair or replace inputs', () => {
     expect(built).toEqual({ input: { existingAgeYears: 15, ageYears: 15, repairQuoteCents: 180_000, refrigerant: 'R-22', refrigerantLbs: 6, refrigerantCentsPerLb: 8_500 } });
     const missing = repairInputOf({ ...emptyRepairTexts(), ageYears: '15' });
     expect('problems' in missing && missing.problems).toEqual(['Enter the repair quote in dollars.']);
-  });
-});
-
-describe('sending the proposal twice', () => {
-  it('when a proposal went out under a minute ago, then a second send asks first; after the minute, it does not', () => {
-    rememberSent(41, 'a@example.test', 1_000);
-    expect(recentlySent(41, 1_000 + RESEND_ASK_MS - 1)?.to).toBe('a@example.test');
-    expect(recentlySent(41, 1_000 + RESEND_ASK_MS)).toBeUndefined();
-    expect(recentlySent(42, 1_001)).toBeUndefined();
   });
 });

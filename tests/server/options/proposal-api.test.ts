@@ -108,6 +108,23 @@ describe('proposal', () => {
     expect(outbox.body.items[0]).toMatchObject({ id: sent.body.emailId, jobId, systemId: null, status: 'sent' });
   });
 
+  it('when the proposal went out under a minute ago, then a second send asks first (409) and goes only with confirm', async () => {
+    const before = messages().length;
+    const again = await request(t.app)
+      .post(`/api/jobs/${jobId}/proposal/send`)
+      .set(authFor(t, 'admin'))
+      .send({ to: 'ines.marlow@example.test' })
+      .expect(409);
+    expect(again.body.error).toMatchObject({ code: 'recently-sent', details: { to: 'ines.marlow@example.test', confirmWith: { confirm: true } } });
+    expect(messages().length).toBe(before);
+    await request(t.app)
+      .post(`/api/jobs/${jobId}/proposal/send`)
+      .set(authFor(t, 'admin'))
+      .send({ to: 'ines.marlow@example.test', confirm: true })
+      .expect(200);
+    expect(messages().length).toBe(before + 1);
+  });
+
   it('when the address is not an e-mail, then 422 and nothing is sent', async () => {
     const before = messages().length;
     await request(t.app).post(`/api/jobs/${jobId}/proposal/send`).set(authFor(t, 'estimator')).send({ to: 'not-an-address' }).expect(422);
