@@ -8,6 +8,7 @@ import { loadConfig } from '../env';
  */
 async function main() {
   const config = loadConfig();
+  if (config.databaseUrl) throw new Error('DATABASE_URL selects PostgreSQL: back it up with pg_dump (README, "Backups"); npm run backup copies the SQLite file only');
   if (config.databasePath === ':memory:') throw new Error('DATABASE_PATH is :memory:; there is nothing on disk to back up');
   const destDir = path.resolve(process.argv[2] ?? path.join(config.dataDir, 'backups'));
   const backup = await backupSqlite(config.databasePath, destDir);

@@ -9,6 +9,7 @@ import { openDatabase } from '../../../server/db/data-source';
 import { backupFileName, backupSqlite } from '../../../server/db/sqlite-backup';
 import { JobRow } from '../../../server/jobs/job.entity';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { onPostgres } from '../../helpers/test-database';
 
 const run = promisify(execFile);
 const root = path.resolve(__dirname, '../../..');
@@ -46,7 +47,7 @@ async function restore(file: string) {
   };
 }
 
-describe('SQLite online backup', () => {
+describe.skipIf(onPostgres)('SQLite online backup (SQLite only: PostgreSQL is backed up with pg_dump)', () => {
   it('when the name is made, then it carries the UTC time to the second with no colons', () => {
     expect(backupFileName(new Date('2026-12-02T13:05:09.123Z'))).toBe('tandem-2026-12-02T13-05-09Z.sqlite');
   });

@@ -1,4 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { migrations } from '../../../server/db/migrations';
+import { JobOptions1765200000000 } from '../../../server/db/migrations/1765200000000-job-options';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 
 let t: TestApp;
@@ -9,21 +11,34 @@ afterAll(async () => {
   await t.close();
 });
 
-const tables = async () =>
-  ((await t.ctx.dataSource.query("SELECT name FROM sqlite_master WHERE type = 'table'")) as { name: string }[]).map((r) => r.name);
-const outboxColumns = async () =>
-  (await t.ctx.dataSource.query('PRAGMA table_info(outbound_emails)')) as { name: string; notnull: number }[];
+// Through TypeORM's schema API, so the same test reads SQLite and PostgreSQL alike.
+async function schema() {
+  const qr = t.ctx.dataSource.createQueryRunner();
+  try {
+    const outbox = await qr.getTable('outbound_emails');
+    return {
+      jobOptions: await qr.hasTable('job_options'),
+      shopSettings: await qr.hasTable('shop_settings'),
+      outboxColumns: outbox?.columns.map((c) => c.name) ?? [],
+      systemIdNullable: outbox?.findColumnByName('systemId')?.isNullable,
+    };
+  } finally {
+    await qr.release();
+  }
+}
 
 describe('migration 1765200000000 (job options)', () => {
   it('when it is undone and run again, then its tables and the outbox columns come and go cleanly', async () => {
-    expect(await tables()).toEqual(expect.arrayContaining(['job_options', 'shop_settings']));
-    expect((await outboxColumns()).find((c) => c.name === 'systemId')?.notnull).toBe(0);
-    await t.ctx.dataSource.undoLastMigration({ transaction: 'all' });
-    expect(await tables()).not.toContain('job_options');
-    expect((await outboxColumns()).map((c) => c.name)).not.toContain('jobId');
-    expect((await outboxColumns()).find((c) => c.name === 'systemId')?.notnull).toBe(1);
+    expect(await schema()).toMatchObject({ jobOptions: true, shopSettings: true, systemIdNullable: true });
+    expect((await schema()).outboxColumns).toContain('jobId');
+    // Undo the later migrations first, then this one.
+    const later = migrations.length - 1 - migrations.indexOf(JobOptions1765200000000);
+    for (let i = 0; i <= later; i++) await t.ctx.dataSource.undoLastMigration({ transaction: 'all' });
+    const undone = await schema();
+    expect(undone).toMatchObject({ jobOptions: false, shopSettings: false, systemIdNullable: false });
+    expect(undone.outboxColumns).not.toContain('jobId');
     await t.ctx.dataSource.runMigrations({ transaction: 'all' });
-    expect(await tables()).toEqual(expect.arrayContaining(['job_options', 'shop_settings']));
-    expect((await outboxColumns()).map((c) => c.name)).toContain('jobId');
+    expect(await schema()).toMatchObject({ jobOptions: true, shopSettings: true, systemIdNullable: true });
+    expect((await schema()).outboxColumns).toContain('jobId');
   });
 });
