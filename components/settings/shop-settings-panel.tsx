@@ -78,7 +78,7 @@ export function ShopSettingsPanel() {
   return (
     <Screen
       title="Pricing and estimates"
-      subtitle="What a priced option starts from: labor, markup or margin, tax, and the assumptions behind energy, payback and repair-or-replace."
+      subtitle="The figures every priced option starts from."
       actions={
         <Button mode="contained" icon="content-save-outline" onPress={onSave} loading={save.isPending} disabled={!draft || save.isPending} contentStyle={styles.button} testID="save-shop-settings">
           Save
@@ -97,7 +97,6 @@ export function ShopSettingsPanel() {
       {draft ? (
         <>
           <SectionCard title="Labor, markup and tax">
-            <View style={styles.grid}>{field(LABOR_FIELD, defaults)}</View>
             <ToggleGroup
               label="Price options by"
               value={draft.pricing}
@@ -110,6 +109,7 @@ export function ShopSettingsPanel() {
                 : 'Target margin is the share of the price kept: 30% margin on $1,000 of cost is a $1,428.57 price (cost ÷ 0.70).'}
             </Text>
             <View style={styles.grid}>
+              {field(LABOR_FIELD, defaults)}
               {field(draft.pricing === 'markup' ? MARKUP_FIELD : MARGIN_FIELD, defaults)}
               {field(TAX_FIELD, defaults)}
             </View>
@@ -156,9 +156,17 @@ export function ShopSettingsPanel() {
               Add a rebate tier
             </Button>
           </SectionCard>
-          <Button mode="text" icon="restore" onPress={resetDefaults} contentStyle={styles.button} testID="shop-reset-defaults">
-            Put the default figures back (tiers stay)
-          </Button>
+          <View style={styles.footer}>
+            <Button mode="text" icon="restore" onPress={resetDefaults} contentStyle={styles.button} testID="shop-reset-defaults">
+              Put the default figures back (tiers stay)
+            </Button>
+            {/* A second Save at the foot of the long form, so a phone need not scroll back up. */}
+            <Button mode="contained" icon="content-save-outline" onPress={onSave} loading={save.isPending} disabled={save.isPending} contentStyle={styles.button} testID="save-shop-settings-bottom">
+              Save
+            </Button>
+          </View>
+          {saved ? <MessageBanner tone="success">Saved.</MessageBanner> : null}
+          {Object.keys(errors).length ? <MessageBanner tone="error">Some entries need fixing (marked above).</MessageBanner> : null}
         </>
       ) : null}
     </Screen>
@@ -169,4 +177,5 @@ const styles = StyleSheet.create({
   button: { minHeight: TOUCH_TARGET },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
   cell: { flexGrow: 1, flexBasis: 220, minWidth: 200 },
+  footer: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'center', gap: spacing.md },
 });
