@@ -67,6 +67,8 @@ describe('Admin → Pricing at the phone viewport', () => {
     const added = DEFAULT_SHOP_SETTINGS.rebateTiers.length;
     await page.getByTestId(`tier-${added}-name`).fill('E2E shop tier');
     await page.getByTestId(`tier-${added}-hspf2`).fill('8.1');
+    await page.getByTestId('tier-add').scrollIntoViewIfNeeded();
+    await screenshot(page, 'shop-settings-tiers-phone');
     const save = page.getByTestId('save-shop-settings');
     expect((await save.boundingBox())!.height).toBeGreaterThanOrEqual(48);
     await save.click();
