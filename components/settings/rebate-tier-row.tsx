@@ -33,12 +33,14 @@ export function RebateTierRow({ tier, index, errors, onChange, onRemove }: Props
             Remove
           </Button>
         </View>
+        <Text variant="bodySmall">Minimum ratings: give at least one of SEER2, EER2 and HSPF2.</Text>
         <View style={styles.grid}>
           {TIER_FIELDS.map((f) => (
             <FormField
               key={f.key}
               style={f.key === 'name' || f.key === 'note' ? styles.wide : styles.cell}
-              label={f.label}
+              label={f.short}
+              accessibilityLabel={f.label}
               value={tier[f.key]}
               keyboardType={f.key === 'name' || f.key === 'note' ? 'default' : 'decimal-pad'}
               inputMode={f.key === 'name' || f.key === 'note' ? 'text' : 'decimal'}
@@ -59,6 +61,6 @@ const styles = StyleSheet.create({
   title: { flexShrink: 1 },
   button: { minHeight: TOUCH_TARGET },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
-  cell: { flexGrow: 1, flexBasis: 140, minWidth: 120 },
+  cell: { flexGrow: 1, flexBasis: 80, minWidth: 80 },
   wide: { flexGrow: 1, flexBasis: '100%' },
 });

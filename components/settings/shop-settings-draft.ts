@@ -38,13 +38,14 @@ const ALL_FIELDS: ShopField[] = [LABOR_FIELD, MARKUP_FIELD, MARGIN_FIELD, TAX_FI
 const fieldOf = (key: string) => ALL_FIELDS.find((f) => f.key === key);
 
 export const MAX_REBATE_TIERS = 20;
+/** `short` is what a narrow phone shows on the box (under a "Minimum ratings" caption); `label` is read aloud and used in errors. */
 export const TIER_FIELDS = [
-  { key: 'name', label: 'Tier name' },
-  { key: 'seer2', label: 'Minimum SEER2' },
-  { key: 'eer2', label: 'Minimum EER2' },
-  { key: 'hspf2', label: 'Minimum HSPF2' },
-  { key: 'note', label: 'Note (optional)' },
-] as const satisfies readonly { key: keyof ShopTierDraft; label: string }[];
+  { key: 'name', label: 'Tier name', short: 'Tier name' },
+  { key: 'seer2', label: 'Minimum SEER2', short: 'SEER2' },
+  { key: 'eer2', label: 'Minimum EER2', short: 'EER2' },
+  { key: 'hspf2', label: 'Minimum HSPF2', short: 'HSPF2' },
+  { key: 'note', label: 'Note (optional)', short: 'Note (optional)' },
+] as const satisfies readonly { key: keyof ShopTierDraft; label: string; short: string }[];
 
 /** Cents as dollars to type: 9500 → "95.00". */
 export function dollarsText(cents: number): string {
