@@ -46,6 +46,8 @@ export function ShopSettingsPanel() {
   }, [query.data, draft]);
 
   const edit = (next: ShopSettingsDraft) => (setDraft(next), setSaved(false));
+  // A field's message goes once it is retyped; the save checks everything again.
+  const clearError = (key: string) => errors[key] && setErrors(({ [key]: _gone, ...rest }) => rest);
   const onSave = () => {
     if (!draft) return;
     const built = bodyOf(draft);
@@ -65,7 +67,7 @@ export function ShopSettingsPanel() {
         value={draft.values[f.key]}
         keyboardType="decimal-pad"
         inputMode="decimal"
-        onChangeText={(v) => edit({ ...draft, values: { ...draft.values, [f.key]: v } })}
+        onChangeText={(v) => (edit({ ...draft, values: { ...draft.values, [f.key]: v } }), clearError(f.key))}
         error={errors[f.key]}
         hint={defaultHint(f, defaults)}
         testID={`shop-${f.key}`}

@@ -61,6 +61,9 @@ describe('Admin → Pricing at the phone viewport', () => {
 
     await page.getByTestId('shop-laborRateCents').fill('112.50');
     await page.getByTestId('shop-taxRatePct').fill('7.25');
+    // Retyped, the field's message and the banner go.
+    await expect.poll(() => page.getByText('Too big: enter 30 or less.').count()).toBe(0);
+    expect(await page.getByText('Some entries need fixing').count()).toBe(0);
     await page.getByTestId('pricing-margin').click();
     await page.getByTestId('shop-targetMarginPct').fill('28');
     await page.getByTestId('tier-add').click();
