@@ -61,8 +61,15 @@ async function firstLoad(browser: Browser, base: string): Promise<number> {
   await throttle(context, page);
   await page.addInitScript(shownAtScript('[data-testid="sign-in-email"]'));
   await page.goto('/sign-in');
-  await page.waitForFunction('window.__shownAt !== undefined', undefined, { timeout: 60_000 });
-  const ms = await page.evaluate<number>('window.__shownAt');
+  // waitForSelector, not waitForFunction: the app's CSP forbids eval, which a string predicate needs.
+  // The in-page observer has stamped the time when the field landed; the wait only says when to read it.
+  await page.waitForSelector('[data-testid="sign-in-email"]', { state: 'attached', timeout: 60_000 });
+  let ms: number | undefined;
+  for (let i = 0; i < 100 && ms === undefined; i++) {
+    ms = await page.evaluate<number | undefined>('window.__shownAt');
+    if (ms === undefined) await page.waitForTimeout(20);
+  }
+  if (ms === undefined) throw new Error('the sign-in form was not stamped');
   await context.close();
   return ms;
 }

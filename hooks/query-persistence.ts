@@ -3,8 +3,11 @@ import type { Query } from '@tanstack/react-query';
 import type { PersistQueryClientOptions } from '@tanstack/react-query-persist-client';
 import { OFFLINE_CACHE_MAX_AGE } from './stale-times';
 
-/** Query key prefixes kept on the device for offline checks: catalog lists/items and the rule settings. */
-const PERSISTED_PREFIXES: readonly (readonly string[])[] = [['catalog'], ['settings', 'rules']];
+/**
+ * Query key prefixes kept on the device: catalog lists/items and the rule settings (offline checks), and
+ * the records and jobs seen (a record edited with no signal still opens after a reload).
+ */
+const PERSISTED_PREFIXES: readonly (readonly string[])[] = [['catalog'], ['settings', 'rules'], ['systems', 'detail'], ['jobs']];
 
 /** Bump when a persisted response shape changes, so old copies are dropped. */
 const CACHE_BUSTER = 'tandem-offline-1';

@@ -8,6 +8,8 @@ export const STALE = {
   adminLists: 30_000,
   /** Jobs and records: shared between techs in the field. */
   jobs: 15_000,
+  /** Priced options on a job: an estimator and the office edit them; prices behind them change by import. */
+  options: 15_000,
   /** Shop rule settings: an admin changes them rarely; checks offline use the kept copy. */
   ruleSettings: 10 * 60_000,
   /** Shop pricing and estimate settings: an admin changes them rarely, from Admin → Pricing. */

@@ -1,8 +1,10 @@
 import { Redirect, Slot } from 'expo-router';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { BottomTabs, SideRail } from '@/components/navigation/app-navigation';
+import { useQueryClient } from '@tanstack/react-query';
+import { useOutboxSync } from '@/hooks/record-outbox';
 import { useIsWide } from '@/hooks/use-layout';
-import { useSession } from '@/hooks/use-session';
+import { useCurrentUser, useSession } from '@/hooks/use-session';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
 
 /** Signed-in group: guard, then tabs at the bottom on a phone or a rail at the side on a wide screen. */
@@ -19,8 +21,15 @@ export default function SignedInLayout() {
         <Slot />
       </View>
       {wide ? null : <BottomTabs />}
+      <OutboxSync />
     </View>
   );
+}
+
+/** Sends record changes kept with no signal, now and whenever it returns (only here: a session is set). */
+function OutboxSync() {
+  useOutboxSync(useQueryClient(), useCurrentUser().id);
+  return null;
 }
 
 const styles = StyleSheet.create({ fill: { flex: 1 }, row: { flexDirection: 'row' } });

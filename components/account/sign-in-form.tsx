@@ -36,7 +36,7 @@ export function SignInForm() {
       <ScrollView contentContainerStyle={styles.center} keyboardShouldPersistTaps="handled">
         <View style={[styles.card, { backgroundColor: theme.colors.surface, borderColor: theme.colors.outlineVariant }]}>
           <View style={styles.heading}>
-            <Text variant="displaySmall" style={{ color: theme.colors.primary }}>
+            <Text variant="displaySmall" role="heading" aria-level={1} style={{ color: theme.colors.primary }}>
               Tandem
             </Text>
             <Text variant="bodyLarge" style={{ color: theme.colors.onSurfaceVariant }}>

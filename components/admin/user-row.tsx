@@ -19,25 +19,29 @@ export const OWN_ROW_REASON = 'You can not change your own role or deactivate yo
 
 function RoleMenu({ user, isMe, onChange }: Pick<Props, 'user' | 'isMe' | 'onChange'>) {
   const [open, setOpen] = useState(false);
-  return (
-    <Menu
-      visible={open}
-      onDismiss={() => setOpen(false)}
-      anchor={
-        <Button
-          mode="outlined"
-          compact
-          icon="menu-down"
-          contentStyle={styles.touch}
-          disabled={isMe}
-          accessibilityHint={isMe ? OWN_ROW_REASON : undefined}
-          onPress={() => setOpen(true)}
-          testID={`role-${user.email}`}
-        >
-          {ROLE_LABELS[user.role]}
-        </Button>
-      }
+  // Paper's Menu focuses its anchor when its hide animation ends, and it runs that on mount too: mounted
+  // on first use only, so a page of rows does not pull focus (out of an open dialog, say).
+  const [used, setUsed] = useState(false);
+  const anchor = (
+    <Button
+      mode="outlined"
+      compact
+      icon="menu-down"
+      contentStyle={styles.touch}
+      disabled={isMe}
+      accessibilityHint={isMe ? OWN_ROW_REASON : undefined}
+      onPress={() => {
+        setUsed(true);
+        setOpen(true);
+      }}
+      testID={`role-${user.email}`}
     >
+      {ROLE_LABELS[user.role]}
+    </Button>
+  );
+  if (!used) return anchor;
+  return (
+    <Menu visible={open} onDismiss={() => setOpen(false)} anchor={anchor}>
       {ROLES.map((role) => (
         <Menu.Item
           key={role}

@@ -5,6 +5,7 @@ import type { CatalogKind } from '@/shared/schemas/equipment';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
 import { useCatalogDetail } from '@/hooks/use-catalog';
+import { useIsOnline } from '@/hooks/use-connection';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
 import { SectionCard } from '@/components/ui/section-card';
@@ -15,11 +16,16 @@ import { PriceList } from './price-list';
 import { SpecList } from './spec-list';
 import { specRows } from './spec-rows';
 
+/** Said instead of a spinner when the part was never opened with a signal: the phone does not hold it. */
+export const NOT_ON_PHONE = 'This part is not on the phone yet. It will load here when the signal returns.';
 
 /** One catalog item: every spec in plain words, prices by distributor, the rated combinations it is in. */
 export function CatalogDetail({ kind, id }: { kind: CatalogKind; id: number }) {
   const router = useRouter();
   const detail = useCatalogDetail(kind, id);
+  const online = useIsOnline();
+  // With no signal the query waits paused; a spinner would promise an answer that cannot come.
+  const waitingForSignal = detail.isPending && (!online || detail.fetchStatus === 'paused');
   const back = () => (router.canGoBack() ? router.back() : router.replace(`/catalog?kind=${kind}` as never));
   const data = detail.data;
   const summary = data ? summarize(kind, data.item) : undefined;
@@ -34,7 +40,13 @@ export function CatalogDetail({ kind, id }: { kind: CatalogKind; id: number }) {
         </Button>
       }
     >
-      {detail.isPending ? <ActivityIndicator /> : null}
+      {waitingForSignal ? (
+        <MessageBanner tone="info" testID="catalog-detail-offline">
+          {NOT_ON_PHONE}
+        </MessageBanner>
+      ) : detail.isPending ? (
+        <ActivityIndicator accessibilityLabel="Loading the part" />
+      ) : null}
       {detail.isError ? <MessageBanner tone="error">{errorText(detail.error)}</MessageBanner> : null}
       {data ? (
         <View style={styles.body}>

@@ -3,10 +3,14 @@ import { Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
 import type { CompatibleCoil } from '@/shared/schemas/coils';
 import { FindingGroups } from '@/components/check/finding-groups';
+import type { PickedPart } from '@/components/check/check-store';
+import { useCurrentUser } from '@/hooks/use-session';
+import { AddToOption } from './add-to-option';
 import { priceDetail, ratedFigures, regionalWords } from './coil-words';
 
 /** A coil's detail: rating with the outdoor unit, best price and every finding of its check. */
-export function CoilDetail({ item, state }: { item: CompatibleCoil; state?: string }) {
+export function CoilDetail({ item, state, outdoor, airHandler }: { item: CompatibleCoil; state?: string; outdoor?: PickedPart; airHandler?: PickedPart }) {
+  const user = useCurrentUser();
   const regional = regionalWords(item, state);
   return (
     <View style={styles.box} testID={`coil-detail-${item.coil.model}`}>
@@ -18,6 +22,7 @@ export function CoilDetail({ item, state }: { item: CompatibleCoil; state?: stri
       <Text variant="bodyMedium">Rating: {ratedFigures(item)}</Text>
       {regional ? <Text variant="bodyMedium">{regional}</Text> : null}
       <Text variant="bodyMedium">Best price: {priceDetail(item)}</Text>
+      {outdoor && user.role !== 'tech' && item.verdict !== 'incompatible' ? <AddToOption coil={item.coil} outdoor={outdoor} airHandler={airHandler} /> : null}
       {item.findings.length > 0 ? <FindingGroups findings={item.findings} /> : <Text variant="bodyMedium">No findings: every rule passed.</Text>}
     </View>
   );

@@ -30,7 +30,7 @@ function PartChoice({ title, slot, picked, onPick }: { title: string; slot: 'out
           <Text variant="bodyLarge" testID={`${slot}-picked`}>
             {picked.label}
           </Text>
-          <Button mode="outlined" onPress={() => onPick(undefined)} style={styles.button} accessibilityLabel={`Choose another ${title.toLowerCase()}`}>
+          <Button mode="outlined" onPress={() => onPick(undefined)} contentStyle={styles.touch} accessibilityLabel={`Change ${title.toLowerCase()}`}>
             Change
           </Button>
         </View>
@@ -83,7 +83,7 @@ export function CoilsScreen() {
             {items.map((item) => (
               <View key={item.coil.id}>
                 <CoilRow item={item} wide={wide} open={openId === item.coil.id} onPress={() => setOpenId(openId === item.coil.id ? undefined : item.coil.id)} />
-                {openId === item.coil.id ? <CoilDetail item={item} state={search.state} /> : null}
+                {openId === item.coil.id ? <CoilDetail item={item} state={search.state} outdoor={outdoor} airHandler={airHandler} /> : null}
               </View>
             ))}
           </View>
@@ -99,6 +99,7 @@ export function CoilsScreen() {
 const styles = StyleSheet.create({
   part: { gap: spacing.xs },
   picked: { flexDirection: 'row', alignItems: 'center', gap: spacing.md, flexWrap: 'wrap' },
-  button: { minHeight: TOUCH_TARGET, justifyContent: 'center' },
+  // Paper draws the pressable box from contentStyle: the minimum goes there, not on the outer style.
+  touch: { minHeight: TOUCH_TARGET },
   list: { gap: spacing.sm },
 });

@@ -1,13 +1,15 @@
 import { router } from 'expo-router';
 import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { ActivityIndicator, Button, Card, Chip, Icon, Text, TextInput } from 'react-native-paper';
+import { ActivityIndicator, Button, Card, Text, TextInput } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
 import { useJobs } from '@/hooks/use-jobs';
 import type { JobStatus } from '@/shared/schemas/jobs';
 import { MessageBanner } from '@/components/ui/message-banner';
+import { DecorativeIcon } from '@/components/ui/decorative-icon';
 import { Screen } from '@/components/ui/screen';
+import { ToggleGroup } from '@/components/ui/toggle-group';
 import { JOB_STATUS_WORDS, jobLine, pageCount, whenText } from './job-words';
 
 const PAGE_SIZE = 20;
@@ -49,29 +51,19 @@ export function JobsListScreen() {
         label="Search customer or address"
         value={text}
         onChangeText={setText}
-        left={<TextInput.Icon icon="magnify" accessibilityElementsHidden importantForAccessibility="no" />}
         accessibilityLabel="Search customer or address"
         testID="jobs-search"
       />
-      <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel="Status">
-        {FILTERS.map((f) => (
-          <Chip
-            key={f.value}
-            selected={status === f.value}
-            showSelectedCheck
-            onPress={() => {
-              setStatus(f.value);
-              setPage(1);
-            }}
-            style={styles.chip}
-            accessibilityRole="radio"
-            accessibilityState={{ checked: status === f.value }}
-            testID={`jobs-filter-${f.value}`}
-          >
-            {f.label}
-          </Chip>
-        ))}
-      </View>
+      <ToggleGroup
+        label="Status"
+        showLabel={false}
+        value={status}
+        onChange={(v) => {
+          setStatus(v);
+          setPage(1);
+        }}
+        options={FILTERS.map((f) => ({ ...f, testID: `jobs-filter-${f.value}` }))}
+      />
       {jobs.isPending ? <ActivityIndicator accessibilityLabel="Loading jobs" /> : null}
       {jobs.isError ? <MessageBanner tone="error">{errorText(jobs.error)}</MessageBanner> : null}
       {jobs.data && jobs.data.items.length === 0 ? (
@@ -89,7 +81,7 @@ export function JobsListScreen() {
                 <Text variant="bodySmall">{`Started ${whenText(job.createdAt)}`}</Text>
               </View>
               <View style={styles.status}>
-                <Icon source={job.status === 'open' ? 'progress-wrench' : 'check-circle-outline'} size={20} />
+                <DecorativeIcon source={job.status === 'open' ? 'progress-wrench' : 'check-circle-outline'} size={20} />
                 <Text variant="labelLarge">{JOB_STATUS_WORDS[job.status]}</Text>
               </View>
             </Card.Content>
@@ -113,8 +105,6 @@ export function JobsListScreen() {
 
 const styles = StyleSheet.create({
   button: { minHeight: TOUCH_TARGET },
-  chips: { flexDirection: 'row', gap: spacing.sm, flexWrap: 'wrap' },
-  chip: { minHeight: TOUCH_TARGET, justifyContent: 'center' },
   list: { gap: spacing.sm },
   card: { flexDirection: 'row', alignItems: 'center', gap: spacing.md, minHeight: TOUCH_TARGET },
   cardText: { flex: 1, gap: 2 },

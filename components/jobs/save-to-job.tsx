@@ -1,9 +1,12 @@
+import { onlineManager } from '@tanstack/react-query';
 import { router } from 'expo-router';
 import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Button, Chip, RadioButton, Text, TextInput } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { ApiError } from '@/hooks/api-client';
 import { errorText } from '@/hooks/error-text';
+import { queueCreate } from '@/hooks/record-outbox';
 import { useCreateJob, useJobs } from '@/hooks/use-jobs';
 import { useCreateSystem } from '@/hooks/use-systems';
 import { useZodForm } from '@/hooks/use-zod-form';
@@ -13,6 +16,7 @@ import { useCheckForm } from '@/components/check/check-store';
 import { AppDialog } from '@/components/ui/app-dialog';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { EMPTY_JOB, JobFields } from './job-form';
+import { whenText } from './job-words';
 
 /** "Save to job" under a check's answer: pick an open job (search) or start one; the record opens next. */
 export function SaveToJob() {
@@ -51,6 +55,19 @@ function SaveToJobDialog({ onDismiss }: { onDismiss(): void }) {
       setProblem('The check form has entries to fix first; run the check again.');
       return;
     }
+    // No signal: a record on an existing job is kept on the phone and sent when it returns (the job's
+    // page shows it as not yet sent); a new job needs the server to give it its number first.
+    const keepForLater = (target: number) => {
+      queueCreate(target, built.request, `check saved ${whenText(new Date().toISOString())}`);
+      onDismiss();
+      router.push(`/jobs/${target}`);
+    };
+    if (!onlineManager.isOnline()) {
+      if (mode === 'new') setProblem('A new job needs signal. Pick an existing job to keep this record on the phone until the signal returns.');
+      else if (jobId === null) setProblem('Pick a job, or start a new one.');
+      else keepForLater(jobId);
+      return;
+    }
     try {
       let target = jobId;
       if (mode === 'new') {
@@ -62,7 +79,15 @@ function SaveToJobDialog({ onDismiss }: { onDismiss(): void }) {
         setProblem('Pick a job, or start a new one.');
         return;
       }
-      const record = await createSystem.mutateAsync({ jobId: target, body: built.request });
+      const saveOn = target;
+      const record = await createSystem.mutateAsync({ jobId: saveOn, body: built.request }).catch((err: unknown) => {
+        if (err instanceof ApiError && err.kind === 'network') return null;
+        throw err;
+      });
+      if (!record) {
+        keepForLater(saveOn);
+        return;
+      }
       onDismiss();
       router.push(`/jobs/systems/${record.id}`);
     } catch (err) {

@@ -54,7 +54,7 @@ export function EvacuationSection({ draft, settings, altitudeFt, onChange }: Pro
   );
   return (
     <SectionCard title="Evacuation and pressure test" testID="evacuation">
-      <Text variant="titleSmall" accessibilityRole="header">
+      <Text variant="titleSmall" role="heading" aria-level={3}>
         Vacuum
       </Text>
       <View style={styles.row}>
@@ -63,7 +63,7 @@ export function EvacuationSection({ draft, settings, altitudeFt, onChange }: Pro
         {field('decayHoldMinutes', 'Hold (min)', `Shop hold: ${settings.decayHoldMinutes ?? 10} minutes.`)}
       </View>
       <VerdictLine verdict={outcome.evacuation} testID="evacuation-verdict" />
-      <Text variant="titleSmall" accessibilityRole="header">
+      <Text variant="titleSmall" role="heading" aria-level={3}>
         Nitrogen pressure test
       </Text>
       <View style={styles.row}>

@@ -16,7 +16,7 @@ interface Props {
 export function CommissioningSettings({ values, defaults, errors, onChange }: Props) {
   return (
     <View style={styles.section} testID="commissioning-settings">
-      <Text variant="titleMedium" accessibilityRole="header">
+      <Text variant="titleMedium" role="heading" aria-level={2}>
         Start-up readings
       </Text>
       <Text variant="bodySmall">

@@ -1,10 +1,14 @@
+import { onlineManager } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Button, Divider, Icon, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
+import { ApiError } from '@/hooks/api-client';
 import { errorText } from '@/hooks/error-text';
+import { hasWaiting, queueReading } from '@/hooks/record-outbox';
 import { useRuleSettings } from '@/hooks/use-rule-settings';
 import { useAddReading, type SavedReading, type SystemRecord } from '@/hooks/use-systems';
+import type { ReadingCreate } from '@/shared/schemas/systems';
 import { getRefrigerant } from '@/shared/refrigerants';
 import { DEFAULT_RULE_SETTINGS } from '@/shared/rules/settings';
 import { EvacuationSection } from '@/components/readings/evacuation-section';
@@ -36,13 +40,31 @@ export function RecordReadingsCard({ record, readOnly }: { record: SystemRecord;
   const body = readingBody(draft, evac, { charge: live.result !== undefined });
   const altitudeFt = readNumber(draft.values.altitudeFt).value ?? 0;
 
+  const [kept, setKept] = useState(false);
+  const done = (keptForLater: boolean) => {
+    setKept(keptForLater);
+    setDraft(draftFor(record));
+    setEvac(initialEvacuationDraft());
+    setAdding(false);
+  };
+  const keep = (reading: ReadingCreate) => {
+    // Taken now, sent later: the time is the moment it was read, not the moment the signal returned.
+    queueReading(record.id, { ...reading, takenAt: reading.takenAt ?? new Date().toISOString() });
+    done(true);
+  };
   const save = () => {
     if (!body) return;
+    if (!onlineManager.isOnline() || hasWaiting(record.id)) {
+      keep(body);
+      return;
+    }
     add.mutate(body, {
-      onSuccess: () => {
-        setDraft(draftFor(record));
-        setEvac(initialEvacuationDraft());
-        setAdding(false);
+      onSuccess: () => done(false),
+      onError: (err) => {
+        if (err instanceof ApiError && err.kind === 'network') {
+          add.reset();
+          keep(body);
+        }
       },
     });
   };
@@ -56,7 +78,12 @@ export function RecordReadingsCard({ record, readOnly }: { record: SystemRecord;
           <SavedReadingRow reading={r} />
         </View>
       ))}
-      {add.isSuccess && !adding ? (
+      {kept && !adding ? (
+        <MessageBanner tone="info" testID="reading-kept">
+          Reading kept on this phone: it is sent when the signal returns.
+        </MessageBanner>
+      ) : null}
+      {add.isSuccess && !adding && !kept ? (
         <MessageBanner tone="success" testID="reading-saved">
           Reading saved.
         </MessageBanner>

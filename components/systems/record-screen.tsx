@@ -4,6 +4,8 @@ import { ScrollView, StyleSheet, View } from 'react-native';
 import { ActivityIndicator, Button, Text } from 'react-native-paper';
 import { CONTENT_MAX_WIDTH, spacing, TOUCH_TARGET } from '@/constants/theme';
 import { errorText } from '@/hooks/error-text';
+import { useRecordOutbox } from '@/hooks/record-outbox';
+import { applyPending } from '@/hooks/record-outbox-queue';
 import { useIsWide } from '@/hooks/use-layout';
 import { useRevision, useSystem, type SystemRecord } from '@/hooks/use-systems';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
@@ -24,6 +26,7 @@ import { RECORD_STATUS_WORDS } from './record-words';
 import { ReportCard } from './report-card';
 import { SerialsCard } from './serials-card';
 import { useRecordSave } from './use-record-save';
+import { WaitingChanges } from './waiting-changes';
 
 /**
  * A matched-system record: the parts with serials, the verdict as it stood, findings, readings,
@@ -36,6 +39,7 @@ export function RecordScreen({ id }: { id: number }) {
   const [viewing, setViewing] = useState<number | null>(null);
   const older = useRevision(id, viewing);
   const saver = useRecordSave(latest.data);
+  const outbox = useRecordOutbox();
 
   if (latest.isPending) return <ActivityIndicator style={styles.loading} accessibilityLabel="Loading the record" />;
   if (latest.isError) {
@@ -45,7 +49,8 @@ export function RecordScreen({ id }: { id: number }) {
       </View>
     );
   }
-  const record: SystemRecord = viewing !== null && older.data ? older.data : latest.data;
+  // The latest revision as the tech left it on the phone: changes waiting for signal shown in place.
+  const record: SystemRecord = viewing !== null && older.data ? older.data : applyPending(latest.data, outbox.items);
   const readOnly = viewing !== null;
   const refrigerant = (record.parts.outdoor?.spec as { refrigerant?: string } | undefined)?.refrigerant;
 
@@ -76,6 +81,7 @@ export function RecordScreen({ id }: { id: number }) {
           </Button>
         </View>
       ) : null}
+      {viewing === null ? <WaitingChanges systemId={id} items={outbox.items} sendingId={outbox.sendingId} /> : null}
       {saver.error && !saver.conflict ? <MessageBanner tone="error">{errorText(saver.error)}</MessageBanner> : null}
     </>
   );
@@ -93,7 +99,7 @@ export function RecordScreen({ id }: { id: number }) {
   );
   const serials = (
     <SerialsCard
-      key={`${record.revision}-${record.savedAt}`}
+      key={`${record.revision}-${record.savedAt}-${JSON.stringify(record.serials)}`}
       record={record}
       readOnly={readOnly}
       saving={saver.pending}

@@ -43,10 +43,20 @@ export function useFocusTrap(ref: RefObject<View | null>, active: boolean, onEsc
         list[0].focus();
       }
     };
+    // Something behind the dialog taking focus by script (Paper's Menu focuses its anchor when its
+    // hide animation ends, even on mount) is sent back in; popups of the dialog's own are left alone.
+    const onFocusIn = (e: FocusEvent) => {
+      const box = root();
+      const target = e.target instanceof HTMLElement ? e.target : null;
+      if (!box || !target || box.contains(target) || target.closest('[role=menu],[role=listbox]')) return;
+      (focusables()[0] ?? box).focus();
+    };
     document.addEventListener('keydown', onKey, true);
+    document.addEventListener('focusin', onFocusIn, true);
     return () => {
       clearTimeout(start);
       document.removeEventListener('keydown', onKey, true);
+      document.removeEventListener('focusin', onFocusIn, true);
       if (previous?.isConnected) previous.focus();
     };
   }, [active, ref]);

@@ -1,4 +1,4 @@
-import { runChecks } from '../../shared/rules/engine';
+import { fixedFindings, runChecks, type KnownFindings } from '../../shared/rules/engine';
 import type { Pairing, RuleContext } from '../../shared/rules/types';
 import type { CoilsQuery, CompatibleCoil, CompatibleCoilsResponse } from '../../shared/schemas/coils';
 import { efficiencyFigures } from '../../shared/efficiency/pairing-figures';
@@ -22,11 +22,16 @@ function specOf(coil: IndoorCoil) {
   return spec;
 }
 
-/** The check of one coil with the fixed parts: the same engine, settings and scope as POST /api/checks. */
-function checkCoil(base: Pairing, context: RuleContext, coil: IndoorCoil, state: string | undefined): CompatibleCoil {
-  const spec = specOf(coil);
-  const pairing: Pairing = { ...base, indoorCoil: { spec, kept: false, id: coil.id } };
-  const result = runChecks(pairing, context);
+const withCoil = (base: Pairing, coil: IndoorCoil): Pairing => ({ ...base, indoorCoil: { spec: specOf(coil), kept: false, id: coil.id } });
+
+/**
+ * The check of one coil with the fixed parts: the same engine, settings and scope as POST /api/checks.
+ * `known` holds the findings of the rules that never read the coil, worked out once per search.
+ */
+function checkCoil(base: Pairing, context: RuleContext, known: KnownFindings, coil: IndoorCoil, state: string | undefined): CompatibleCoil {
+  const pairing = withCoil(base, coil);
+  const spec = pairing.indoorCoil!.spec;
+  const result = runChecks(pairing, context, undefined, known);
   const item: CompatibleCoil = { coil: { id: coil.id, ...spec, model: coil.model }, verdict: result.verdict, findings: result.findings };
   const combo = result.computed.ratedCombination as CompatibleCoil['ratedCombination'];
   if (combo) item.ratedCombination = combo;
@@ -36,7 +41,17 @@ function checkCoil(base: Pairing, context: RuleContext, coil: IndoorCoil, state:
   return item;
 }
 
-const cautionsOf = (item: CompatibleCoil) => item.findings.filter((f) => f.severity === 'caution').length;
+/** Cautions per item, counted once: the sort compares each item many times. */
+const cautionCounts = new WeakMap<CompatibleCoil, number>();
+function cautionsOf(item: CompatibleCoil): number {
+  let n = cautionCounts.get(item);
+  if (n === undefined) {
+    n = 0;
+    for (const f of item.findings) if (f.severity === 'caution') n++;
+    cautionCounts.set(item, n);
+  }
+  return n;
+}
 
 /** Rated combination first, then fewer cautions, then price (no price last), then model for a stable order. */
 export function compareCoils(a: CompatibleCoil, b: CompatibleCoil): number {
@@ -84,15 +99,18 @@ export async function compatibleCoils(ctx: AppContext, query: CoilsQuery, today?
     return query.q ? fuzzyFilter(filtered, query.q) : filtered;
   };
 
+  const candidates = select(narrowed);
+  const leftOut = query.includeIncompatible ? select(leftOutCandidates(coils, narrowed)) : [];
+  // The rules that never read the coil (line set, electrical, controls…) give the same findings for every candidate.
+  const probe = candidates[0] ?? leftOut[0];
+  const known = probe ? fixedFindings(withCoil(base, probe), context, 'indoorCoil') : [];
   const passing: CompatibleCoil[] = [];
   const failing: CompatibleCoil[] = [];
-  for (const coil of select(narrowed)) {
-    const item = checkCoil(base, context, coil, query.state);
+  for (const coil of candidates) {
+    const item = checkCoil(base, context, known, coil, query.state);
     (item.verdict === 'incompatible' ? failing : passing).push(item);
   }
-  if (query.includeIncompatible) {
-    for (const coil of select(leftOutCandidates(coils, narrowed))) failing.push(checkCoil(base, context, coil, query.state));
-  }
+  for (const coil of leftOut) failing.push(checkCoil(base, context, known, coil, query.state));
 
   const shown = query.includeIncompatible ? [...passing, ...failing] : passing;
   const prices = await currentPricesBatch(ctx, shown.map((i) => i.coil.model), today);

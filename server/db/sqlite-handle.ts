@@ -2,7 +2,15 @@ import type { EntityManager } from 'typeorm';
 
 /** The slice of better-sqlite3's Database that hot paths use (bulk writes, per-request lookups). */
 export interface RawSqlite {
-  prepare(sql: string): { run(...params: unknown[]): unknown; get(...params: unknown[]): unknown };
+  prepare(sql: string): RawStatement;
+}
+
+interface RawStatement {
+  run(...params: unknown[]): unknown;
+  get(...params: unknown[]): unknown;
+  all(...params: unknown[]): unknown[];
+  /** Rows as their first column's value. */
+  pluck(): RawStatement;
 }
 
 /**

@@ -8,6 +8,9 @@ import type { ImportPlan } from './import-plan';
 import { sqliteHandle } from '../db/sqlite-handle';
 
 const BATCH = 500;
+/** Rows written between two yields to the event loop (a few ms), so checks are answered during a large commit. */
+const ROWS_PER_SLICE = 2000;
+const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
 
 function chunks<T>(items: T[], size = BATCH): T[][] {
   const out: T[][] = [];
@@ -33,7 +36,11 @@ export async function applyCatalogPlan(manager: EntityManager, kind: CatalogKind
   for (const batch of chunks(changes)) await manager.insert(ImportChange, batch);
 }
 
-/** Writes a price plan for one distributor; on SQLite through prepared statements (100k rows in well under a second). */
+/**
+ * Writes a price plan for one distributor; on SQLite through prepared statements (100k rows in well
+ * under a second), yielding to the event loop every ROWS_PER_SLICE rows. The caller holds the write
+ * lock and the transaction throughout, so other writers wait and a crash still leaves all or nothing.
+ */
 export async function applyPricePlan(manager: EntityManager, distributorId: number, plan: ImportPlan, importId: number): Promise<void> {
   const entry = (v: Record<string, unknown>) => ({
     distributorId,
@@ -54,17 +61,23 @@ export async function applyPricePlan(manager: EntityManager, distributorId: numb
     const insert = raw.prepare(
       'INSERT INTO price_entries (distributorId, model, normalizedModel, priceCents, currency, effectiveFrom, description, importId) VALUES (?, ?, ?, ?, ?, ?, ?, ?)',
     );
+    let written = 0;
     for (const r of plan.inserts) {
       const e = entry(r.values);
       insert.run(e.distributorId, e.model, e.normalizedModel, e.priceCents, e.currency, e.effectiveFrom, e.description, e.importId);
+      if (++written % ROWS_PER_SLICE === 0) await nextTurn();
     }
     const update = raw.prepare('UPDATE price_entries SET model = ?, priceCents = ?, currency = ?, description = COALESCE(?, description), importId = ? WHERE id = ?');
     for (const { row, existing } of plan.updates) {
       const e = entry(row.values);
       update.run(e.model, e.priceCents, e.currency, e.description, importId, existing.id);
+      if (++written % ROWS_PER_SLICE === 0) await nextTurn();
     }
     const change = raw.prepare('INSERT INTO import_changes (importId, entity, rowId, before, beforeImportId) VALUES (?, ?, ?, ?, ?)');
-    for (const c of changes) change.run(c.importId, c.entity, c.rowId, c.before, c.beforeImportId);
+    for (const c of changes) {
+      change.run(c.importId, c.entity, c.rowId, c.before, c.beforeImportId);
+      if (++written % ROWS_PER_SLICE === 0) await nextTurn();
+    }
     return;
   }
   for (const batch of chunks(plan.inserts)) await manager.insert(PriceEntry, batch.map((r) => entry(r.values)));

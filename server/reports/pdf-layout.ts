@@ -1,15 +1,18 @@
 import path from 'node:path';
 import { openSync } from 'fontkit';
 import PDFDocument from 'pdfkit';
+import { drawCachedImage } from './image-cache';
+import { withSharedLayout } from './shared-font';
 
 export const FONT = { regular: 'Inter', medium: 'Inter-Medium', bold: 'Inter-Bold' } as const;
 const FONT_DIR = path.resolve(__dirname, '../../assets/fonts');
 
-// Parsed once per process and shared by every document: parsing and shaping with a fresh font
-// per report cost about twice the rest of the render. pdfkit takes a fontkit font as a font source.
+// Parsed once per process and shared by every document, with their shaping remembered across
+// documents (shared-font.ts): parsing and shaping per report cost about twice the rest of the render.
+// pdfkit takes a fontkit font as a font source.
 let fonts: Record<keyof typeof FONT, Buffer> | undefined;
 function sharedFonts() {
-  const open = (file: string) => openSync(path.join(FONT_DIR, file)) as unknown as Buffer;
+  const open = (file: string) => withSharedLayout(openSync(path.join(FONT_DIR, file))) as unknown as Buffer;
   fonts ??= { regular: open('Inter_400Regular.ttf'), medium: open('Inter_600SemiBold.ttf'), bold: open('Inter_700Bold.ttf') };
   return fonts;
 }
@@ -149,7 +152,7 @@ export class PdfLayout {
       const x = x0 + (i % 2) * (cellPt + gap);
       const y = top + 12 + Math.floor(i / 2) * (cellPt * 0.75 + 12);
       try {
-        this.doc.image(item.data, x, y, { fit: [cellPt, cellPt * 0.75], align: 'center', valign: 'center' });
+        drawCachedImage(this.doc, item.data, x, y, { fit: [cellPt, cellPt * 0.75], align: 'center', valign: 'center' });
       } catch {
         this.doc
           .rect(x, y, cellPt, cellPt * 0.75)

@@ -1,4 +1,5 @@
 import type { EntityManager } from 'typeorm';
+import type { QueryDeepPartialEntity } from 'typeorm/query-builder/QueryPartialEntity';
 import type { SystemCreate, SystemFinalize, SystemPatch } from '../../shared/schemas/systems';
 import { AttachmentRow } from '../attachments/attachment.entity';
 import type { AppContext } from '../context';
@@ -26,19 +27,27 @@ import { checklistOf, systemView, type SystemView } from './system-view';
 
 const nowIso = () => new Date().toISOString();
 
-/** POST /api/jobs/:id/systems: checks the parts as they stand and saves draft revision 1. */
+/**
+ * POST /api/jobs/:id/systems: checks the parts as they stand and saves draft revision 1.
+ * Everything slow (the job lookup, the check with prices, the names and settings the answer shows)
+ * happens before the write lock; under it only the two inserts run, so concurrent saves queue on
+ * milliseconds. The answer is built from what was inserted: a new record has no readings or photos.
+ */
 export async function createSystem(ctx: AppContext, jobId: number, body: SystemCreate, userId: number): Promise<SystemView> {
-  await requireJob(ctx, jobId);
-  const snapshot = await takeSnapshot(ctx, body);
-  const id = await withWriteLock(ctx, async (manager) => {
+  const [, snapshot, names, options] = await Promise.all([
+    requireJob(ctx, jobId),
+    takeSnapshot(ctx, body),
+    userNames(ctx.dataSource.manager, [userId]),
+    checklistOptions(ctx),
+  ]);
+  const { record, revision } = await withWriteLock(ctx, async (manager) => {
     const at = nowIso();
-    const record = await manager
-      .getRepository(SystemRecordRow)
-      .save({ jobId, status: 'draft', revision: 1, createdBy: userId, createdAt: at, updatedAt: at });
-    await insertRevision(manager, record.id, 1, body, snapshot, userId, at);
-    return record.id;
+    const records = manager.getRepository(SystemRecordRow);
+    const row = records.create({ jobId, status: 'draft', revision: 1, createdBy: userId, createdAt: at, updatedAt: at });
+    await records.insert(row); // sets row.id
+    return { record: row, revision: await insertRevision(manager, row.id, 1, body, snapshot, userId, at) };
   });
-  return loadView(ctx, id);
+  return systemView(record, revision, { readings: [], attachments: [], revisions: [revision], names, checklistOptions: options });
 }
 
 /** PATCH /api/systems/:id: a new draft revision from the one the edit started from. */
@@ -191,23 +200,25 @@ async function insertRevision(
   at: string,
 ) {
   const repo = manager.getRepository(SystemRevisionRow);
-  await repo.save(
-    repo.create({
-      systemId,
-      revision,
-      status: 'draft',
-      content,
-      check: snapshot.check,
-      rulesVersion: snapshot.check.rulesVersion,
-      verdict: snapshot.check.verdict,
-      parts: snapshot.parts,
-      ratedCombination: snapshot.ratedCombination,
-      prices: snapshot.prices,
-      savedBy: userId,
-      savedAt: at,
-      finalizedBy: null,
-      finalizedAt: null,
-      openItemsReason: null,
-    }),
-  );
+  // insert, not save: save() would first look the row up and wrap itself in a savepoint.
+  const row = repo.create({
+    systemId,
+    revision,
+    status: 'draft',
+    content,
+    check: snapshot.check,
+    rulesVersion: snapshot.check.rulesVersion,
+    verdict: snapshot.check.verdict,
+    parts: snapshot.parts,
+    ratedCombination: snapshot.ratedCombination,
+    prices: snapshot.prices,
+    savedBy: userId,
+    savedAt: at,
+    finalizedBy: null,
+    finalizedAt: null,
+    openItemsReason: null,
+  });
+  // The entity's JSON columns are plain objects; TypeORM's insert typing can not see that through Record<string, unknown>.
+  await repo.insert(row as QueryDeepPartialEntity<SystemRevisionRow>);
+  return row;
 }

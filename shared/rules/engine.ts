@@ -19,8 +19,14 @@ export const DEFAULT_CONTEXT: RuleContext = {
 
 const SEVERITY_RANK: Record<Severity, number> = { blocker: 0, caution: 1, info: 2 };
 
+/**
+ * Findings of some rules already worked out for this pairing's fixed parts (by rule index, from
+ * `fixedFindings`); an undefined entry is a rule that runs.
+ */
+export type KnownFindings = readonly (readonly Finding[] | undefined)[];
+
 /** Runs every registered rule on a resolved pairing; pure (no clock, no I/O). */
-export function runChecks(pairing: Pairing, context: RuleContext = DEFAULT_CONTEXT, rules: readonly Rule[] = RULES): CheckResult {
+export function runChecks(pairing: Pairing, context: RuleContext = DEFAULT_CONTEXT, rules: readonly Rule[] = RULES, known?: KnownFindings): CheckResult {
   const plan = planFor(rules);
   const findings: Finding[] = [];
   const notChecked: Coverage['notChecked'] = [];
@@ -28,7 +34,7 @@ export function runChecks(pairing: Pairing, context: RuleContext = DEFAULT_CONTE
   let ranMask = 0;
   for (let r = 0; r < rules.length; r++) {
     const rule = rules[r];
-    const out = rule.evaluate(pairing, context);
+    const out = known?.[r] ?? rule.evaluate(pairing, context);
     let lacked = false;
     for (let i = 0; i < out.length; i++) {
       const f = out[i];
@@ -51,6 +57,40 @@ export function runChecks(pairing: Pairing, context: RuleContext = DEFAULT_CONTE
     coverage: { ran, notChecked },
     computed: computedOf(pairing),
   };
+}
+
+/**
+ * For checking many candidates for one part against the same other parts (the coil search): the
+ * findings of every rule that does not read `part`, from one run on `pairing` (any candidate).
+ * Each rule runs on a proxy of the pairing that notes any read of `part` (get, `in`, keys); a rule
+ * that made none followed the same path it would with any other candidate, as rules are pure, so
+ * its findings hold for all of them. A fresh proxy per rule keeps a memo keyed on the pairing
+ * object from hiding one rule's read behind another's. Pass the result to `runChecks` as `known`.
+ */
+export function fixedFindings(pairing: Pairing, context: RuleContext, part: keyof Pairing, rules: readonly Rule[] = RULES): KnownFindings {
+  return rules.map((rule) => {
+    let read = false;
+    const watched = new Proxy(pairing, {
+      get: (target, key, receiver) => {
+        if (key === part) read = true;
+        return Reflect.get(target, key, receiver);
+      },
+      has: (target, key) => {
+        if (key === part) read = true;
+        return Reflect.has(target, key);
+      },
+      ownKeys: (target) => {
+        read = true;
+        return Reflect.ownKeys(target);
+      },
+      getOwnPropertyDescriptor: (target, key) => {
+        if (key === part) read = true;
+        return Reflect.getOwnPropertyDescriptor(target, key);
+      },
+    });
+    const out = rule.evaluate(watched, context);
+    return read ? undefined : out;
+  });
 }
 
 interface Plan {

@@ -1,5 +1,5 @@
 import type { Page } from 'playwright-core';
-import { expect } from 'vitest';
+import { expect, inject } from 'vitest';
 import { account, signIn } from './browser';
 import { adminToken, importCsv } from './api-setup';
 
@@ -29,11 +29,64 @@ const OUTDOOR_CSV = [
 const COIL_CSV = ['model,min_tons,max_tons,refrigerants,metering_type,metering_refrigerant,metering_bidirectional', `${COIL},2.5,3.5,R-22,txv,R-22,yes`].join('\n');
 const PREVIEW_CSV = ['model,system_type,refrigerant,nominal_tons', 'AUD-PREVIEW-1,ac,R-454B,2', 'AUD-PREVIEW-2,ac,R-454B,not-a-number'].join('\n');
 
-/** Puts the audits' parts in the catalog (once per run). */
+/** The job, system record and options job the audits open, made through the API by seedAuditData. */
+const seeded = { jobId: 0, systemId: 0, optionsJobId: 0 };
+
+async function api<T>(token: string, method: string, url: string, body?: unknown): Promise<T> {
+  const res = await fetch(`${inject('baseUrl')}${url}`, {
+    method,
+    headers: { Authorization: `Bearer ${token}`, ...(body ? { 'Content-Type': 'application/json' } : {}) },
+    body: body ? JSON.stringify(body) : undefined,
+  });
+  const text = await res.text();
+  expect(res.ok, `${method} ${url}: ${res.status} ${text}`).toBe(true);
+  return JSON.parse(text) as T;
+}
+
+async function catalogId(token: string, kind: string, model: string): Promise<number> {
+  const list = await api<{ items: { id: number }[] }>(token, 'GET', `/api/catalog/${kind}?q=${encodeURIComponent(model)}`);
+  expect(list.items.length, `${kind} ${model} in the catalog`).toBeGreaterThan(0);
+  return list.items[0].id;
+}
+
+/**
+ * Puts the audits' parts in the catalog, and one job with a system record whose report is sent
+ * (so the Outbox has a message), and a job with two priced options. Each test file runs it once.
+ */
 export async function seedAuditData(): Promise<void> {
   const token = await adminToken();
   await importCsv(token, 'outdoor-units', OUTDOOR_CSV, 'audit-outdoor.csv');
   await importCsv(token, 'indoor-coils', COIL_CSV, 'audit-coils.csv');
+  const job = await api<{ id: number }>(token, 'POST', '/api/jobs', {
+    customerName: 'Audit Example',
+    siteAddress: '7 Audit Row, Springfield',
+    state: 'TX',
+    contactEmail: 'audit-homeowner@example.test',
+  });
+  const record = await api<{ id: number }>(token, 'POST', `/api/jobs/${job.id}/systems`, {
+    scope: 'component-replacement',
+    site: { state: 'TX', indoorLocation: 'attic' },
+    outdoor: { id: await catalogId(token, 'outdoor-units', OUTDOOR) },
+    indoorCoil: { id: await catalogId(token, 'indoor-coils', COIL), kept: true },
+    serials: { outdoor: 'AUD-SN-0001' },
+  });
+  await api(token, 'POST', `/api/systems/${record.id}/send`, { to: 'audit-homeowner@example.test' });
+  seeded.jobId = job.id;
+  seeded.systemId = record.id;
+  const outdoorId = await catalogId(token, 'outdoor-units', OUTDOOR);
+  const optionsJob = await api<{ id: number }>(token, 'POST', '/api/jobs', { customerName: 'Audit Household', siteAddress: '3 Audit Way', state: 'GA', contactEmail: 'audit@example.test' });
+  seeded.optionsJobId = optionsJob.id;
+  for (const [name, cents, hours] of [
+    ['Outdoor unit only', 310_000, 6],
+    ['Outdoor unit and line set', 310_000, 9],
+  ] as const) {
+    await api(token, 'POST', `/api/jobs/${optionsJob.id}/options`, {
+      name,
+      outdoor: { id: outdoorId },
+      lines: [{ kind: 'outdoor-unit', model: OUTDOOR, quantity: 1, unitPriceCents: cents }],
+      laborHours: hours,
+    });
+  }
 }
 
 async function visible(page: Page, testId: string) {
@@ -170,6 +223,68 @@ export const AUDIT_SCREENS: AuditScreen[] = [
       await page.goto('/admin/pricing');
       await visible(page, 'save-shop-settings');
       await visible(page, 'tier-row-0');
+    },
+  },
+  {
+    name: 'readings',
+    role: 'tech',
+    open: async (page) => {
+      await page.goto('/readings');
+      await visible(page, 'reading-verdict');
+      await visible(page, 'chart-card');
+    },
+  },
+  {
+    name: 'jobs-list',
+    role: 'tech',
+    open: async (page) => {
+      await page.goto('/jobs');
+      await visible(page, 'jobs-list');
+      await expect.poll(() => page.getByTestId('jobs-list').textContent(), { timeout: 15_000 }).toContain('Audit Example');
+    },
+  },
+  {
+    name: 'job-detail',
+    role: 'tech',
+    open: async (page) => {
+      await page.goto(`/jobs/${seeded.jobId}`);
+      await visible(page, `record-${seeded.systemId}`);
+    },
+  },
+  {
+    name: 'system-record',
+    role: 'tech',
+    open: async (page) => {
+      await page.goto(`/jobs/systems/${seeded.systemId}`);
+      await visible(page, 'record-verdict');
+      await visible(page, 'record-status');
+    },
+  },
+  {
+    name: 'coils',
+    role: 'estimator',
+    open: async (page) => {
+      await page.goto('/coils');
+      await pick(page, 'outdoor', OUTDOOR);
+      await visible(page, 'coils-count');
+    },
+  },
+  {
+    name: 'admin-outbox',
+    role: 'admin',
+    open: async (page) => {
+      await page.goto('/admin/outbox');
+      await visible(page, 'outbox-list');
+      await expect.poll(() => page.getByTestId('outbox-list').textContent(), { timeout: 15_000 }).toContain('audit-homeowner@example.test');
+    },
+  },
+  {
+    name: 'job-options',
+    role: 'estimator',
+    open: async (page) => {
+      await page.goto(`/jobs/options/${seeded.optionsJobId}`);
+      await visible(page, 'option-cards');
+      await visible(page, 'option-card-Outdoor unit only');
     },
   },
   {

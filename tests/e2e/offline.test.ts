@@ -138,4 +138,23 @@ describe('the driveway with no signal, on a phone', () => {
     expect(await page.getByTestId('check-result').count()).toBe(0);
     await page.context().close();
   });
+
+  it('when a tech opens a catalog part never opened before with no signal, then the screen says it is not on the phone yet instead of spinning, and loads it when the signal returns', async () => {
+    const page = await openPage(browser, 'phone');
+    await signIn(page, account('tech'));
+    await page.goto('/catalog');
+    await page.getByTestId('catalog-search').fill(OUTDOOR);
+    await expect.poll(() => page.getByTestId(`catalog-item-${OUTDOOR}`).count(), { timeout: 15_000 }).toBe(1);
+
+    await page.context().setOffline(true);
+    await page.getByTestId(`catalog-item-${OUTDOOR}`).click();
+    await expect.poll(() => page.getByTestId('catalog-detail-offline').textContent(), { timeout: 15_000 }).toContain('not on the phone yet');
+    expect(await page.getByRole('progressbar').count()).toBe(0);
+    await screenshot(page, 'offline-catalog-detail-phone');
+
+    await page.context().setOffline(false);
+    await expect.poll(() => page.getByTestId('catalog-specs').count(), { timeout: 20_000 }).toBe(1);
+    expect(await page.getByTestId('catalog-detail-offline').count()).toBe(0);
+    await page.context().close();
+  });
 });
