@@ -31,5 +31,6 @@ export const ADMIN_SECTIONS: { href: string; segment: string; label: string; ico
   { href: '/admin/users', segment: 'users', label: 'Users', icon: 'account-multiple-outline' },
   { href: '/admin/imports', segment: 'imports', label: 'Imports', icon: 'file-upload-outline' },
   { href: '/admin/rules', segment: 'rules', label: 'Rules', icon: 'tune-variant' },
+  { href: '/admin/pricing', segment: 'pricing', label: 'Pricing', icon: 'cash-multiple' },
   { href: '/admin/outbox', segment: 'outbox', label: 'Outbox', icon: 'email-outline' },
 ];

@@ -12,6 +12,8 @@ export const STALE = {
   options: 15_000,
   /** Shop rule settings: an admin changes them rarely; checks offline use the kept copy. */
   ruleSettings: 10 * 60_000,
+  /** Shop pricing and estimate settings: an admin changes them rarely, from Admin → Pricing. */
+  shopSettings: 5 * 60_000,
 } as const;
 
 /** How long the offline cache keeps catalog items a tech viewed (ms). */

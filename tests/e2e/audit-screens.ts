@@ -217,6 +217,15 @@ export const AUDIT_SCREENS: AuditScreen[] = [
     },
   },
   {
+    name: 'admin-pricing',
+    role: 'admin',
+    open: async (page) => {
+      await page.goto('/admin/pricing');
+      await visible(page, 'save-shop-settings');
+      await visible(page, 'tier-row-0');
+    },
+  },
+  {
     name: 'readings',
     role: 'tech',
     open: async (page) => {

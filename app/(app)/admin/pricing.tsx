@@ -1,0 +1,5 @@
+import { ShopSettingsPanel } from '@/components/settings/shop-settings-panel';
+
+export default function PricingScreen() {
+  return <ShopSettingsPanel />;
+}
