@@ -6,10 +6,9 @@ import { ApiError, queryString } from '@/hooks/api-client';
 import { errorText } from '@/hooks/error-text';
 import { energyParams, useSendProposal } from '@/hooks/use-options';
 import { ProposalSendSchema, type EnergyQuery } from '@/shared/schemas/options';
-import { AppDialog } from '@/components/ui/app-dialog';
-import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { SectionCard } from '@/components/ui/section-card';
+import { SendEmailDialog } from '@/components/ui/send-email-dialog';
 import { openPdf } from '@/components/systems/open-pdf';
 
 interface Props {
@@ -69,43 +68,22 @@ export function ProposalCard({ jobId, contactEmail, energy, optionCount }: Props
           Send to customer
         </Button>
       </View>
-      <AppDialog
+      <SendEmailDialog
         visible={open}
-        onDismiss={() => setOpen(false)}
         title="E-mail the proposal"
-        testID="proposal-send-dialog"
-        actions={
-          <>
-            <Button onPress={() => setOpen(false)} contentStyle={styles.button}>
-              Cancel
-            </Button>
-            {askAgain ? (
-              <Button mode="contained" onPress={() => doSend(true)} loading={send.isPending} contentStyle={styles.button} testID="proposal-send-again">
-                Send again
-              </Button>
-            ) : (
-              <Button mode="contained" onPress={() => doSend(false)} loading={send.isPending} contentStyle={styles.button} testID="proposal-send-confirm">
-                Send
-              </Button>
-            )}
-          </>
-        }
-      >
-        <FormField
-          label="Send to"
-          value={address}
-          onChangeText={(v) => {
-            setTo(v);
-            setAskAgain(null);
-          }}
-          error={toError}
-          keyboardType="email-address"
-          autoCapitalize="none"
-          testID="proposal-send-to"
-        />
-        {askAgain ? <MessageBanner tone="info">{askAgain}</MessageBanner> : null}
-        {send.isError && !askAgain ? <MessageBanner tone="error">{errorText(send.error)}</MessageBanner> : null}
-      </AppDialog>
+        testIdPrefix="proposal-send"
+        address={address}
+        addressError={toError}
+        askAgain={askAgain}
+        pending={send.isPending}
+        error={send.isError ? send.error : null}
+        onAddressChange={(v) => {
+          setTo(v);
+          setAskAgain(null);
+        }}
+        onSend={doSend}
+        onDismiss={() => setOpen(false)}
+      />
     </SectionCard>
   );
 }

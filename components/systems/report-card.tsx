@@ -11,6 +11,7 @@ import { AppDialog } from '@/components/ui/app-dialog';
 import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { SectionCard } from '@/components/ui/section-card';
+import { SendEmailDialog } from '@/components/ui/send-email-dialog';
 import { openPdf } from './open-pdf';
 
 /** Finalize the record, open its PDF report, and e-mail it (to the job's contact unless changed). */
@@ -122,43 +123,22 @@ export function ReportCard({ record, viewingRevision }: { record: SystemRecord; 
         {finalize.isError ? <MessageBanner tone="error">{errorText(finalize.error)}</MessageBanner> : null}
       </AppDialog>
 
-      <AppDialog
+      <SendEmailDialog
         visible={sending}
-        onDismiss={() => setSending(false)}
         title="E-mail the report"
-        testID="send-dialog"
-        actions={
-          <>
-            <Button onPress={() => setSending(false)} contentStyle={styles.button}>
-              Cancel
-            </Button>
-            {askAgain ? (
-              <Button mode="contained" onPress={() => doSend(true)} loading={send.isPending} contentStyle={styles.button} testID="send-again">
-                Send again
-              </Button>
-            ) : (
-              <Button mode="contained" onPress={() => doSend(false)} loading={send.isPending} contentStyle={styles.button} testID="send-confirm">
-                Send
-              </Button>
-            )}
-          </>
-        }
-      >
-        <FormField
-          label="Send to"
-          value={address}
-          onChangeText={(v) => {
-            setTo(v);
-            setAskAgain(null);
-          }}
-          error={toError}
-          keyboardType="email-address"
-          autoCapitalize="none"
-          testID="send-to"
-        />
-        {askAgain ? <MessageBanner tone="info">{askAgain}</MessageBanner> : null}
-        {send.isError && !askAgain ? <MessageBanner tone="error">{errorText(send.error)}</MessageBanner> : null}
-      </AppDialog>
+        testIdPrefix="send"
+        address={address}
+        addressError={toError}
+        askAgain={askAgain}
+        pending={send.isPending}
+        error={send.isError ? send.error : null}
+        onAddressChange={(v) => {
+          setTo(v);
+          setAskAgain(null);
+        }}
+        onSend={doSend}
+        onDismiss={() => setSending(false)}
+      />
     </SectionCard>
   );
 }

@@ -1,12 +1,9 @@
 import type { ProposalSend, ProposalSendResult } from '../../shared/schemas/options';
 import type { AppContext } from '../context';
-import { withWriteLock } from '../db/write-transaction';
 import { AppError } from '../lib/errors';
 import { renderProposal } from '../reports/proposal-report';
 import { SAFETY_NOTE } from '../reports/report-text';
-import { storageFor } from '../storage/storage-for';
-import { createMailTransport } from './mail-transport';
-import { OutboundEmailRow } from './outbound-email.entity';
+import { deliverPdf } from './deliver';
 import { assertNotRecentlySent } from './resend-guard';
 
 /**
@@ -23,31 +20,12 @@ export async function sendProposal(ctx: AppContext, jobId: number, body: Proposa
   const shop = ctx.config.shopName ?? 'Tandem';
   const subject = `${shop}: your heating and cooling options for ${job.siteAddress}`.slice(0, 200);
   const attempt = { systemId: null, revision: null, jobId, to: body.to, subject, sentBy: userId, createdAt: new Date().toISOString() };
-  let messageId: string;
-  try {
-    const info = await createMailTransport(smtp).sendMail({
-      from: { name: shop, address: smtp.from },
-      to: body.to,
-      subject,
-      text: `Hello ${job.customerName},\n\nAttached are the options we discussed for ${job.siteAddress}, with prices, the compatibility check, rated efficiency and estimated energy savings.\n\nSafety: ${SAFETY_NOTE}\n\n${shop}\n`,
-      attachments: [{ filename: fileName, content: pdf, contentType: 'application/pdf' }],
-    });
-    messageId = info.messageId;
-  } catch (err) {
-    const reason = err instanceof Error ? err.message.slice(0, 300) : 'unknown error';
-    await withWriteLock(ctx, (manager) =>
-      manager
-        .getRepository(OutboundEmailRow)
-        .insert({ ...attempt, status: 'failed', messageId: null, error: reason, reportKey: null, reportFileName: null }),
-    );
-    ctx.logger.warn({ jobId, err: reason }, 'proposal e-mail failed');
-    throw new AppError('mail-failed', 'The mail server did not accept the proposal. Nothing was sent; try again later.', 502, { reason });
-  }
-  const reportKey = await storageFor(ctx).put(pdf);
-  const row = await withWriteLock(ctx, (manager) =>
-    manager
-      .getRepository(OutboundEmailRow)
-      .save({ ...attempt, status: 'sent', messageId, error: null, reportKey, reportFileName: fileName }),
-  );
-  return { emailId: row.id, messageId, to: body.to };
+  const row = await deliverPdf(ctx, smtp, attempt, {
+    fromName: shop,
+    text: `Hello ${job.customerName},\n\nAttached are the options we discussed for ${job.siteAddress}, with prices, the compatibility check, rated efficiency and estimated energy savings.\n\nSafety: ${SAFETY_NOTE}\n\n${shop}\n`,
+    pdf,
+    fileName,
+    what: 'proposal',
+  });
+  return { emailId: row.id, messageId: row.messageId, to: body.to };
 }

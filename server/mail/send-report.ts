@@ -1,14 +1,11 @@
 import type { SendReport } from '../../shared/schemas/systems';
 import type { AppContext } from '../context';
-import { withWriteLock } from '../db/write-transaction';
 import { JobRow } from '../jobs/job.entity';
 import { AppError } from '../lib/errors';
 import { renderSystemReport } from '../reports/system-report';
 import { SAFETY_NOTE } from '../reports/report-text';
-import { storageFor } from '../storage/storage-for';
 import { loadCurrent } from '../systems/systems.service';
-import { createMailTransport } from './mail-transport';
-import { OutboundEmailRow } from './outbound-email.entity';
+import { deliverPdf } from './deliver';
 import { outboxView } from './outbox.service';
 import { assertNotRecentlySent } from './resend-guard';
 
@@ -28,31 +25,12 @@ export async function sendReport(ctx: AppContext, id: number, body: SendReport, 
   const subject = `${shop}: system record for ${job.siteAddress} (revision ${report.revision})`.slice(0, 200);
   const attempt = { systemId: id, revision: report.revision, to: body.to, subject, sentBy: userId, createdAt: new Date().toISOString() };
 
-  let messageId: string;
-  try {
-    const info = await createMailTransport(smtp).sendMail({
-      from: { name: shop, address: smtp.from },
-      to: body.to,
-      subject,
-      text: `Hello ${job.customerName},\n\nAttached is the record of the heating and cooling system installed at ${job.siteAddress}: the equipment with serial numbers, the compatibility check, the start-up readings and the checklist.\n\nSafety: ${SAFETY_NOTE}\n\n${shop}\n`,
-      attachments: [{ filename: report.fileName, content: report.pdf, contentType: 'application/pdf' }],
-    });
-    messageId = info.messageId;
-  } catch (err) {
-    const reason = err instanceof Error ? err.message.slice(0, 300) : 'unknown error';
-    await withWriteLock(ctx, (manager) =>
-      manager
-        .getRepository(OutboundEmailRow)
-        .insert({ ...attempt, status: 'failed', messageId: null, error: reason, reportKey: null, reportFileName: null }),
-    );
-    ctx.logger.warn({ systemId: id, err: reason }, 'report e-mail failed');
-    throw new AppError('mail-failed', 'The mail server did not accept the report. Nothing was sent; try again later.', 502, { reason });
-  }
-  const reportKey = await storageFor(ctx).put(report.pdf);
-  const row = await withWriteLock(ctx, (manager) =>
-    manager
-      .getRepository(OutboundEmailRow)
-      .save({ ...attempt, status: 'sent', messageId, error: null, reportKey, reportFileName: report.fileName }),
-  );
+  const row = await deliverPdf(ctx, smtp, attempt, {
+    fromName: shop,
+    text: `Hello ${job.customerName},\n\nAttached is the record of the heating and cooling system installed at ${job.siteAddress}: the equipment with serial numbers, the compatibility check, the start-up readings and the checklist.\n\nSafety: ${SAFETY_NOTE}\n\n${shop}\n`,
+    pdf: report.pdf,
+    fileName: report.fileName,
+    what: 'report',
+  });
   return outboxView(row);
 }
