@@ -175,21 +175,25 @@ export function useRecordOutbox(): { items: RecordOutboxItem[]; sendingId: strin
 }
 
 /**
+ * Chooses whose queue the screens read (another person signed in on this phone reads their own, not the
+ * last person's). Called while the signed-in layout renders, before its screens read the queue.
+ */
+export function selectOutboxOwner(userId: number): void {
+  if (ownerId === userId) return;
+  ownerId = userId;
+  items = null;
+}
+
+/**
  * Mounted once inside the signed-in screens (a token is set): sends what waits now, and again each
  * time the signal returns.
  */
-export function useOutboxSync(queryClient: QueryClient, userId: number) {
+export function useOutboxSync(queryClient: QueryClient) {
   useEffect(() => {
-    if (ownerId !== userId) {
-      // Another person signed in on this phone: their own queue, not the last person's.
-      ownerId = userId;
-      items = null;
-      listeners.forEach((l) => l());
-    }
     client = queryClient;
     void flushOutbox();
     return onlineManager.subscribe((online) => {
       if (online) void flushOutbox();
     });
-  }, [queryClient, userId]);
+  }, [queryClient]);
 }

@@ -2,9 +2,9 @@ import { Redirect, Slot } from 'expo-router';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { BottomTabs, SideRail } from '@/components/navigation/app-navigation';
 import { useQueryClient } from '@tanstack/react-query';
-import { useOutboxSync } from '@/hooks/record-outbox';
+import { selectOutboxOwner, useOutboxSync } from '@/hooks/record-outbox';
 import { useIsWide } from '@/hooks/use-layout';
-import { useCurrentUser, useSession } from '@/hooks/use-session';
+import { useSession } from '@/hooks/use-session';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
 
 /** Signed-in group: guard, then tabs at the bottom on a phone or a rail at the side on a wide screen. */
@@ -14,6 +14,7 @@ export default function SignedInLayout() {
   const theme = useTandemTheme();
   if (!ready) return <ActivityIndicator style={styles.fill} />;
   if (!session) return <Redirect href="/sign-in" />;
+  selectOutboxOwner(session.user.id);
   return (
     <View style={[styles.fill, wide && styles.row, { backgroundColor: theme.colors.background }]}>
       {wide ? <SideRail /> : null}
@@ -28,7 +29,7 @@ export default function SignedInLayout() {
 
 /** Sends record changes kept with no signal, now and whenever it returns (only here: a session is set). */
 function OutboxSync() {
-  useOutboxSync(useQueryClient(), useCurrentUser().id);
+  useOutboxSync(useQueryClient());
   return null;
 }
 
