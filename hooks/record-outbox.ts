@@ -24,10 +24,20 @@ import {
 
 export type RecordOutboxItem = OutboxItem<SystemRecord>;
 
-// One queue per signed-in user: changes made by one person are never sent with another's token.
-const STORAGE_PREFIX = 'tandem-record-outbox';
-let ownerId: number | undefined;
-const storageKey = () => `${STORAGE_PREFIX}:${ownerId ?? 'none'}`;
+const STORAGE_KEY = 'tandem-record-outbox';
+// Who queued what waits: it is sent only while that person is signed in, never with another's token.
+const OWNER_KEY = 'tandem-record-outbox-owner';
+let signedInUserId: number | undefined;
+
+function queueOwner(): number | undefined {
+  const raw = storage()?.getItem(OWNER_KEY);
+  return raw ? Number(raw) : undefined;
+}
+
+/** Called while the signed-in layout renders: whose changes may be sent now. */
+export function selectOutboxOwner(userId: number): void {
+  signedInUserId = userId;
+}
 
 function storage(): Storage | undefined {
   try {
@@ -39,7 +49,7 @@ function storage(): Storage | undefined {
 
 function readKept(): RecordOutboxItem[] {
   try {
-    const raw = ownerId === undefined ? null : storage()?.getItem(storageKey());
+    const raw = storage()?.getItem(STORAGE_KEY);
     const parsed: unknown = raw ? JSON.parse(raw) : [];
     return Array.isArray(parsed) ? (parsed as RecordOutboxItem[]) : [];
   } catch {
@@ -58,7 +68,9 @@ const current = () => (items ??= readKept());
 function store(next: RecordOutboxItem[]) {
   items = next;
   try {
-    if (ownerId !== undefined) storage()?.setItem(storageKey(), JSON.stringify(next));
+    storage()?.setItem(STORAGE_KEY, JSON.stringify(next));
+    if (next.length === 0) storage()?.removeItem(OWNER_KEY);
+    else if (queueOwner() === undefined && signedInUserId !== undefined) storage()?.setItem(OWNER_KEY, String(signedInUserId));
   } catch {
     // A full or refused storage keeps the queue in memory for this visit.
   }
@@ -132,13 +144,9 @@ async function send(item: RecordOutboxItem): Promise<SendOutcome<SystemRecord>> 
 export function flushOutbox(): Promise<void> {
   if (flushing) return flushing;
   if (!onlineManager.isOnline() || current().length === 0) return Promise.resolve();
-  // A flush belongs to the user who started it: if another signs in meanwhile, it stops touching the queue.
-  const owner = ownerId;
-  const mine = () => (ownerId === owner ? current() : []);
-  const keep = (next: RecordOutboxItem[]) => {
-    if (ownerId === owner) store(next);
-  };
-  flushing = replay(mine, keep, send, (id) => {
+  const owner = queueOwner();
+  if (owner !== undefined && owner !== signedInUserId) return Promise.resolve();
+  flushing = replay(current, store, send, (id) => {
     sendingId = id;
     listeners.forEach((l) => l());
   })
@@ -172,16 +180,6 @@ export function useRecordOutbox(): { items: RecordOutboxItem[]; sendingId: strin
     () => undefined,
   );
   return { items: list, sendingId: sending };
-}
-
-/**
- * Chooses whose queue the screens read (another person signed in on this phone reads their own, not the
- * last person's). Called while the signed-in layout renders, before its screens read the queue.
- */
-export function selectOutboxOwner(userId: number): void {
-  if (ownerId === userId) return;
-  ownerId = userId;
-  items = null;
 }
 
 /**
