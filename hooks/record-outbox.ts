@@ -25,6 +25,8 @@ import {
 export type RecordOutboxItem = OutboxItem<SystemRecord>;
 
 const STORAGE_KEY = 'tandem-record-outbox';
+/** How long a freshly opened app waits before sending what waits (its connection state settles first). */
+const BOOT_SETTLE_MS = 1500;
 // Who queued what waits: it is sent only while that person is signed in, never with another's token.
 const OWNER_KEY = 'tandem-record-outbox-owner';
 let signedInUserId: number | undefined;
@@ -143,7 +145,8 @@ async function send(item: RecordOutboxItem): Promise<SendOutcome<SystemRecord>> 
 /** Sends what waits, once at a time; a no-op while offline or already sending. */
 export function flushOutbox(): Promise<void> {
   if (flushing) return flushing;
-  if (!onlineManager.isOnline() || current().length === 0) return Promise.resolve();
+  const browserOffline = typeof navigator !== 'undefined' && navigator.onLine === false;
+  if (browserOffline || !onlineManager.isOnline() || current().length === 0) return Promise.resolve();
   const owner = queueOwner();
   if (owner !== undefined && owner !== signedInUserId) return Promise.resolve();
   flushing = replay(current, store, send, (id) => {
@@ -189,9 +192,15 @@ export function useRecordOutbox(): { items: RecordOutboxItem[]; sendingId: strin
 export function useOutboxSync(queryClient: QueryClient) {
   useEffect(() => {
     client = queryClient;
-    void flushOutbox();
-    return onlineManager.subscribe((online) => {
+    // Not at once: a page that has just opened does not yet know whether it has a signal (a write sent in
+    // that moment can land while its answer is lost). Once the connection state has settled, send.
+    const settle = setTimeout(() => void flushOutbox(), BOOT_SETTLE_MS);
+    const unsubscribe = onlineManager.subscribe((online) => {
       if (online) void flushOutbox();
     });
+    return () => {
+      clearTimeout(settle);
+      unsubscribe();
+    };
   }, [queryClient]);
 }

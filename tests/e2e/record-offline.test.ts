@@ -50,6 +50,11 @@ async function openRecord(page: Page, id: number) {
   await expect.poll(() => page.getByTestId('serial-outdoor').count(), { timeout: 20_000 }).toBe(1);
 }
 
+/** The app has seen the signal go (its banner is up): a save made now is queued, never sent half-online. */
+async function appKnowsItIsOffline(page: Page) {
+  await expect.poll(() => page.getByTestId('connection-banner').count(), { timeout: 15_000 }).toBe(1);
+}
+
 const waitingText = (page: Page) => page.getByTestId('record-waiting-count').textContent();
 
 beforeAll(async () => {
@@ -84,6 +89,7 @@ describe('a record edited with no signal, on a phone (390×844)', () => {
     await expect.poll(() => page.evaluate<string>("localStorage.getItem('tandem-query-cache') ?? ''"), { timeout: 10_000 }).toContain('OFL-SN-0001');
 
     await page.context().setOffline(true);
+    await appKnowsItIsOffline(page);
     await page.getByTestId('serial-outdoor').fill('OFL-SN-0099');
     await page.getByTestId('serial-indoorCoil').fill('OFL-SN-0100');
     await page.getByTestId('serials-save').click();
@@ -129,6 +135,7 @@ describe('a record edited with no signal, on a phone (390×844)', () => {
     await openRecord(page, made.id);
 
     await page.context().setOffline(true);
+    await appKnowsItIsOffline(page);
     await page.getByTestId('serial-outdoor').fill('OFL-SN-PHONE');
     await page.getByTestId('serials-save').click();
     await expect.poll(() => waitingText(page)).toContain('1 change waiting for signal');
