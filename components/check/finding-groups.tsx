@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { Text } from 'react-native-paper';
+import { isMissingFacts } from '@/shared/rules/define-rule';
 import type { Finding, Severity } from '@/shared/rules/types';
 import { spacing } from '@/constants/theme';
 import { DecorativeIcon } from '@/components/ui/decorative-icon';
@@ -26,8 +27,12 @@ export function FindingGroup({ severity, findings }: { severity: Severity; findi
   );
 }
 
-/** Blockers, cautions and notes in that order (screens without a Safety block between them). */
-export function FindingGroups({ findings }: { findings: Finding[] }) {
+/**
+ * Blockers, cautions and notes in that order (screens without a Safety block between them). "Facts not
+ * given" notes are left to the screen's Not checked block, as on the Check screen.
+ */
+export function FindingGroups({ findings: all }: { findings: Finding[] }) {
+  const findings = all.filter((f) => !isMissingFacts(f));
   return (
     <>
       {SEVERITY_GROUPS.map((g) => (

@@ -2,6 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { Text } from 'react-native-paper';
 import { spacing } from '@/constants/theme';
 import type { CompatibleCoil } from '@/shared/schemas/coils';
+import { isMissingFacts } from '@/shared/rules/define-rule';
 import { FindingGroups } from '@/components/check/finding-groups';
 import type { PickedPart } from '@/components/check/check-store';
 import { useCurrentUser } from '@/hooks/use-session';
@@ -23,7 +24,7 @@ export function CoilDetail({ item, state, outdoor, airHandler }: { item: Compati
       {regional ? <Text variant="bodyMedium">{regional}</Text> : null}
       <Text variant="bodyMedium">Best price: {priceDetail(item)}</Text>
       {outdoor && user.role !== 'tech' && item.verdict !== 'incompatible' ? <AddToOption coil={item.coil} outdoor={outdoor} airHandler={airHandler} /> : null}
-      {item.findings.length > 0 ? <FindingGroups findings={item.findings} /> : <Text variant="bodyMedium">No findings: every rule passed.</Text>}
+      {item.findings.some((f) => !isMissingFacts(f)) ? <FindingGroups findings={item.findings} /> : <Text variant="bodyMedium">No findings: every rule passed.</Text>}
     </View>
   );
 }

@@ -9,6 +9,7 @@ import { applyPending } from '@/hooks/record-outbox-queue';
 import { useIsWide } from '@/hooks/use-layout';
 import { useRevision, useSystem, type SystemRecord } from '@/hooks/use-systems';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { CoverageBlock } from '@/components/check/coverage-block';
 import { FindingGroups } from '@/components/check/finding-groups';
 import { safetyPoints } from '@/components/check/safety-points';
 import { VerdictBanner } from '@/components/check/verdict-banner';
@@ -95,6 +96,7 @@ export function RecordScreen({ id }: { id: number }) {
         </MessageBanner>
       ) : null}
       <FindingGroups findings={record.check.findings} />
+      <CoverageBlock coverage={record.check.coverage} />
     </SectionCard>
   );
   const serials = (
