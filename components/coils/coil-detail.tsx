@@ -24,7 +24,7 @@ export function CoilDetail({ item, state, outdoor, airHandler }: { item: Compati
       {regional ? <Text variant="bodyMedium">{regional}</Text> : null}
       <Text variant="bodyMedium">Best price: {priceDetail(item)}</Text>
       {outdoor && user.role !== 'tech' && item.verdict !== 'incompatible' ? <AddToOption coil={item.coil} outdoor={outdoor} airHandler={airHandler} /> : null}
-      {item.findings.some((f) => !isMissingFacts(f)) ? <FindingGroups findings={item.findings} /> : <Text variant="bodyMedium">No findings: every rule passed.</Text>}
+      {item.findings.some((f) => !isMissingFacts(f)) ? <FindingGroups findings={item.findings} /> : <Text variant="bodyMedium">No problems found with the facts given.</Text>}
     </View>
   );
 }
