@@ -49,5 +49,5 @@ const styles = StyleSheet.create({
   inner: { width: '100%', maxWidth: CONTENT_MAX_WIDTH, alignSelf: 'center', padding: spacing.lg, gap: spacing.lg, flexGrow: 1 },
   header: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', gap: spacing.md },
   titles: { flex: 1, minWidth: 200, gap: 2 },
-  actions: { flexDirection: 'row', gap: spacing.sm, flexWrap: 'wrap' },
+  actions: { flexDirection: 'row', gap: spacing.sm, flexWrap: 'wrap', maxWidth: '100%' },
 });
