@@ -34,6 +34,10 @@ export interface DatabaseDialect {
   ): Promise<void>;
   /** Every catalog kind's version counter (catalog_versions), read once per request. */
   catalogVersions(dataSource: DataSource): Promise<Map<string, number>>;
+  /** Whether the entity's table has a row with this id (a prepared read: one per record save). */
+  hasRow<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, id: number): Promise<boolean>;
+  /** Inserts one row inside the manager's transaction and returns its generated id. */
+  insertRowReturningId<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, columns: (keyof T & string)[], values: unknown[]): Promise<number>;
 }
 
 /** The dialect of the database behind a data source or manager. */

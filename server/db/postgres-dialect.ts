@@ -73,4 +73,18 @@ export const postgresDialect: DatabaseDialect = {
     const rows = (await dataSource.query('SELECT "kind", "version" FROM "catalog_versions"')) as { kind: string; version: number }[];
     return new Map(rows.map((r) => [r.kind, r.version]));
   },
+
+  async hasRow(manager, entity, id) {
+    const table = manager.connection.getMetadata(entity).tableName;
+    return ((await manager.query(`SELECT 1 FROM ${quote(table)} WHERE "id" = $1`, [id])) as unknown[]).length > 0;
+  },
+
+  async insertRowReturningId(manager, entity, columns, values) {
+    const table = manager.connection.getMetadata(entity).tableName;
+    const rows = (await manager.query(
+      `INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) VALUES ${valuesList(1, columns.length)} RETURNING "id"`,
+      values,
+    )) as { id: number }[];
+    return Number(rows[0].id);
+  },
 };

@@ -55,4 +55,15 @@ export const sqliteDialect: DatabaseDialect = {
     const rows = statement(handleOf(dataSource.manager), 'SELECT "kind", "version" FROM "catalog_versions"').all() as { kind: string; version: number }[];
     return new Map(rows.map((r) => [r.kind, r.version]));
   },
+
+  async hasRow(manager, entity, id) {
+    const table = manager.connection.getMetadata(entity).tableName;
+    return statement(handleOf(manager), `SELECT 1 FROM ${quote(table)} WHERE "id" = ?`).get(id) !== undefined;
+  },
+
+  async insertRowReturningId(manager, entity, columns, values) {
+    const table = manager.connection.getMetadata(entity).tableName;
+    const insert = statement(handleOf(manager), `INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) VALUES (${columns.map(() => '?').join(', ')})`);
+    return Number((insert.run(...values) as { lastInsertRowid: number | bigint }).lastInsertRowid);
+  },
 };

@@ -3,7 +3,7 @@ import type { SystemCreate, SystemFinalize, SystemPatch } from '../../shared/sch
 import { AttachmentRow } from '../attachments/attachment.entity';
 import type { AppContext } from '../context';
 import { dialectOf } from '../db/dialect';
-import { requireJob } from '../jobs/jobs.service';
+import { assertJobExists, requireJob } from '../jobs/jobs.service';
 import { AppError, notFound } from '../lib/errors';
 import { userNames } from '../lib/user-names';
 import { loadRuleContext } from '../settings/settings.service';
@@ -50,7 +50,7 @@ async function namesWith(ctx: AppContext, author: Author, ids: (number | null)[]
 export async function createSystem(ctx: AppContext, jobId: number, body: SystemCreate, author: Author): Promise<SystemView> {
   const userId = authorId(author);
   const [, snapshot, names, options] = await Promise.all([
-    requireJob(ctx, jobId),
+    assertJobExists(ctx, jobId),
     takeSnapshot(ctx, body),
     namesWith(ctx, author),
     checklistOptions(ctx),
@@ -58,9 +58,8 @@ export async function createSystem(ctx: AppContext, jobId: number, body: SystemC
   const draft = revisionDraft(body, snapshot, userId);
   const { record, revision } = await withBatchedWrite(ctx, async (manager) => {
     const at = nowIso();
-    const records = manager.getRepository(SystemRecordRow);
-    const row = records.create({ jobId, status: 'draft', revision: 1, createdBy: userId, createdAt: at, updatedAt: at });
-    await records.insert(row); // sets row.id
+    const row = Object.assign(new SystemRecordRow(), { jobId, status: 'draft' as const, revision: 1, createdBy: userId, createdAt: at, updatedAt: at });
+    row.id = await dialectOf(manager).insertRowReturningId(manager, SystemRecordRow, [...RECORD_COLUMNS], RECORD_COLUMNS.map((c) => row[c]));
     return { record: row, revision: await insertRevision(manager, draft, row.id, 1, at) };
   });
   return systemView(record, revision, { readings: [], attachments: [], revisions: [revision], names, checklistOptions: options });
@@ -258,6 +257,8 @@ export async function assertEditable(ctx: AppContext, record: SystemRecordRow, s
     );
   }
 }
+
+const RECORD_COLUMNS = ['jobId', 'status', 'revision', 'createdBy', 'createdAt', 'updatedAt'] as const satisfies readonly (keyof SystemRecordRow)[];
 
 /** The columns of a new revision, with its JSON written out before the lock is taken. */
 const REVISION_COLUMNS = [
