@@ -209,7 +209,9 @@ async function loadViewRows(manager: EntityManager, id: number, n?: number): Pro
   const revisionRows = manager.getRepository(SystemRevisionRow);
   const [revisions, current, readings, attachments] = await Promise.all([
     revisionRows.find({ where: { systemId: id }, select: BRIEF_COLUMNS, order: { revision: 'ASC' } }),
-    revisionRows.findOneBy({ systemId: id, revision: n ?? record.revision }),
+    // The latest is found by order, not by its number: TypeORM writes numbers into the SQL on SQLite, and
+    // a statement per revision number would never be prepared twice.
+    n === undefined ? revisionRows.findOne({ where: { systemId: id }, order: { revision: 'DESC' } }) : revisionRows.findOneBy({ systemId: id, revision: n }),
     manager.getRepository(CommissioningReadingRow).find({ where: { systemId: id }, order: { takenAt: 'ASC', id: 'ASC' } }),
     manager.getRepository(AttachmentRow).find({ where: { systemId: id }, order: { id: 'ASC' } }),
   ]);
