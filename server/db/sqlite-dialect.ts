@@ -1,5 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { DatabaseDialect, UserRow } from './dialect';
+import { rowQuerySql } from './row-query';
 import { sqliteHandle, type RawSqlite } from './sqlite-handle';
 
 type Statement = ReturnType<RawSqlite['prepare']> & { all(...params: unknown[]): unknown[] };
@@ -59,6 +60,10 @@ export const sqliteDialect: DatabaseDialect = {
   async hasRow(manager, entity, id) {
     const table = manager.connection.getMetadata(entity).tableName;
     return statement(handleOf(manager), `SELECT 1 FROM ${quote(table)} WHERE "id" = ?`).get(id) !== undefined;
+  },
+
+  async selectRows(manager, entity, query) {
+    return statement(handleOf(manager), rowQuerySql(manager, entity, query, '?')).all(query.where[1]) as Record<string, unknown>[];
   },
 
   async insertRowReturningId(manager, entity, columns, values) {

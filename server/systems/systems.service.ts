@@ -1,8 +1,9 @@
-import type { EntityManager } from 'typeorm';
+import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 import type { SystemCreate, SystemFinalize, SystemPatch } from '../../shared/schemas/systems';
 import { AttachmentRow } from '../attachments/attachment.entity';
 import type { AppContext } from '../context';
 import { dialectOf } from '../db/dialect';
+import { hydrateRow, type RowQuery } from '../db/row-query';
 import { assertJobExists, requireJob } from '../jobs/jobs.service';
 import { AppError, notFound } from '../lib/errors';
 import { userNames } from '../lib/user-names';
@@ -95,8 +96,7 @@ async function saveRevision(ctx: AppContext, id: number, patch: SystemPatch, aut
   ]);
   const draft = revisionDraft(content, snapshot, userId);
   const written = await withBatchedWrite(ctx, async (manager) => {
-    const record = await manager.getRepository(SystemRecordRow).findOneBy({ id });
-    if (!record) throw notFound('System record');
+    const record = await recordById(manager, id);
     await assertEditable(ctx, record, patch.revision, how);
     const at = nowIso();
     const next = record.revision + 1;
@@ -202,18 +202,33 @@ interface ViewRows {
   attachments: AttachmentRow[];
 }
 
-/** What a record's view is built from: the record, its revisions in brief, one revision whole, readings and photos. */
-async function loadViewRows(manager: EntityManager, id: number, n?: number): Promise<ViewRows> {
-  const record = await manager.getRepository(SystemRecordRow).findOneBy({ id });
+/** Rows of one table by one column's value, through the dialect's prepared read. */
+async function rowsOf<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, query: Omit<RowQuery<T>, 'columns'> & { columns?: RowQuery<T>['columns'] }): Promise<T[]> {
+  const columns = query.columns ?? (manager.connection.getMetadata(entity).columns.map((c) => c.propertyName) as RowQuery<T>['columns']);
+  const raw = await dialectOf(manager).selectRows(manager, entity, { ...query, columns });
+  return raw.map((row) => hydrateRow(manager, entity, row));
+}
+
+/** The record row; 404 when there is no such record. */
+async function recordById(manager: EntityManager, id: number): Promise<SystemRecordRow> {
+  const [record] = await rowsOf(manager, SystemRecordRow, { where: ['id', id] });
   if (!record) throw notFound('System record');
-  const revisionRows = manager.getRepository(SystemRevisionRow);
-  const [revisions, current, readings, attachments] = await Promise.all([
-    revisionRows.find({ where: { systemId: id }, select: BRIEF_COLUMNS, order: { revision: 'ASC' } }),
-    // The latest is found by order, not by its number: TypeORM writes numbers into the SQL on SQLite, and
-    // a statement per revision number would never be prepared twice.
-    n === undefined ? revisionRows.findOne({ where: { systemId: id }, order: { revision: 'DESC' } }) : revisionRows.findOneBy({ systemId: id, revision: n }),
-    manager.getRepository(CommissioningReadingRow).find({ where: { systemId: id }, order: { takenAt: 'ASC', id: 'ASC' } }),
-    manager.getRepository(AttachmentRow).find({ where: { systemId: id }, order: { id: 'ASC' } }),
+  return record;
+}
+
+/**
+ * What a record's view is built from: the record, its revisions in brief, one revision whole, readings
+ * and photos. Prepared reads (the query builder would write the record's id into each statement).
+ */
+async function loadViewRows(manager: EntityManager, id: number, n?: number): Promise<ViewRows> {
+  const record = await recordById(manager, id);
+  const [revisions, [current], readings, attachments] = await Promise.all([
+    rowsOf(manager, SystemRevisionRow, { columns: BRIEF_COLUMNS, where: ['systemId', id], orderBy: [['revision', 'ASC']] }),
+    n === undefined
+      ? rowsOf(manager, SystemRevisionRow, { where: ['systemId', id], orderBy: [['revision', 'DESC']], limit: 1 })
+      : manager.getRepository(SystemRevisionRow).findBy({ systemId: id, revision: n }),
+    rowsOf(manager, CommissioningReadingRow, { where: ['systemId', id], orderBy: [['takenAt', 'ASC'], ['id', 'ASC']] }),
+    rowsOf(manager, AttachmentRow, { where: ['systemId', id], orderBy: [['id', 'ASC']] }),
   ]);
   if (!current) throw notFound('Revision');
   return { record, revisions, current, readings, attachments };
