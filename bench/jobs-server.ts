@@ -29,7 +29,11 @@ async function main() {
   };
   // Saves are measured 20 at a time, as they arrive under the load (they share commits then).
   const inFlight = (work: () => Promise<unknown>) => () => Promise.all(Array.from({ length: OWN_RECORDS }, work));
-  const saveCpuMs = (await cpuMs(10, inFlight(() => createSystem(ctx, jobId, body, techId)))) / OWN_RECORDS;
+  const saveCpuMs =
+    (await cpuMs(
+      10,
+      inFlight(() => createSystem(ctx, jobId, body, techId)),
+    )) / OWN_RECORDS;
   // One job and one record per tech: the edit load PATCHes each record only from its own connection.
   const ownRecords: { id: number; revision: number }[] = [];
   for (let i = 0; i < OWN_RECORDS; i++) {
@@ -39,9 +43,12 @@ async function main() {
   }
   const edit = (n: number) => ({ serials: { outdoor: `BJ2611A${String(n).padStart(5, '0')}` } });
   const patchCpuMs =
-    (await cpuMs(
-      5,
-      () => Promise.all(ownRecords.map(async (r) => (r.revision = (await patchSystem(ctx, r.id, { revision: r.revision, ...edit(r.revision) }, techId)).revision))),
+    (await cpuMs(5, () =>
+      Promise.all(
+        ownRecords.map(
+          async (r) => (r.revision = (await patchSystem(ctx, r.id, { revision: r.revision, ...edit(r.revision) }, techId)).revision),
+        ),
+      ),
     )) / OWN_RECORDS;
   const pdfCpuMs = await cpuMs(10, () => renderSystemReport(ctx, recordId, { paper: 'letter' }));
 

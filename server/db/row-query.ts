@@ -9,7 +9,12 @@ export interface RowQuery<T extends ObjectLiteral> {
 }
 
 /** The SQL of a RowQuery with `placeholder` for its one value (column names as the entity maps them). */
-export function rowQuerySql<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, query: RowQuery<T>, placeholder: string): string {
+export function rowQuerySql<T extends ObjectLiteral>(
+  manager: EntityManager,
+  entity: EntityTarget<T>,
+  query: RowQuery<T>,
+  placeholder: string,
+): string {
   const metadata = manager.connection.getMetadata(entity);
   const column = (name: string) => {
     const found = metadata.findColumnWithPropertyName(name);

@@ -59,8 +59,20 @@ export async function createSystem(ctx: AppContext, jobId: number, body: SystemC
   const draft = revisionDraft(body, snapshot, userId);
   const { record, revision } = await withBatchedWrite(ctx, async (manager) => {
     const at = nowIso();
-    const row = Object.assign(new SystemRecordRow(), { jobId, status: 'draft' as const, revision: 1, createdBy: userId, createdAt: at, updatedAt: at });
-    row.id = await dialectOf(manager).insertRowReturningId(manager, SystemRecordRow, [...RECORD_COLUMNS], RECORD_COLUMNS.map((c) => row[c]));
+    const row = Object.assign(new SystemRecordRow(), {
+      jobId,
+      status: 'draft' as const,
+      revision: 1,
+      createdBy: userId,
+      createdAt: at,
+      updatedAt: at,
+    });
+    row.id = await dialectOf(manager).insertRowReturningId(
+      manager,
+      SystemRecordRow,
+      [...RECORD_COLUMNS],
+      RECORD_COLUMNS.map((c) => row[c]),
+    );
     return { record: row, revision: await insertRevision(manager, draft, row.id, 1, at) };
   });
   return systemView(record, revision, { readings: [], attachments: [], revisions: [revision], names, checklistOptions: options });
@@ -190,7 +202,16 @@ export async function loadCurrent(manager: EntityManager, id: number): Promise<{
 }
 
 /** The columns of a revision the list of revisions shows (its JSON columns are not read). */
-const BRIEF_COLUMNS: (keyof SystemRevisionRow)[] = ['id', 'revision', 'status', 'verdict', 'savedAt', 'savedBy', 'finalizedBy', 'finalizedAt'];
+const BRIEF_COLUMNS: (keyof SystemRevisionRow)[] = [
+  'id',
+  'revision',
+  'status',
+  'verdict',
+  'savedAt',
+  'savedBy',
+  'finalizedBy',
+  'finalizedAt',
+];
 
 interface ViewRows {
   record: SystemRecordRow;
@@ -203,7 +224,11 @@ interface ViewRows {
 }
 
 /** Rows of one table by one column's value, through the dialect's prepared read. */
-async function rowsOf<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, query: Omit<RowQuery<T>, 'columns'> & { columns?: RowQuery<T>['columns'] }): Promise<T[]> {
+async function rowsOf<T extends ObjectLiteral>(
+  manager: EntityManager,
+  entity: EntityTarget<T>,
+  query: Omit<RowQuery<T>, 'columns'> & { columns?: RowQuery<T>['columns'] },
+): Promise<T[]> {
   const columns = query.columns ?? (manager.connection.getMetadata(entity).columns.map((c) => c.propertyName) as RowQuery<T>['columns']);
   const raw = await dialectOf(manager).selectRows(manager, entity, { ...query, columns });
   return raw.map((row) => hydrateRow(manager, entity, row));
@@ -227,7 +252,13 @@ async function loadViewRows(manager: EntityManager, id: number, n?: number): Pro
     n === undefined
       ? rowsOf(manager, SystemRevisionRow, { where: ['systemId', id], orderBy: [['revision', 'DESC']], limit: 1 })
       : manager.getRepository(SystemRevisionRow).findBy({ systemId: id, revision: n }),
-    rowsOf(manager, CommissioningReadingRow, { where: ['systemId', id], orderBy: [['takenAt', 'ASC'], ['id', 'ASC']] }),
+    rowsOf(manager, CommissioningReadingRow, {
+      where: ['systemId', id],
+      orderBy: [
+        ['takenAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
     rowsOf(manager, AttachmentRow, { where: ['systemId', id], orderBy: [['id', 'ASC']] }),
   ]);
   if (!current) throw notFound('Revision');
@@ -275,7 +306,14 @@ export async function assertEditable(ctx: AppContext, record: SystemRecordRow, s
   }
 }
 
-const RECORD_COLUMNS = ['jobId', 'status', 'revision', 'createdBy', 'createdAt', 'updatedAt'] as const satisfies readonly (keyof SystemRecordRow)[];
+const RECORD_COLUMNS = [
+  'jobId',
+  'status',
+  'revision',
+  'createdBy',
+  'createdAt',
+  'updatedAt',
+] as const satisfies readonly (keyof SystemRecordRow)[];
 
 /** The columns of a new revision, with its JSON written out before the lock is taken. */
 const REVISION_COLUMNS = [
@@ -310,7 +348,13 @@ function revisionDraft(content: RecordContent, snapshot: Snapshot, userId: numbe
     content,
     snapshot,
     userId,
-    json: [JSON.stringify(content), JSON.stringify(check), JSON.stringify(parts), ratedCombination === null ? null : JSON.stringify(ratedCombination), JSON.stringify(prices)],
+    json: [
+      JSON.stringify(content),
+      JSON.stringify(check),
+      JSON.stringify(parts),
+      ratedCombination === null ? null : JSON.stringify(ratedCombination),
+      JSON.stringify(prices),
+    ],
   };
 }
 
@@ -319,13 +363,40 @@ function revisionDraft(content: RecordContent, snapshot: Snapshot, userId: numbe
  * the ids into the SQL, preparing a new statement per save and pushing others out of its cache).
  * Returns the row as the view reads it (its own id is not needed there).
  */
-async function insertRevision(manager: EntityManager, draft: RevisionDraft, systemId: number, revision: number, at: string): Promise<SystemRevisionRow> {
+async function insertRevision(
+  manager: EntityManager,
+  draft: RevisionDraft,
+  systemId: number,
+  revision: number,
+  at: string,
+): Promise<SystemRevisionRow> {
   const { content, snapshot, userId, json } = draft;
   const [contentJson, checkJson, partsJson, comboJson, pricesJson] = json;
   const { rulesVersion, verdict } = snapshot.check;
-  await dialectOf(manager).insertRows(manager, SystemRevisionRow, [...REVISION_COLUMNS], [
-    [systemId, revision, 'draft', contentJson, checkJson, rulesVersion, verdict, partsJson, comboJson, pricesJson, userId, at, null, null, null],
-  ]);
+  await dialectOf(manager).insertRows(
+    manager,
+    SystemRevisionRow,
+    [...REVISION_COLUMNS],
+    [
+      [
+        systemId,
+        revision,
+        'draft',
+        contentJson,
+        checkJson,
+        rulesVersion,
+        verdict,
+        partsJson,
+        comboJson,
+        pricesJson,
+        userId,
+        at,
+        null,
+        null,
+        null,
+      ],
+    ],
+  );
   return Object.assign(new SystemRevisionRow(), {
     systemId,
     revision,

@@ -31,9 +31,13 @@ afterAll(async () => {
 const auth = () => authFor(t, 'tech');
 const create = () => request(server).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send(recordBody(f));
 const revisionsOf = async (id: number) =>
-  (await sql<{ revision: number }>(t.ctx.dataSource, 'SELECT "revision" FROM "system_revisions" WHERE "systemId" = ? ORDER BY "revision"', [id])).map(
-    (r) => Number(r.revision),
-  );
+  (
+    await sql<{ revision: number }>(
+      t.ctx.dataSource,
+      'SELECT "revision" FROM "system_revisions" WHERE "systemId" = ? ORDER BY "revision"',
+      [id],
+    )
+  ).map((r) => Number(r.revision));
 
 describe('saves that arrive together', () => {
   it('when 20 techs create records at the same moment, then 20 records land, each answered as it reads back', async () => {
@@ -42,7 +46,8 @@ describe('saves that arrive together', () => {
     const ids = answers.map((a) => a.body.id as number);
     expect(new Set(ids).size).toBe(TECHS);
     for (const answer of answers.slice(0, 3)) {
-      const { currentCheck: _today, ...stored } = (await request(server).get(`/api/systems/${answer.body.id}`).set(auth()).expect(200)).body;
+      const { currentCheck: _today, ...stored } = (await request(server).get(`/api/systems/${answer.body.id}`).set(auth()).expect(200))
+        .body;
       expect(answer.body).toEqual(stored);
     }
     for (const id of ids) expect(await revisionsOf(id)).toEqual([1]);
@@ -59,9 +64,12 @@ describe('saves that arrive together', () => {
       ),
     );
     expect(answers.map((a) => a.status)).toEqual(Array(TECHS).fill(200));
-    answers.forEach((a, i) => expect(a.body).toMatchObject({ revision: 2, latestRevision: 2, serials: { outdoor: `QX2611A1${String(i).padStart(4, '0')}` } }));
+    answers.forEach((a, i) =>
+      expect(a.body).toMatchObject({ revision: 2, latestRevision: 2, serials: { outdoor: `QX2611A1${String(i).padStart(4, '0')}` } }),
+    );
     for (const answer of answers.slice(0, 3)) {
-      const { currentCheck: _today, ...stored } = (await request(server).get(`/api/systems/${answer.body.id}`).set(auth()).expect(200)).body;
+      const { currentCheck: _today, ...stored } = (await request(server).get(`/api/systems/${answer.body.id}`).set(auth()).expect(200))
+        .body;
       expect(answer.body).toEqual(stored);
     }
     for (const id of records) expect(await revisionsOf(id)).toEqual([1, 2]);
@@ -70,7 +78,10 @@ describe('saves that arrive together', () => {
   it('when two saves from revision 1 of one record arrive with saves of other records, then one wins, the other alone gets 409 with the current revision', async () => {
     const [shared, ...others] = (await Promise.all(Array.from({ length: 6 }, () => create().expect(201)))).map((r) => r.body.id as number);
     const patch = (id: number, serial: string) =>
-      request(server).patch(`/api/systems/${id}`).set(auth()).send({ revision: 1, serials: { outdoor: serial } });
+      request(server)
+        .patch(`/api/systems/${id}`)
+        .set(auth())
+        .send({ revision: 1, serials: { outdoor: serial } });
     const [first, second, ...rest] = await Promise.all([
       patch(shared, 'QX2611A20001'),
       patch(shared, 'QX2611A20002'),
@@ -90,7 +101,9 @@ describe('the shared transaction', () => {
   const insertJob = (name: string) =>
     withBatchedWrite(t.ctx, async (manager) => {
       const at = new Date().toISOString();
-      await manager.getRepository(JobRow).insert({ customerName: name, siteAddress: '1 Batch Rd', state: 'GA', status: 'open', createdAt: at, updatedAt: at });
+      await manager
+        .getRepository(JobRow)
+        .insert({ customerName: name, siteAddress: '1 Batch Rd', state: 'GA', status: 'open', createdAt: at, updatedAt: at });
       return name;
     });
 
@@ -100,7 +113,9 @@ describe('the shared transaction', () => {
       insertJob('Batch A'),
       withBatchedWrite(t.ctx, async (manager) => {
         const at = new Date().toISOString();
-        await manager.getRepository(JobRow).insert({ customerName: 'Batch refused', siteAddress: '2 Batch Rd', state: 'GA', status: 'open', createdAt: at, updatedAt: at });
+        await manager
+          .getRepository(JobRow)
+          .insert({ customerName: 'Batch refused', siteAddress: '2 Batch Rd', state: 'GA', status: 'open', createdAt: at, updatedAt: at });
         throw new AppError('refused-for-test', 'Refused for the test', 409);
       }),
       insertJob('Batch C'),
@@ -122,22 +137,25 @@ describe('the shared transaction', () => {
     expect(await jobCount()).toBe(before + 2);
   });
 
-  it.skipIf(onPostgres)('when 20 saves are started together, then they are written in fewer commits than saves (SQLite: one connection)', async () => {
-    const runner = t.ctx.dataSource.createQueryRunner();
-    const original = runner.query.bind(runner);
-    let commits = 0;
-    runner.query = ((query: string, ...rest: unknown[]) => {
-      if (/^COMMIT/i.test(query)) commits += 1;
-      return (original as (q: string, ...r: unknown[]) => Promise<unknown>)(query, ...rest);
-    }) as typeof runner.query;
-    try {
-      await Promise.all(Array.from({ length: TECHS }, (_, i) => insertJob(`Commit count ${i}`)));
-    } finally {
-      runner.query = original;
-    }
-    expect(commits).toBeGreaterThan(0);
-    expect(commits).toBeLessThan(TECHS / 2);
-  });
+  it.skipIf(onPostgres)(
+    'when 20 saves are started together, then they are written in fewer commits than saves (SQLite: one connection)',
+    async () => {
+      const runner = t.ctx.dataSource.createQueryRunner();
+      const original = runner.query.bind(runner);
+      let commits = 0;
+      runner.query = ((query: string, ...rest: unknown[]) => {
+        if (/^COMMIT/i.test(query)) commits += 1;
+        return (original as (q: string, ...r: unknown[]) => Promise<unknown>)(query, ...rest);
+      }) as typeof runner.query;
+      try {
+        await Promise.all(Array.from({ length: TECHS }, (_, i) => insertJob(`Commit count ${i}`)));
+      } finally {
+        runner.query = original;
+      }
+      expect(commits).toBeGreaterThan(0);
+      expect(commits).toBeLessThan(TECHS / 2);
+    },
+  );
 });
 
 describe('the price snapshot', () => {
