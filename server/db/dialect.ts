@@ -1,5 +1,6 @@
 import type { DataSource, EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 import { postgresDialect } from './postgres-dialect';
+import type { RowQuery } from './row-query';
 import { sqliteDialect } from './sqlite-dialect';
 
 /** The user fields the per-request auth check reads. */
@@ -34,6 +35,16 @@ export interface DatabaseDialect {
   ): Promise<void>;
   /** Every catalog kind's version counter (catalog_versions), read once per request. */
   catalogVersions(dataSource: DataSource): Promise<Map<string, number>>;
+  /** Whether the entity's table has a row with this id (a prepared read: one per record save). */
+  hasRow<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, id: number): Promise<boolean>;
+  /**
+   * The raw rows of the entity's table whose `where` column equals the value, in the given order (a
+   * prepared read with the value bound, where TypeORM would write it into the SQL); `hydrateRow` turns
+   * one into the entity's values.
+   */
+  selectRows<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, query: RowQuery<T>): Promise<Record<string, unknown>[]>;
+  /** Inserts one row inside the manager's transaction and returns its generated id. */
+  insertRowReturningId<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, columns: (keyof T & string)[], values: unknown[]): Promise<number>;
 }
 
 /** The dialect of the database behind a data source or manager. */

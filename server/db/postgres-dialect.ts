@@ -1,5 +1,6 @@
 import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 import type { DatabaseDialect, UserRow } from './dialect';
+import { rowQuerySql } from './row-query';
 
 // PostgreSQL takes at most 65535 parameters a statement; stay well under it.
 const MAX_PARAMS = 30_000;
@@ -72,5 +73,23 @@ export const postgresDialect: DatabaseDialect = {
   async catalogVersions(dataSource) {
     const rows = (await dataSource.query('SELECT "kind", "version" FROM "catalog_versions"')) as { kind: string; version: number }[];
     return new Map(rows.map((r) => [r.kind, r.version]));
+  },
+
+  async hasRow(manager, entity, id) {
+    const table = manager.connection.getMetadata(entity).tableName;
+    return ((await manager.query(`SELECT 1 FROM ${quote(table)} WHERE "id" = $1`, [id])) as unknown[]).length > 0;
+  },
+
+  async selectRows(manager, entity, query) {
+    return (await manager.query(rowQuerySql(manager, entity, query, '$1'), [query.where[1]])) as Record<string, unknown>[];
+  },
+
+  async insertRowReturningId(manager, entity, columns, values) {
+    const table = manager.connection.getMetadata(entity).tableName;
+    const rows = (await manager.query(
+      `INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) VALUES ${valuesList(1, columns.length)} RETURNING "id"`,
+      values,
+    )) as { id: number }[];
+    return Number(rows[0].id);
   },
 };

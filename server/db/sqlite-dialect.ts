@@ -1,5 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { DatabaseDialect, UserRow } from './dialect';
+import { rowQuerySql } from './row-query';
 import { sqliteHandle, type RawSqlite } from './sqlite-handle';
 
 type Statement = ReturnType<RawSqlite['prepare']> & { all(...params: unknown[]): unknown[] };
@@ -54,5 +55,20 @@ export const sqliteDialect: DatabaseDialect = {
   async catalogVersions(dataSource) {
     const rows = statement(handleOf(dataSource.manager), 'SELECT "kind", "version" FROM "catalog_versions"').all() as { kind: string; version: number }[];
     return new Map(rows.map((r) => [r.kind, r.version]));
+  },
+
+  async hasRow(manager, entity, id) {
+    const table = manager.connection.getMetadata(entity).tableName;
+    return statement(handleOf(manager), `SELECT 1 FROM ${quote(table)} WHERE "id" = ?`).get(id) !== undefined;
+  },
+
+  async selectRows(manager, entity, query) {
+    return statement(handleOf(manager), rowQuerySql(manager, entity, query, '?')).all(query.where[1]) as Record<string, unknown>[];
+  },
+
+  async insertRowReturningId(manager, entity, columns, values) {
+    const table = manager.connection.getMetadata(entity).tableName;
+    const insert = statement(handleOf(manager), `INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) VALUES (${columns.map(() => '?').join(', ')})`);
+    return Number((insert.run(...values) as { lastInsertRowid: number | bigint }).lastInsertRowid);
   },
 };

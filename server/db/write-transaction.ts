@@ -32,6 +32,12 @@ const queues = new WeakMap<DataSource, Promise<unknown>>();
 // `open` turns false at commit/rollback: a callback started inside the work that runs later is not nested.
 const held = new AsyncLocalStorage<{ dataSource: DataSource; manager: EntityManager; open: boolean }>();
 
+/** True when the current async call chain already holds this DataSource's write transaction (a nested call). */
+export function holdsWriteLock(dataSource: DataSource): boolean {
+  const outer = held.getStore();
+  return outer?.open === true && outer.dataSource === dataSource;
+}
+
 /** Runs `begin` once the writers queued before it on this DataSource are done; nested calls become savepoints. */
 const queued =
   (begin: WriteLockStrategy): WriteLockStrategy =>

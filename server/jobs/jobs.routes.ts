@@ -30,7 +30,7 @@ export function jobsRouter(ctx: AppContext): Router {
   });
   router.post('/:id/systems', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.status(201).json(await createSystem(ctx, id, parseSystemCreate(req.body), currentUser(req).id));
+    res.status(201).json(await createSystem(ctx, id, parseSystemCreate(req.body), currentUser(req)));
   });
   attachmentUpload(ctx, router);
   return router;

@@ -1,6 +1,7 @@
 import { Brackets } from 'typeorm';
 import type { Job, JobChange, JobCreate, JobListQuery, JobPatch } from '../../shared/schemas/jobs';
 import type { AppContext } from '../context';
+import { dialectOf } from '../db/dialect';
 import { withWriteLock } from '../db/write-transaction';
 import { notFound } from '../lib/errors';
 import { userNames, who } from '../lib/user-names';
@@ -101,4 +102,9 @@ export async function requireJob(ctx: AppContext, id: number): Promise<JobRow> {
   const row = await ctx.dataSource.getRepository(JobRow).findOneBy({ id });
   if (!row) throw notFound('Job');
   return row;
+}
+
+/** Throws 404 unless the job exists; a prepared read, for paths that need only that (every record save). */
+export async function assertJobExists(ctx: AppContext, id: number): Promise<void> {
+  if (!(await dialectOf(ctx.dataSource).hasRow(ctx.dataSource.manager, JobRow, id))) throw notFound('Job');
 }

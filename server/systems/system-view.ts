@@ -58,6 +58,9 @@ export interface RevisionSummary {
   finalizedAt: string | null;
 }
 
+/** The stored facts of a revision that the list of revisions shows. */
+export type RevisionBrief = Pick<SystemRevisionRow, 'revision' | 'status' | 'verdict' | 'savedAt' | 'savedBy' | 'finalizedBy' | 'finalizedAt'>;
+
 /** One revision of a record as the API answers it (GET /api/systems/:id and /revisions/:n). */
 export function systemView(
   record: SystemRecordRow,
@@ -65,7 +68,7 @@ export function systemView(
   extra: {
     readings: CommissioningReadingRow[];
     attachments: AttachmentRow[];
-    revisions: SystemRevisionRow[];
+    revisions: RevisionBrief[];
     names: Map<number, string>;
     checklistOptions: ChecklistOptions;
   },

@@ -20,11 +20,11 @@ export function systemsRouter(ctx: AppContext): Router {
   });
   router.patch('/:id', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.json(await patchSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req).id));
+    res.json(await patchSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req)));
   });
   router.post('/:id/revisions', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.status(201).json(await reviseSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req).id));
+    res.status(201).json(await reviseSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req)));
   });
   router.get('/:id/revisions/:n', async (req, res) => {
     const { id, n } = parseParams(RevisionParamSchema, req.params);

@@ -1,22 +1,23 @@
-import type { EntityManager } from 'typeorm';
-import type { QueryDeepPartialEntity } from 'typeorm/query-builder/QueryPartialEntity';
+import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 import type { SystemCreate, SystemFinalize, SystemPatch } from '../../shared/schemas/systems';
 import { AttachmentRow } from '../attachments/attachment.entity';
 import type { AppContext } from '../context';
-import { withWriteLock } from '../db/write-transaction';
-import { requireJob } from '../jobs/jobs.service';
+import { dialectOf } from '../db/dialect';
+import { hydrateRow, type RowQuery } from '../db/row-query';
+import { assertJobExists, requireJob } from '../jobs/jobs.service';
 import { AppError, notFound } from '../lib/errors';
 import { userNames } from '../lib/user-names';
 import { loadRuleContext } from '../settings/settings.service';
 import { CommissioningReadingRow } from './commissioning-reading.entity';
 import { compareWithToday } from './current-check';
+import { withBatchedWrite } from './record-write-batch';
 import { mergeContent } from './system-content';
 import { SystemRecordRow } from './system-record.entity';
 import { SystemRevisionRow } from './system-revision.entity';
 import { takeSnapshot, type Snapshot } from './system-snapshot';
 import type { RecordContent } from './system-types';
 import { parseSystemCreate } from './system-validation';
-import { checklistOf, systemView, type SystemView } from './system-view';
+import { checklistOf, systemView, type RevisionBrief, type SystemView } from './system-view';
 
 /*
  * Revisions: every save is a new revision (n+1) that keeps the one before, so no save is ever lost.
@@ -27,62 +28,112 @@ import { checklistOf, systemView, type SystemView } from './system-view';
 
 const nowIso = () => new Date().toISOString();
 
+/** Who saves: a user id, or the signed-in user as the auth middleware read it (then no name lookup). */
+export type Author = number | { id: number; name: string };
+
+const authorId = (author: Author) => (typeof author === 'number' ? author : author.id);
+
+/** Names of the given users, with the author's name known already when the route passed it. */
+async function namesWith(ctx: AppContext, author: Author, ids: (number | null)[] = []): Promise<Map<number, string>> {
+  if (typeof author === 'number') return userNames(ctx.dataSource.manager, [author, ...ids]);
+  const others = ids.filter((id) => id !== null && id !== author.id);
+  const names = others.length > 0 ? await userNames(ctx.dataSource.manager, others) : new Map<number, string>();
+  return names.set(author.id, author.name);
+}
+
 /**
  * POST /api/jobs/:id/systems: checks the parts as they stand and saves draft revision 1.
- * Everything slow (the job lookup, the check with prices, the names and settings the answer shows)
- * happens before the write lock; under it only the two inserts run, so concurrent saves queue on
- * milliseconds. The answer is built from what was inserted: a new record has no readings or photos.
+ * Everything slow (the job lookup, the check with prices, the names and settings the answer shows,
+ * the JSON of the stored columns) happens before the write lock; under it only the two inserts run,
+ * in a commit shared with the saves that arrive with it (record-write-batch.ts). The answer is built
+ * from what was inserted: a new record has no readings or photos.
  */
-export async function createSystem(ctx: AppContext, jobId: number, body: SystemCreate, userId: number): Promise<SystemView> {
+export async function createSystem(ctx: AppContext, jobId: number, body: SystemCreate, author: Author): Promise<SystemView> {
+  const userId = authorId(author);
   const [, snapshot, names, options] = await Promise.all([
-    requireJob(ctx, jobId),
+    assertJobExists(ctx, jobId),
     takeSnapshot(ctx, body),
-    userNames(ctx.dataSource.manager, [userId]),
+    namesWith(ctx, author),
     checklistOptions(ctx),
   ]);
-  const { record, revision } = await withWriteLock(ctx, async (manager) => {
+  const draft = revisionDraft(body, snapshot, userId);
+  const { record, revision } = await withBatchedWrite(ctx, async (manager) => {
     const at = nowIso();
-    const records = manager.getRepository(SystemRecordRow);
-    const row = records.create({ jobId, status: 'draft', revision: 1, createdBy: userId, createdAt: at, updatedAt: at });
-    await records.insert(row); // sets row.id
-    return { record: row, revision: await insertRevision(manager, row.id, 1, body, snapshot, userId, at) };
+    const row = Object.assign(new SystemRecordRow(), {
+      jobId,
+      status: 'draft' as const,
+      revision: 1,
+      createdBy: userId,
+      createdAt: at,
+      updatedAt: at,
+    });
+    row.id = await dialectOf(manager).insertRowReturningId(
+      manager,
+      SystemRecordRow,
+      [...RECORD_COLUMNS],
+      RECORD_COLUMNS.map((c) => row[c]),
+    );
+    return { record: row, revision: await insertRevision(manager, draft, row.id, 1, at) };
   });
   return systemView(record, revision, { readings: [], attachments: [], revisions: [revision], names, checklistOptions: options });
 }
 
 /** PATCH /api/systems/:id: a new draft revision from the one the edit started from. */
-export async function patchSystem(ctx: AppContext, id: number, patch: SystemPatch, userId: number): Promise<SystemView> {
-  return saveRevision(ctx, id, patch, userId, 'patch');
+export async function patchSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SystemView> {
+  return saveRevision(ctx, id, patch, author, 'patch');
 }
 
 /** POST /api/systems/:id/revisions: a change to a record (final or draft) as draft revision n+1. */
-export async function reviseSystem(ctx: AppContext, id: number, patch: SystemPatch, userId: number): Promise<SystemView> {
-  return saveRevision(ctx, id, patch, userId, 'revise');
+export async function reviseSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SystemView> {
+  return saveRevision(ctx, id, patch, author, 'revise');
 }
 
-async function saveRevision(ctx: AppContext, id: number, patch: SystemPatch, userId: number, how: 'patch' | 'revise'): Promise<SystemView> {
-  // Refuse early (no check run) when the edit can not land; the same test runs again under the lock.
-  const { record, revision } = await loadCurrent(ctx.dataSource.manager, id);
-  await assertEditable(ctx, record, patch.revision, how);
-  const content = parseSystemCreate(mergeContent(revision.content, patch));
-  const snapshot = await takeSnapshot(ctx, content, revision.parts.installDate);
-  await withWriteLock(ctx, async (manager) => {
-    const current = await loadCurrent(manager, id);
-    await assertEditable(ctx, current.record, patch.revision, how);
+/**
+ * Reads the record once and refuses early (no check run) when the edit can not land; then the check,
+ * prices and names run before the lock. Under the lock only the record row is read again: when it is
+ * still the row read before, the revision named is current and the answer is the state read before
+ * plus the revision written; when another writer changed it meanwhile (a finalize), 409 as before or
+ * the answer is read back after the commit.
+ */
+async function saveRevision(ctx: AppContext, id: number, patch: SystemPatch, author: Author, how: 'patch' | 'revise'): Promise<SystemView> {
+  const userId = authorId(author);
+  const before = await loadViewRows(ctx.dataSource.manager, id);
+  await assertEditable(ctx, before.record, patch.revision, how);
+  const current = before.current;
+  const content = parseSystemCreate(mergeContent(current.content, patch));
+  const [snapshot, names, options] = await Promise.all([
+    takeSnapshot(ctx, content, current.parts.installDate),
+    namesWith(ctx, author, namedIn(before)),
+    checklistOptions(ctx),
+  ]);
+  const draft = revisionDraft(content, snapshot, userId);
+  const written = await withBatchedWrite(ctx, async (manager) => {
+    const record = await recordById(manager, id);
+    await assertEditable(ctx, record, patch.revision, how);
     const at = nowIso();
-    const next = current.record.revision + 1;
-    await insertRevision(manager, id, next, content, snapshot, userId, at);
-    await manager.getRepository(SystemRecordRow).update({ id }, { revision: next, status: 'draft', updatedAt: at });
+    const next = record.revision + 1;
+    const revision = await insertRevision(manager, draft, id, next, at);
+    await dialectOf(manager).updateRowsById(manager, SystemRecordRow, ['revision', 'status', 'updatedAt'], [[id, next, 'draft', at]]);
+    const unchanged = record.status === before.record.status && record.updatedAt === before.record.updatedAt;
+    return { record: { ...record, revision: next, status: 'draft' as const, updatedAt: at }, revision, unchanged };
   });
-  return loadView(ctx, id);
+  if (!written.unchanged) return loadView(ctx, id);
+  return systemView(written.record, written.revision, {
+    readings: before.readings,
+    attachments: before.attachments,
+    revisions: [...before.revisions, written.revision],
+    names,
+    checklistOptions: options,
+  });
 }
 
 /** POST /api/systems/:id/finalize: the current revision becomes final (who, when); open items need a reason. */
 export async function finalizeSystem(ctx: AppContext, id: number, body: SystemFinalize, userId: number): Promise<SystemView> {
-  await withWriteLock(ctx, async (manager) => {
+  const options = await checklistOptions(ctx);
+  await withBatchedWrite(ctx, async (manager) => {
     const { record, revision } = await loadCurrent(manager, id);
     await assertEditable(ctx, record, body.revision, 'patch');
-    const open = checklistOf(revision, await checklistOptions(ctx)).filter((row) => row.state === 'open');
+    const open = checklistOf(revision, options).filter((row) => row.state === 'open');
     if (open.length > 0 && !body.openItemsReason) {
       throw new AppError('open-checklist-items', 'Checklist items are still open: give a reason to finalize with them open.', 422, {
         openItems: open.map((row) => ({ id: row.id, title: row.title })),
@@ -102,9 +153,15 @@ export async function finalizeSystem(ctx: AppContext, id: number, body: SystemFi
 
 /** GET /api/systems/:id: the latest revision, with today's check beside the stored one. */
 export async function getSystem(ctx: AppContext, id: number) {
-  const view = await loadView(ctx, id);
-  const { revision } = await loadCurrent(ctx.dataSource.manager, id);
-  return { ...view, currentCheck: await compareWithToday(ctx, revision.content, revision.parts.installDate, revision.check) };
+  const manager = ctx.dataSource.manager;
+  const rows = await loadViewRows(manager, id);
+  const { content, parts, check } = rows.current;
+  const [names, options, currentCheck] = await Promise.all([
+    userNames(manager, namedIn(rows)),
+    checklistOptions(ctx),
+    compareWithToday(ctx, content, parts.installDate, check),
+  ]);
+  return { ...systemView(rows.record, rows.current, { ...rows, names, checklistOptions: options }), currentCheck };
 }
 
 /** GET /api/systems/:id/revisions/:n: any saved revision as it was. */
@@ -144,24 +201,83 @@ export async function loadCurrent(manager: EntityManager, id: number): Promise<{
   return { record, revision };
 }
 
+/** The columns of a revision the list of revisions shows (its JSON columns are not read). */
+const BRIEF_COLUMNS: (keyof SystemRevisionRow)[] = [
+  'id',
+  'revision',
+  'status',
+  'verdict',
+  'savedAt',
+  'savedBy',
+  'finalizedBy',
+  'finalizedAt',
+];
+
+interface ViewRows {
+  record: SystemRecordRow;
+  /** Every revision in brief, oldest first. */
+  revisions: RevisionBrief[];
+  /** The one revision shown, whole. */
+  current: SystemRevisionRow;
+  readings: CommissioningReadingRow[];
+  attachments: AttachmentRow[];
+}
+
+/** Rows of one table by one column's value, through the dialect's prepared read. */
+async function rowsOf<T extends ObjectLiteral>(
+  manager: EntityManager,
+  entity: EntityTarget<T>,
+  query: Omit<RowQuery<T>, 'columns'> & { columns?: RowQuery<T>['columns'] },
+): Promise<T[]> {
+  const columns = query.columns ?? (manager.connection.getMetadata(entity).columns.map((c) => c.propertyName) as RowQuery<T>['columns']);
+  const raw = await dialectOf(manager).selectRows(manager, entity, { ...query, columns });
+  return raw.map((row) => hydrateRow(manager, entity, row));
+}
+
+/** The record row; 404 when there is no such record. */
+async function recordById(manager: EntityManager, id: number): Promise<SystemRecordRow> {
+  const [record] = await rowsOf(manager, SystemRecordRow, { where: ['id', id] });
+  if (!record) throw notFound('System record');
+  return record;
+}
+
+/**
+ * What a record's view is built from: the record, its revisions in brief, one revision whole, readings
+ * and photos. Prepared reads (the query builder would write the record's id into each statement).
+ */
+async function loadViewRows(manager: EntityManager, id: number, n?: number): Promise<ViewRows> {
+  const record = await recordById(manager, id);
+  const [revisions, [current], readings, attachments] = await Promise.all([
+    rowsOf(manager, SystemRevisionRow, { columns: BRIEF_COLUMNS, where: ['systemId', id], orderBy: [['revision', 'ASC']] }),
+    n === undefined
+      ? rowsOf(manager, SystemRevisionRow, { where: ['systemId', id], orderBy: [['revision', 'DESC']], limit: 1 })
+      : manager.getRepository(SystemRevisionRow).findBy({ systemId: id, revision: n }),
+    rowsOf(manager, CommissioningReadingRow, {
+      where: ['systemId', id],
+      orderBy: [
+        ['takenAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
+    rowsOf(manager, AttachmentRow, { where: ['systemId', id], orderBy: [['id', 'ASC']] }),
+  ]);
+  if (!current) throw notFound('Revision');
+  return { record, revisions, current, readings, attachments };
+}
+
+/** Every user a view names: who created the record, saved and finalized revisions, took readings. */
+const namedIn = (rows: ViewRows) => [
+  rows.record.createdBy,
+  ...rows.revisions.flatMap((r) => [r.savedBy, r.finalizedBy]),
+  ...rows.readings.map((r) => r.takenBy),
+];
+
 /** A record and one revision (the latest unless `n`), assembled into the API's view. */
 export async function loadView(ctx: AppContext, id: number, n?: number): Promise<SystemView> {
   const manager = ctx.dataSource.manager;
-  const record = await manager.getRepository(SystemRecordRow).findOneBy({ id });
-  if (!record) throw notFound('System record');
-  const [revisions, readings, attachments] = await Promise.all([
-    manager.getRepository(SystemRevisionRow).find({ where: { systemId: id }, order: { revision: 'ASC' } }),
-    manager.getRepository(CommissioningReadingRow).find({ where: { systemId: id }, order: { takenAt: 'ASC', id: 'ASC' } }),
-    manager.getRepository(AttachmentRow).find({ where: { systemId: id }, order: { id: 'ASC' } }),
-  ]);
-  const rev = revisions.find((r) => r.revision === (n ?? record.revision));
-  if (!rev) throw notFound('Revision');
-  const names = await userNames(manager, [
-    record.createdBy,
-    ...revisions.flatMap((r) => [r.savedBy, r.finalizedBy]),
-    ...readings.map((r) => r.takenBy),
-  ]);
-  return systemView(record, rev, { readings, attachments, revisions, names, checklistOptions: await checklistOptions(ctx) });
+  const rows = await loadViewRows(manager, id, n);
+  const [names, options] = await Promise.all([userNames(manager, namedIn(rows)), checklistOptions(ctx)]);
+  return systemView(rows.record, rows.current, { ...rows, names, checklistOptions: options });
 }
 
 /** The shop's evacuation target for the checklist's wording. */
@@ -190,25 +306,105 @@ export async function assertEditable(ctx: AppContext, record: SystemRecordRow, s
   }
 }
 
+const RECORD_COLUMNS = [
+  'jobId',
+  'status',
+  'revision',
+  'createdBy',
+  'createdAt',
+  'updatedAt',
+] as const satisfies readonly (keyof SystemRecordRow)[];
+
+/** The columns of a new revision, with its JSON written out before the lock is taken. */
+const REVISION_COLUMNS = [
+  'systemId',
+  'revision',
+  'status',
+  'content',
+  'check',
+  'rulesVersion',
+  'verdict',
+  'parts',
+  'ratedCombination',
+  'prices',
+  'savedBy',
+  'savedAt',
+  'finalizedBy',
+  'finalizedAt',
+  'openItemsReason',
+] as const satisfies readonly (keyof SystemRevisionRow)[];
+
+interface RevisionDraft {
+  content: RecordContent;
+  snapshot: Snapshot;
+  userId: number;
+  /** content, check, parts, ratedCombination, prices as their simple-json text. */
+  json: [string, string, string, string | null, string];
+}
+
+function revisionDraft(content: RecordContent, snapshot: Snapshot, userId: number): RevisionDraft {
+  const { check, parts, ratedCombination, prices } = snapshot;
+  return {
+    content,
+    snapshot,
+    userId,
+    json: [
+      JSON.stringify(content),
+      JSON.stringify(check),
+      JSON.stringify(parts),
+      ratedCombination === null ? null : JSON.stringify(ratedCombination),
+      JSON.stringify(prices),
+    ],
+  };
+}
+
+/**
+ * Inserts revision `revision` through the dialect's prepared insert (the query builder would inline
+ * the ids into the SQL, preparing a new statement per save and pushing others out of its cache).
+ * Returns the row as the view reads it (its own id is not needed there).
+ */
 async function insertRevision(
   manager: EntityManager,
+  draft: RevisionDraft,
   systemId: number,
   revision: number,
-  content: RecordContent,
-  snapshot: Snapshot,
-  userId: number,
   at: string,
-) {
-  const repo = manager.getRepository(SystemRevisionRow);
-  // insert, not save: save() would first look the row up and wrap itself in a savepoint.
-  const row = repo.create({
+): Promise<SystemRevisionRow> {
+  const { content, snapshot, userId, json } = draft;
+  const [contentJson, checkJson, partsJson, comboJson, pricesJson] = json;
+  const { rulesVersion, verdict } = snapshot.check;
+  await dialectOf(manager).insertRows(
+    manager,
+    SystemRevisionRow,
+    [...REVISION_COLUMNS],
+    [
+      [
+        systemId,
+        revision,
+        'draft',
+        contentJson,
+        checkJson,
+        rulesVersion,
+        verdict,
+        partsJson,
+        comboJson,
+        pricesJson,
+        userId,
+        at,
+        null,
+        null,
+        null,
+      ],
+    ],
+  );
+  return Object.assign(new SystemRevisionRow(), {
     systemId,
     revision,
-    status: 'draft',
+    status: 'draft' as const,
     content,
     check: snapshot.check,
-    rulesVersion: snapshot.check.rulesVersion,
-    verdict: snapshot.check.verdict,
+    rulesVersion,
+    verdict,
     parts: snapshot.parts,
     ratedCombination: snapshot.ratedCombination,
     prices: snapshot.prices,
@@ -218,7 +414,4 @@ async function insertRevision(
     finalizedAt: null,
     openItemsReason: null,
   });
-  // The entity's JSON columns are plain objects; TypeORM's insert typing can not see that through Record<string, unknown>.
-  await repo.insert(row as QueryDeepPartialEntity<SystemRevisionRow>);
-  return row;
 }
