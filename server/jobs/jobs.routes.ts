@@ -4,6 +4,7 @@ import { currentUser, requireAuth } from '../auth/auth.middleware';
 import type { AppContext } from '../context';
 import { IdParamSchema, parseBody, parseParams } from '../lib/validate';
 import { attachmentUpload } from '../attachments/attachments.routes';
+import { recordForRole } from '../systems/record-price-visibility';
 import { createSystem, listSystems } from '../systems/systems.service';
 import { parseSystemCreate } from '../systems/system-validation';
 import { createJob, getJob, listJobs, updateJob } from './jobs.service';
@@ -30,7 +31,7 @@ export function jobsRouter(ctx: AppContext): Router {
   });
   router.post('/:id/systems', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.status(201).json(await createSystem(ctx, id, parseSystemCreate(req.body), currentUser(req)));
+    res.status(201).json(recordForRole(currentUser(req).role, await createSystem(ctx, id, parseSystemCreate(req.body), currentUser(req))));
   });
   attachmentUpload(ctx, router);
   return router;

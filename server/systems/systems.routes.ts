@@ -7,6 +7,7 @@ import { IdParamSchema, parseBody, parseParams } from '../lib/validate';
 import { sendReport } from '../mail/send-report';
 import { ReportQuerySchema, renderSystemReport } from '../reports/system-report';
 import { addReading } from './readings.service';
+import { recordForRole } from './record-price-visibility';
 import { finalizeSystem, getRevision, getSystem, patchSystem, reviseSystem } from './systems.service';
 
 const RevisionParamSchema = IdParamSchema.extend({ n: z.coerce.number().int().positive() });
@@ -16,23 +17,23 @@ export function systemsRouter(ctx: AppContext): Router {
   const router = Router();
   router.use(requireAuth(ctx));
   router.get('/:id', async (req, res) => {
-    res.json(await getSystem(ctx, parseParams(IdParamSchema, req.params).id));
+    res.json(recordForRole(currentUser(req).role, await getSystem(ctx, parseParams(IdParamSchema, req.params).id)));
   });
   router.patch('/:id', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.json(await patchSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req)));
+    res.json(recordForRole(currentUser(req).role, await patchSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req))));
   });
   router.post('/:id/revisions', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.status(201).json(await reviseSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req)));
+    res.status(201).json(recordForRole(currentUser(req).role, await reviseSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req))));
   });
   router.get('/:id/revisions/:n', async (req, res) => {
     const { id, n } = parseParams(RevisionParamSchema, req.params);
-    res.json(await getRevision(ctx, id, n));
+    res.json(recordForRole(currentUser(req).role, await getRevision(ctx, id, n)));
   });
   router.post('/:id/finalize', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.json(await finalizeSystem(ctx, id, parseBody(SystemFinalizeSchema, req.body), currentUser(req).id));
+    res.json(recordForRole(currentUser(req).role, await finalizeSystem(ctx, id, parseBody(SystemFinalizeSchema, req.body), currentUser(req).id)));
   });
   router.post('/:id/readings', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);

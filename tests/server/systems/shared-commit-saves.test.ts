@@ -30,6 +30,7 @@ afterAll(async () => {
 
 const auth = () => authFor(t, 'tech');
 const create = () => request(server).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send(recordBody(f));
+const createAsEstimator = () => request(server).post(`/api/jobs/${f.jobId}/systems`).set(authFor(t, 'estimator')).send(recordBody(f));
 const revisionsOf = async (id: number) =>
   (
     await sql<{ revision: number }>(
@@ -160,7 +161,8 @@ describe('the shared transaction', () => {
 
 describe('the price snapshot', () => {
   it('when prices are imported after a save, then the next save of the same parts carries the new price', async () => {
-    const first = await create().expect(201);
+    // An estimator saves here: the amounts are for the office (a tech's answer leaves them out).
+    const first = await createAsEstimator().expect(201);
     expect(first.body.prices.parts.indoorCoil).toMatchObject({ distributor: 'Tarn Supply', priceCents: 90000 });
     // An invented distributor undercuts the coil: 850.00 beats 900.00 from today on.
     await uploadImport(t.ctx, {
@@ -171,7 +173,7 @@ describe('the price snapshot', () => {
       userId: t.users.admin.id,
       distributor: 'Brindle Supply',
     });
-    const second = await create().expect(201);
+    const second = await createAsEstimator().expect(201);
     expect(second.body.prices.parts.indoorCoil).toMatchObject({ distributor: 'Brindle Supply', priceCents: 85000 });
     // 310000 (outdoor, Wexmoor) + 85000 (coil, Brindle): the sum of the best prices.
     expect(second.body.prices.totalCents).toBe(395000);

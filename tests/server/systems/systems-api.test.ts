@@ -28,7 +28,7 @@ const DONE_ALL = [
 ];
 
 describe('POST /api/jobs/:id/systems', () => {
-  it('when a tech saves a check to a job, then 201 with a draft revision 1, the check as it stood, the parts, rated combination and best prices', async () => {
+  it('when a tech saves a check to a job, then 201 with a draft revision 1, the check as it stood, the parts, rated combination and who stocks each part (amounts for the office only)', async () => {
     const res = await create().expect(201);
     expect(res.body).toMatchObject({
       id: expect.any(Number),
@@ -47,10 +47,15 @@ describe('POST /api/jobs/:id/systems', () => {
     expect(res.body.parts.outdoor).toMatchObject({ id: f.outdoorId, spec: { model: 'QX-HP36-B', brand: 'Quillon', mcaAmps: 21.2 } });
     expect(res.body.parts.installDate).toBe('2026-11-20');
     expect(res.body.ratedCombination).toMatchObject({ reference: 'QX-REF-0042', seer2: 15.2 });
-    // Cheapest current price per part: 3100.00 beats 3200.00; the 2099 row is scheduled, not current.
-    expect(res.body.prices.parts.outdoor).toMatchObject({ distributor: 'Wexmoor Parts', priceCents: 310000 });
-    expect(res.body.prices.parts.indoorCoil).toMatchObject({ distributor: 'Tarn Supply', priceCents: 90000 });
-    expect(res.body.prices.totalCents).toBe(400000);
+    // A tech learns who stocks each part, not what the shop pays (issue 7: prices stay with the office).
+    expect(res.body.prices.parts.outdoor).toEqual({ distributor: 'Wexmoor Parts', effectiveFrom: expect.any(String), inStock: true });
+    expect(res.body.prices.totalCents).toBeUndefined();
+    // The estimator reads the same record with the amounts: the cheapest current price per part (3100.00 beats
+    // 3200.00; the 2099 row is scheduled, not current).
+    const office = await request(t.app).get(`/api/systems/${res.body.id}`).set(auth('estimator')).expect(200);
+    expect(office.body.prices.parts.outdoor).toMatchObject({ distributor: 'Wexmoor Parts', priceCents: 310000 });
+    expect(office.body.prices.parts.indoorCoil).toMatchObject({ distributor: 'Tarn Supply', priceCents: 90000 });
+    expect(office.body.prices.totalCents).toBe(400000);
     // The attic location puts overflow protection on the list (IRC M1411.3), and every item starts open.
     expect(res.body.checklist.map((c: { id: string }) => c.id)).toEqual(expect.arrayContaining(DONE_ALL));
     expect(res.body.openChecklistItems).toEqual(res.body.checklist.map((c: { id: string }) => c.id));
