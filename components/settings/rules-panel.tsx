@@ -1,3 +1,4 @@
+import { router } from 'expo-router';
 import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { ActivityIndicator, Button, Text } from 'react-native-paper';
@@ -7,7 +8,7 @@ import { useRuleSettings, useSaveRuleSettings } from '@/hooks/use-rule-settings'
 import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { Screen } from '@/components/ui/screen';
-import { bodyOf, defaultHint, draftOf, SETTING_FIELDS, type RulesDraft } from './rules-draft';
+import { bodyOf, defaultHint, draftOf, rebateTiersText, SETTING_FIELDS, type RulesDraft } from './rules-draft';
 import { TransitionRuleCard } from './transition-rule-card';
 import { CommissioningSettings } from './commissioning-settings';
 
@@ -75,23 +76,14 @@ export function RulesPanel() {
             Put the default thresholds back
           </Button>
           <Text variant="titleMedium" role="heading" aria-level={2}>
-            Rebate tier
+            Rebate tiers
           </Text>
-          <Text variant="bodySmall">The tier your shop sells to; leave every box empty to check none.</Text>
-          <View style={styles.grid}>
-            {(['name', 'seer2', 'eer2', 'hspf2'] as const).map((k) => (
-              <FormField
-                key={k}
-                style={styles.cell}
-                label={{ name: 'Tier name', seer2: 'Minimum SEER2', eer2: 'Minimum EER2', hspf2: 'Minimum HSPF2' }[k]}
-                value={draft.tier[k]}
-                keyboardType={k === 'name' ? 'default' : 'decimal-pad'}
-                onChangeText={(v) => setDraft({ ...draft, tier: { ...draft.tier, [k]: v } })}
-                error={errors[`settings.rebateTier.${k}`] ?? (k === 'name' ? errors['settings.rebateTier'] : undefined)}
-                testID={`tier-${k}`}
-              />
-            ))}
-          </View>
+          <Text variant="bodySmall" testID="rules-rebate-tiers">
+            {rebateTiersText(query.data?.settings.rebateTiers?.length ?? 0)}
+          </Text>
+          <Button mode="outlined" icon="cash-multiple" onPress={() => router.push('/admin/pricing')} contentStyle={styles.button} style={styles.start}>
+            Edit the rebate tiers on Pricing
+          </Button>
           <Text variant="titleMedium" role="heading" aria-level={2}>
             Refrigerant transition rules
           </Text>
@@ -118,4 +110,5 @@ const styles = StyleSheet.create({
   button: { minHeight: TOUCH_TARGET },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
   cell: { flexGrow: 1, minWidth: 240 },
+  start: { alignSelf: 'flex-start' },
 });

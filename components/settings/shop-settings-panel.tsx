@@ -132,10 +132,10 @@ export function ShopSettingsPanel() {
           </SectionCard>
           <SectionCard title="Rebate tiers" testID="rebate-tiers">
             <Text variant="bodySmall">
-              Each option shows which of these tiers it meets. Give each tier at least one minimum rating; take the figures from your program&apos;s own
-              rules.
+              Each option shows which of these tiers it meets, and every compatibility check flags a combination that falls short of them (the one list
+              of tiers: Admin → Rules uses it too). Give each tier at least one minimum rating; take the figures from your program&apos;s own rules.
             </Text>
-            {draft.tiers.length === 0 ? <Text variant="bodyMedium">No tiers: options will not show a rebate tier.</Text> : null}
+            {draft.tiers.length === 0 ? <Text variant="bodyMedium">No tiers: options and checks will not judge a rebate tier.</Text> : null}
             {draft.tiers.map((tier, i) => (
               <RebateTierRow
                 key={i}

@@ -549,7 +549,7 @@ const CASES: TextCase[] = [
     ruleId: 'efficiency.rebate-tier',
     severity: 'caution',
     pairing: () => edit(() => {}),
-    context: { ...DEFAULT_CONTEXT, settings: { ...DEFAULT_CONTEXT.settings, rebateTier: { name: 'Tier 2', seer2: 16 } } },
+    context: { ...DEFAULT_CONTEXT, settings: { ...DEFAULT_CONTEXT.settings, rebateTiers: [{ name: 'Tier 2', seer2: 16 }] } },
     title: 'Short of the Tier 2 rebate tier: SEER2 15.2 is below 16',
     detail: ['SEER2 15.2 is below 16'],
   },
