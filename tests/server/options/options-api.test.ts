@@ -1,25 +1,25 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { DEFAULT_SHOP_SETTINGS } from '../../../shared/estimates/shop-defaults';
 import type { OptionView } from '../../../shared/schemas/options';
 import { uploadImport } from '../../../server/imports/imports.service';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
-import { authFor, buildFixture, type Fixture } from '../systems/system-fixtures';
+import { useFixtureApp } from '../../helpers/fixture-app';
+import type { TestApp } from '../../helpers/test-app';
+import { authFor, type Fixture } from '../systems/system-fixtures';
 
 let t: TestApp;
 let f: Fixture;
+useFixtureApp((app, fixture) => {
+  t = app;
+  f = fixture;
+});
 beforeAll(async () => {
-  t = await createTestApp();
-  f = await buildFixture(t);
   // Two invented tiers (not any real program): the shop's list, which the options judge each option against.
   const rebateTiers = [
     { name: 'Demo tier 1 (invented)', seer2: 15.2, eer2: 11 },
     { name: 'Demo tier 2 (invented)', seer2: 17, hspf2: 8.5 },
   ];
   await request(t.app).put('/api/settings/shop').set(authFor(t, 'admin')).send({ ...DEFAULT_SHOP_SETTINGS, rebateTiers }).expect(200);
-});
-afterAll(async () => {
-  await t.close();
 });
 
 const est = () => authFor(t, 'estimator');

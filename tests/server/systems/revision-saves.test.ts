@@ -1,16 +1,14 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
-import { authFor, buildFixture, recordBody, type Fixture } from './system-fixtures';
+import { describe, expect, it } from 'vitest';
+import { useFixtureApp } from '../../helpers/fixture-app';
+import type { TestApp } from '../../helpers/test-app';
+import { authFor, recordBody, type Fixture } from './system-fixtures';
 
 let t: TestApp;
 let f: Fixture;
-beforeAll(async () => {
-  t = await createTestApp();
-  f = await buildFixture(t);
-});
-afterAll(async () => {
-  await t.close();
+useFixtureApp((app, fixture) => {
+  t = app;
+  f = fixture;
 });
 
 const auth = () => authFor(t, 'tech');

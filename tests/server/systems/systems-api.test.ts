@@ -1,17 +1,15 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Finding } from '../../../shared/rules/types';
+import { useFixtureApp } from '../../helpers/fixture-app';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 import { authFor, buildFixture, recordBody, type Fixture } from './system-fixtures';
 
 let t: TestApp;
 let f: Fixture;
-beforeAll(async () => {
-  t = await createTestApp();
-  f = await buildFixture(t);
-});
-afterAll(async () => {
-  await t.close();
+useFixtureApp((app, fixture) => {
+  t = app;
+  f = fixture;
 });
 
 const auth = (role: 'tech' | 'estimator' | 'admin' = 'tech') => authFor(t, role);
