@@ -8,12 +8,8 @@ import type { TestApp } from '../../helpers/test-app';
 import { jpegHead, tinyPng } from '../systems/images';
 import { authFor, recordBody, type Fixture } from '../systems/system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
-useFixtureApp((app, fixture) => {
-  t = app;
-  f = fixture;
-});
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 
 const auth = (role: 'tech' | 'estimator' | 'admin' = 'tech') => authFor(t, role);
 const upload = (data: Buffer, name: string, fields: Record<string, string> = {}) => {

@@ -7,12 +7,8 @@ import { useFixtureApp } from '../../helpers/fixture-app';
 import type { TestApp } from '../../helpers/test-app';
 import { authFor, type Fixture } from '../systems/system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
-useFixtureApp((app, fixture) => {
-  t = app;
-  f = fixture;
-});
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 beforeAll(async () => {
   // Two invented tiers (not any real program): the shop's list, which the options judge each option against.
   const rebateTiers = [

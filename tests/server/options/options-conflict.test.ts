@@ -5,12 +5,8 @@ import { useFixtureApp } from '../../helpers/fixture-app';
 import type { TestApp } from '../../helpers/test-app';
 import { authFor, type Fixture } from '../systems/system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
-useFixtureApp((app, fixture) => {
-  t = app;
-  f = fixture;
-});
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 
 const est = () => authFor(t, 'estimator');
 

@@ -1,17 +1,13 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { DEFAULT_SHOP_SETTINGS } from '../../../shared/estimates/shop-defaults';
 import type { Finding } from '../../../shared/rules/types';
 import type { ShopRebateTier } from '../../../shared/schemas/options';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { useTestApp } from '../../helpers/fixture-app';
+import type { TestApp } from '../../helpers/test-app';
 
 let t: TestApp;
-beforeAll(async () => {
-  t = await createTestApp();
-});
-afterAll(async () => {
-  await t.close();
-});
+useTestApp((app) => (t = app));
 
 const auth = (role: 'tech' | 'estimator' | 'admin') => ({ Authorization: `Bearer ${t.tokenFor(role)}` });
 const putShop = (rebateTiers: ShopRebateTier[]) =>

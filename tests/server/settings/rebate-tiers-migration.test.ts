@@ -1,17 +1,13 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { CARRIED_TIER_NOTE } from '../../../server/db/migrations/1765430000000-rebate-tiers-one-list';
 import { forgetRulesSettings } from '../../../server/settings/rules-settings-cache';
 import { sql } from '../../helpers/sql';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { useTestApp } from '../../helpers/fixture-app';
+import type { TestApp } from '../../helpers/test-app';
 
 let t: TestApp;
-beforeAll(async () => {
-  t = await createTestApp();
-});
-afterAll(async () => {
-  await t.close();
-});
+useTestApp((app) => (t = app));
 
 const settingsOf = async (table: 'rule_settings' | 'shop_settings') => {
   const rows = await sql<{ settings: string }>(t.ctx.dataSource, `SELECT "settings" FROM "${table}" WHERE "id" = 1`);

@@ -1,15 +1,11 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Finding, TransitionRule } from '../../../shared/rules/types';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { useTestApp } from '../../helpers/fixture-app';
+import type { TestApp } from '../../helpers/test-app';
 
 let t: TestApp;
-beforeAll(async () => {
-  t = await createTestApp();
-});
-afterAll(async () => {
-  await t.close();
-});
+useTestApp((app) => (t = app));
 
 const auth = (role: 'tech' | 'estimator' | 'admin') => ({ Authorization: `Bearer ${t.tokenFor(role)}` });
 const getRules = (role: 'tech' | 'estimator' | 'admin' = 'tech') => request(t.app).get('/api/settings/rules').set(auth(role));

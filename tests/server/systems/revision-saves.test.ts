@@ -4,12 +4,8 @@ import { useFixtureApp } from '../../helpers/fixture-app';
 import type { TestApp } from '../../helpers/test-app';
 import { authFor, recordBody, type Fixture } from './system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
-useFixtureApp((app, fixture) => {
-  t = app;
-  f = fixture;
-});
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 
 const auth = () => authFor(t, 'tech');
 const create = async () => (await request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send(recordBody(f)).expect(201)).body as { id: number };

@@ -5,12 +5,8 @@ import { useFixtureApp } from '../../helpers/fixture-app';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 import { authFor, buildFixture, recordBody, type Fixture } from './system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
-useFixtureApp((app, fixture) => {
-  t = app;
-  f = fixture;
-});
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 
 const auth = (role: 'tech' | 'estimator' | 'admin' = 'tech') => authFor(t, role);
 const create = (over: object = {}, role: 'tech' | 'estimator' | 'admin' = 'tech') =>
