@@ -5,9 +5,14 @@ import { draftFromOption, EXTRA_KIND_WORDS, type DraftPart, type OptionDraft } f
 
 const blank = (v: string) => (v.trim() ? v.trim() : '(empty)');
 const partText = (p?: DraftPart) => (p ? `${p.label}${p.kept ? ' (kept)' : ''}` : '(none)');
-const pricingText = (d: OptionDraft) => (d.pricing === 'shop' ? 'Shop default' : `${d.pricing === 'markup' ? 'Markup' : 'Target margin'} ${blank(d.pct)}%`);
+const pricingText = (d: OptionDraft) =>
+  d.pricing === 'shop' ? 'Shop default' : `${d.pricing === 'markup' ? 'Markup' : 'Target margin'} ${blank(d.pct)}%`;
 const linesText = (d: OptionDraft) =>
-  d.lines.length ? d.lines.map((l) => `${l.description.trim() || EXTRA_KIND_WORDS[l.kind]} × ${l.quantity}${l.price ? ` at $${l.price}` : ''}`).join('; ') : '(none)';
+  d.lines.length
+    ? d.lines
+        .map((l) => `${l.description.trim() || EXTRA_KIND_WORDS[l.kind]} × ${l.quantity}${l.price ? ` at $${l.price}` : ''}`)
+        .join('; ')
+    : '(none)';
 
 /** The fields an estimator can edit, each in words, in the editor's order. */
 const FIELDS: { key: string; label: string; text(d: OptionDraft): string }[] = [

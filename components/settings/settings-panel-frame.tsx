@@ -33,7 +33,15 @@ export function SettingsPanelFrame({ title, subtitle, saveTestID, loadingLabel, 
       title={title}
       subtitle={subtitle}
       actions={
-        <Button mode="contained" icon="content-save-outline" onPress={form.onSave} loading={save.isPending} disabled={!form.draft || save.isPending} contentStyle={styles.button} testID={saveTestID}>
+        <Button
+          mode="contained"
+          icon="content-save-outline"
+          onPress={form.onSave}
+          loading={save.isPending}
+          disabled={!form.draft || save.isPending}
+          contentStyle={styles.button}
+          testID={saveTestID}
+        >
           Save
         </Button>
       }

@@ -52,7 +52,16 @@ export function energyComparison(
   if (!cooling) {
     // Without the cooling leg any saving (and so any payback) would be a guess: say why instead of a zero.
     const paybackWords = `Payback not worked out: ${NO_RATED_SEER2}.`;
-    return { cooling: null, ...(heating ? { heating } : {}), annualSavingCents: null, paybackYears: null, paybackText: paybackWords, notComputed: NO_RATED_SEER2, existing, assumptions };
+    return {
+      cooling: null,
+      ...(heating ? { heating } : {}),
+      annualSavingCents: null,
+      paybackYears: null,
+      paybackText: paybackWords,
+      notComputed: NO_RATED_SEER2,
+      existing,
+      assumptions,
+    };
   }
   const annualSavingCents = cooling.savingCents + (heating?.savingCents ?? 0);
   assumptions.push(`Annual saving ${formatDollars(annualSavingCents)}; simple payback = price ÷ annual saving, no discounting.`);

@@ -125,11 +125,14 @@ function mergeInput(row: JobOptionRow, patch: OptionPatch): unknown {
 /** The 409 for a save from a stale revision, carrying the option as it now stands (as a record's conflict does). */
 async function staleOption(ctx: AppContext, id: number): Promise<AppError> {
   const current = await getOption(ctx, id);
-  return conflict(`This option was changed by someone else (now revision ${current.revision}): review their version and choose which to keep.`, {
-    revision: current.revision,
-    currentRevision: current.revision,
-    current,
-  });
+  return conflict(
+    `This option was changed by someone else (now revision ${current.revision}): review their version and choose which to keep.`,
+    {
+      revision: current.revision,
+      currentRevision: current.revision,
+      current,
+    },
+  );
 }
 
 /** PATCH /api/options/:id: a stale revision is a 409 with the current option; lines keep their snapshot unless re-priced or replaced. */

@@ -60,12 +60,10 @@ export async function renderProposal(ctx: AppContext, jobId: number, options: { 
       const next = e.cooling.newCostCents + (e.heating?.newCostCents ?? 0);
       return `${formatDollars(now)} → ${formatDollars(next)}`;
     }),
-    row(
-      'Saving a year / simple payback',
-      (o) =>
-        o.energy.annualSavingCents === null
-          ? 'Not worked out'
-          : `${formatDollars(o.energy.annualSavingCents)} / ${o.energy.paybackYears === null ? 'none' : `${o.energy.paybackYears} years`}`,
+    row('Saving a year / simple payback', (o) =>
+      o.energy.annualSavingCents === null
+        ? 'Not worked out'
+        : `${formatDollars(o.energy.annualSavingCents)} / ${o.energy.paybackYears === null ? 'none' : `${o.energy.paybackYears} years`}`,
     ),
   ]);
 

@@ -55,8 +55,8 @@ export function adviseRepairOrReplace(facts: RepairOrReplaceFacts, options: Opti
       o.annualSavingCents === null
         ? `${o.name}: ${formatDollars(o.totalCents)}, saving not worked out (no rated SEER2 for this combination).`
         : o.paybackYears === null
-        ? `${o.name}: ${formatDollars(o.totalCents)}, no energy saving over the existing system.`
-        : `${o.name}: ${formatDollars(o.totalCents)} ÷ ${formatDollars(o.annualSavingCents)} a year saved = ${o.paybackYears} years payback.`,
+          ? `${o.name}: ${formatDollars(o.totalCents)}, no energy saving over the existing system.`
+          : `${o.name}: ${formatDollars(o.totalCents)} ÷ ${formatDollars(o.annualSavingCents)} a year saved = ${o.paybackYears} years payback.`,
     );
   }
   let recommendation: RepairOrReplaceAdvice['recommendation'];

@@ -10,8 +10,13 @@ const theirs = {
   revision: 3,
   updatedAt: '2026-12-02T10:15:00.000Z',
   input: { name: 'Heat pump, new coil', outdoor: { id: 1 }, indoorCoil: { id: 2 }, markupPct: 35, taxRatePct: 7 },
-  parts: { outdoor: { model: 'QX-HP36-B', kept: false, description: '' }, indoorCoil: { model: 'QX-CL36-B', kept: false, description: '' } },
-  lines: [{ kind: 'fee', description: 'Permit', quantity: 1, unitPriceCents: 7500, priceSource: 'typed', taxable: false, extendedCents: 7500 }],
+  parts: {
+    outdoor: { model: 'QX-HP36-B', kept: false, description: '' },
+    indoorCoil: { model: 'QX-CL36-B', kept: false, description: '' },
+  },
+  lines: [
+    { kind: 'fee', description: 'Permit', quantity: 1, unitPriceCents: 7500, priceSource: 'typed', taxable: false, extendedCents: 7500 },
+  ],
   laborHours: 7,
   laborRateCents: 9500,
 } as unknown as OptionView;

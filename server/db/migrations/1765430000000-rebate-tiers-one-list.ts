@@ -20,11 +20,20 @@ async function readSettings(queryRunner: QueryRunner, table: 'rule_settings' | '
   return rows[0] ? (JSON.parse(rows[0].settings) as Settings) : null;
 }
 
-async function writeSettings(queryRunner: QueryRunner, table: 'rule_settings' | 'shop_settings', settings: Settings, exists: boolean): Promise<void> {
+async function writeSettings(
+  queryRunner: QueryRunner,
+  table: 'rule_settings' | 'shop_settings',
+  settings: Settings,
+  exists: boolean,
+): Promise<void> {
   const p = (n: number) => param(queryRunner, n);
   const json = JSON.stringify(settings);
   if (exists) await queryRunner.query(`UPDATE "${table}" SET "settings" = ${p(1)} WHERE "id" = 1`, [json]);
-  else await queryRunner.query(`INSERT INTO "${table}" ("id", "settings", "updatedAt", "updatedBy") VALUES (1, ${p(1)}, ${p(2)}, NULL)`, [json, new Date().toISOString()]);
+  else
+    await queryRunner.query(`INSERT INTO "${table}" ("id", "settings", "updatedAt", "updatedBy") VALUES (1, ${p(1)}, ${p(2)}, NULL)`, [
+      json,
+      new Date().toISOString(),
+    ]);
 }
 
 /**
@@ -44,7 +53,12 @@ export class RebateTiersOneList1765430000000 implements MigrationInterface {
     const list = (shop?.rebateTiers as Tier[] | undefined) ?? [];
     if (!list.some((t) => t.name === tier.name)) {
       const { name, seer2, eer2, hspf2 } = tier;
-      await writeSettings(queryRunner, 'shop_settings', { ...shop, rebateTiers: [...list, { name, seer2, eer2, hspf2, note: CARRIED_TIER_NOTE }] }, shop !== null);
+      await writeSettings(
+        queryRunner,
+        'shop_settings',
+        { ...shop, rebateTiers: [...list, { name, seer2, eer2, hspf2, note: CARRIED_TIER_NOTE }] },
+        shop !== null,
+      );
     }
     const { rebateTier: _moved, ...rest } = rules;
     await writeSettings(queryRunner, 'rule_settings', rest, true);

@@ -15,7 +15,11 @@ beforeAll(async () => {
     { name: 'Demo tier 1 (invented)', seer2: 15.2, eer2: 11 },
     { name: 'Demo tier 2 (invented)', seer2: 17, hspf2: 8.5 },
   ];
-  await request(t.app).put('/api/settings/shop').set(authFor(t, 'admin')).send({ ...DEFAULT_SHOP_SETTINGS, rebateTiers }).expect(200);
+  await request(t.app)
+    .put('/api/settings/shop')
+    .set(authFor(t, 'admin'))
+    .send({ ...DEFAULT_SHOP_SETTINGS, rebateTiers })
+    .expect(200);
 });
 
 const est = () => authFor(t, 'estimator');

@@ -13,7 +13,8 @@ const est = () => authFor(t, 'estimator');
 
 /** An invented air conditioner (and an invented price) with no SEER2 of its own and no rated combination with the fixture's coil. */
 async function unratedOutdoorId(): Promise<number> {
-  const csv = 'model,brand,system_type,refrigerant,nominal_tons,cooling_btuh,metering_required,mca_amps,mocp_amps\nQX-AC30-U,Quillon,ac,R-410A,2.5,29000,txv,17.1,25\n';
+  const csv =
+    'model,brand,system_type,refrigerant,nominal_tons,cooling_btuh,metering_required,mca_amps,mocp_amps\nQX-AC30-U,Quillon,ac,R-410A,2.5,29000,txv,17.1,25\n';
   const load = (kind: 'outdoor-units' | 'prices', body: string, distributor?: string) =>
     uploadImport(t.ctx, { buffer: Buffer.from(body), fileName: `${kind}.csv`, kind, dryRun: false, userId: t.users.admin.id, distributor });
   await load('outdoor-units', csv);
@@ -27,7 +28,15 @@ const optionWith = async (outdoorId: number, name: string) => {
   const res = await request(t.app)
     .post(`/api/jobs/${f.jobId}/options`)
     .set(est())
-    .send({ name, outdoor: { id: outdoorId }, indoorCoil: { id: f.coilId }, laborHours: 4, laborRateCents: 9500, markupPct: 35, taxRatePct: 0 });
+    .send({
+      name,
+      outdoor: { id: outdoorId },
+      indoorCoil: { id: f.coilId },
+      laborHours: 4,
+      laborRateCents: 9500,
+      markupPct: 35,
+      taxRatePct: 0,
+    });
   expect(res.status).toBe(201);
   return res.body as OptionView;
 };
@@ -45,7 +54,11 @@ describe('an option whose combination has no rated SEER2', () => {
   });
 
   it('when the job is weighed for repair or replace, then that option has no saving and no payback and the arithmetic says why', async () => {
-    const res = await request(t.app).post(`/api/jobs/${f.jobId}/repair-or-replace`).set(est()).send({ ageYears: 16, repairQuoteCents: 120_000 }).expect(200);
+    const res = await request(t.app)
+      .post(`/api/jobs/${f.jobId}/repair-or-replace`)
+      .set(est())
+      .send({ ageYears: 16, repairQuoteCents: 120_000 })
+      .expect(200);
     const body = res.body as RepairOrReplaceResult;
     const unrated = body.options.find((o) => o.name === 'Unrated pairing')!;
     expect(unrated).toMatchObject({ annualSavingCents: null, paybackYears: null });

@@ -40,7 +40,10 @@ describe('rebate tiers: one list (the shop settings) for checks and options', ()
   it('when an admin saves tiers on Pricing, then the rule settings carry them (without notes) and the next check uses them at once', async () => {
     await putShop([tierA, tierB]);
     const rules = await request(t.app).get('/api/settings/rules').set(auth('tech')).expect(200);
-    expect(rules.body.settings.rebateTiers).toEqual([{ name: 'Shop tier A', seer2: 15 }, { name: 'Shop tier B', seer2: 17, eer2: 12 }]);
+    expect(rules.body.settings.rebateTiers).toEqual([
+      { name: 'Shop tier A', seer2: 15 },
+      { name: 'Shop tier B', seer2: 17, eer2: 12 },
+    ]);
     // 14 < 15 and < 17: short of both, meets none → two cautions.
     const none = await rebateFindings(14);
     expect(none.map((f) => [f.severity, f.values.tier])).toEqual([
@@ -57,8 +60,16 @@ describe('rebate tiers: one list (the shop settings) for checks and options', ()
   it('when the rule settings are saved with a tier in them, then it is not stored there: the shop list stays the one source', async () => {
     await putShop([tierB]);
     const current = (await request(t.app).get('/api/settings/rules').set(auth('admin')).expect(200)).body;
-    const settings = { ...current.settings, rebateTiers: [{ name: 'Sneaked in', seer2: 30 }], rebateTier: { name: 'Old single', seer2: 30 } };
-    const saved = await request(t.app).put('/api/settings/rules').set(auth('admin')).send({ settings, transitionRules: current.transitionRules }).expect(200);
+    const settings = {
+      ...current.settings,
+      rebateTiers: [{ name: 'Sneaked in', seer2: 30 }],
+      rebateTier: { name: 'Old single', seer2: 30 },
+    };
+    const saved = await request(t.app)
+      .put('/api/settings/rules')
+      .set(auth('admin'))
+      .send({ settings, transitionRules: current.transitionRules })
+      .expect(200);
     expect(saved.body.settings.rebateTiers).toEqual([{ name: 'Shop tier B', seer2: 17, eer2: 12 }]);
     expect(saved.body.settings.rebateTier).toBeUndefined();
   });

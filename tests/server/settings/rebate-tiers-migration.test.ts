@@ -37,7 +37,10 @@ describe('migration 1765430000000 (rebate tiers: one list)', () => {
     expect(await settingsOf('rule_settings')).toEqual({ cfmPerTonMin: 360, cfmPerTonMax: 440 });
     expect(await settingsOf('shop_settings')).toEqual({ rebateTiers: [{ ...single, note: CARRIED_TIER_NOTE }] });
     forgetRulesSettings(t.ctx);
-    const rules = await request(t.app).get('/api/settings/rules').set({ Authorization: `Bearer ${t.tokenFor('tech')}` }).expect(200);
+    const rules = await request(t.app)
+      .get('/api/settings/rules')
+      .set({ Authorization: `Bearer ${t.tokenFor('tech')}` })
+      .expect(200);
     expect(rules.body.settings).toMatchObject({ cfmPerTonMin: 360, rebateTiers: [single] });
 
     await undo();
