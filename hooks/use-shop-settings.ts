@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ShopSettings, ShopSettingsResponse } from '@/shared/schemas/options';
 import { apiRequest } from './api-client';
+import { ruleSettingsKeys } from './use-rule-settings';
 import { STALE } from './stale-times';
 
 // Under ['settings', 'shop'], beside the rule settings; not persisted for offline use (estimates need the server).
@@ -36,6 +37,8 @@ export function useSaveShopSettings() {
       return Promise.all([
         client.invalidateQueries({ queryKey: shopSettingsKeys.all }),
         client.invalidateQueries({ queryKey: OPTIONS_PREFIX }),
+        // The rebate tiers are also what checks (on the phone too) are judged against.
+        client.invalidateQueries({ queryKey: ruleSettingsKeys.all }),
       ]);
     },
   });

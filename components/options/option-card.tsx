@@ -5,6 +5,7 @@ import { useTandemTheme } from '@/hooks/use-tandem-theme';
 import type { OptionLine, OptionView } from '@/shared/schemas/options';
 import { verdictWords } from '@/components/check/verdict-words';
 import { DecorativeIcon } from '@/components/ui/decorative-icon';
+import { MessageBanner } from '@/components/ui/message-banner';
 import { moneyText, numberText, type FigureRow } from './option-words';
 
 interface Props {
@@ -74,6 +75,11 @@ export function OptionCard({ option, index, count, rows, differing, onEdit, onCh
         <Text variant="headlineSmall" testID="option-total">
           {moneyText(option.price.totalCents)}
         </Text>
+        {option.energy.notComputed ? (
+          <MessageBanner tone="info" testID="option-energy-missing">
+            {`Yearly cooling cost and payback not worked out: ${option.energy.notComputed}.`}
+          </MessageBanner>
+        ) : null}
         <View style={styles.figures}>
           {rows.map((row) => {
             const marked = differing.has(row.key);

@@ -12,12 +12,13 @@ import { CatalogSearch } from '@/components/check/catalog-search';
 import type { PickedPart } from '@/components/check/check-store';
 import { ChoiceChips } from '@/components/check/choice-chips';
 import type { PartSlot } from '@/components/check/part-slots';
+import { ConflictDialog } from '@/components/ui/conflict-dialog';
 import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { SectionCard } from '@/components/ui/section-card';
 import { SwitchRow } from '@/components/ui/switch-row';
 import { ToggleGroup } from '@/components/ui/toggle-group';
-import { OptionConflictDialog } from './option-conflict-dialog';
+import { optionConflictIntro, optionConflictRows } from './option-conflict';
 import { buildOptionInput, draftFromOption, emptyLine, EXTRA_KIND_WORDS, type DraftLine, type DraftPart, type OptionDraft } from './option-draft';
 
 const KIND_OPTIONS = EXTRA_LINE_KINDS.map((k) => ({ value: k, label: EXTRA_KIND_WORDS[k] }));
@@ -169,9 +170,12 @@ export function OptionEditor({ jobId, start, onDone, onCancel }: Props) {
           Save option
         </Button>
       </View>
-      <OptionConflictDialog
-        theirs={theirs}
-        mineName={draft.name}
+      <ConflictDialog
+        visible={theirs !== null}
+        intro={theirs ? optionConflictIntro(theirs) : null}
+        rows={theirs ? optionConflictRows(draft, theirs) : []}
+        noClashText="Your form holds the same values as theirs; either choice keeps them."
+        testID="option-conflict"
         onKeepMine={() => {
           const rev = theirs?.revision;
           setTheirs(null);

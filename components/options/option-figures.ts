@@ -1,4 +1,4 @@
-import type { OptionView } from '@/shared/schemas/options';
+import { NO_RATED_SEER2, type EnergyLeg, type OptionView } from '@/shared/schemas/options';
 import { verdictWords } from '@/components/check/verdict-words';
 import { moneyText, numberText, type FigureRow } from './option-words';
 
@@ -38,29 +38,32 @@ export function taxText(o: Pick<OptionView, 'price'>): string {
   return `${numberText(o.price.taxRatePct, 3)}% of ${moneyText(o.price.taxableSellCents)} = ${moneyText(o.price.taxCents)}`;
 }
 
-const NOT_WORKED_OUT = 'Not worked out (no rated SEER2)';
+/** What an energy row says when the server left the figure out, with its reason. */
+export function notWorkedOutText(o: Pick<OptionView, 'energy'>): string {
+  return `Not worked out: ${o.energy.notComputed ?? NO_RATED_SEER2}`;
+}
 
-/** Whether the option's energy figures mean anything: without a SEER2 the server has nothing to divide by. */
-export function hasEnergyFigures(o: Pick<OptionView, 'efficiency'>): boolean {
-  return o.efficiency.seer2 !== undefined;
+/** Whether the option's energy figures mean anything: without a rated SEER2 the server leaves them out. */
+export function hasEnergyFigures(o: Pick<OptionView, 'energy'>): boolean {
+  return o.energy.cooling !== null;
 }
 
 /** "$X a year (now $Y)" for one season, or a dash when the option has no such season. */
-function seasonText(season: OptionView['energy']['cooling'] | undefined): string {
+function seasonText(season: EnergyLeg | null | undefined): string {
   if (!season) return '—';
   return `${moneyText(season.newCostCents, 0)} a year, ${numberText(season.newKwh, 0)} kWh (now ${moneyText(season.existingCostCents, 0)})`;
 }
 
-/** Yearly energy cost of an option: cooling plus heating where compared (cents); null without a rated SEER2. */
-export function annualCostCents(o: Pick<OptionView, 'energy' | 'efficiency'>): number | null {
-  if (!hasEnergyFigures(o)) return null;
+/** Yearly energy cost of an option: cooling plus heating where compared (cents); null when not worked out. */
+export function annualCostCents(o: Pick<OptionView, 'energy'>): number | null {
+  if (!o.energy.cooling) return null;
   return o.energy.cooling.newCostCents + (o.energy.heating?.newCostCents ?? 0);
 }
 
-/** Yearly energy cost of the existing system, as the first option's comparison states it (cents). */
+/** Yearly energy cost of the existing system, as the first option with a cooling comparison states it (cents). */
 export function existingAnnualCostCents(options: Pick<OptionView, 'energy'>[]): number | null {
-  const first = options[0];
-  if (!first) return null;
+  const first = options.find((o) => o.energy.cooling !== null);
+  if (!first?.energy.cooling) return null;
   return first.energy.cooling.existingCostCents + (first.energy.heating?.existingCostCents ?? 0);
 }
 
@@ -83,9 +86,9 @@ export function optionFigureRows(options: OptionView[]): FigureRow[] {
     row('labor', 'Labor (cost)', laborText),
     row('pricing', 'Pricing', pricingText),
     row('tax', 'Tax', taxText),
-    row('cooling', 'Cooling energy', (o) => (hasEnergyFigures(o) ? seasonText(o.energy.cooling) : NOT_WORKED_OUT)),
-    row('heating', 'Heating energy', (o) => (hasEnergyFigures(o) ? seasonText(o.energy.heating) : NOT_WORKED_OUT)),
-    row('saving', 'Saving a year', (o) => (hasEnergyFigures(o) ? moneyText(o.energy.annualSavingCents, 0) : NOT_WORKED_OUT)),
-    row('payback', 'Payback', (o) => (hasEnergyFigures(o) ? o.energy.paybackText : NOT_WORKED_OUT)),
+    row('cooling', 'Cooling energy', (o) => (hasEnergyFigures(o) ? seasonText(o.energy.cooling) : notWorkedOutText(o))),
+    row('heating', 'Heating energy', (o) => (hasEnergyFigures(o) ? seasonText(o.energy.heating) : notWorkedOutText(o))),
+    row('saving', 'Saving a year', (o) => (o.energy.annualSavingCents !== null ? moneyText(o.energy.annualSavingCents, 0) : notWorkedOutText(o))),
+    row('payback', 'Payback', (o) => (o.energy.annualSavingCents !== null ? o.energy.paybackText : notWorkedOutText(o))),
   ];
 }

@@ -2,9 +2,10 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
-import { ApiError, queryString } from '@/hooks/api-client';
+import { queryString } from '@/hooks/api-client';
 import { errorText } from '@/hooks/error-text';
 import { energyParams, useSendProposal } from '@/hooks/use-options';
+import { useSendEmail } from '@/hooks/use-send-email';
 import { ProposalSendSchema, type EnergyQuery } from '@/shared/schemas/options';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { SectionCard } from '@/components/ui/section-card';
@@ -21,34 +22,17 @@ interface Props {
 /** The options as one customer PDF: preview it, or e-mail it (to the job's contact unless changed). */
 export function ProposalCard({ jobId, contactEmail, energy, optionCount }: Props) {
   const send = useSendProposal(jobId);
-  const [open, setOpen] = useState(false);
-  const [to, setTo] = useState<string | null>(null);
-  const [toError, setToError] = useState<string>();
-  const [askAgain, setAskAgain] = useState<string | null>(null);
+  const email = useSendEmail({
+    send,
+    defaultAddress: contactEmail ?? '',
+    schema: ProposalSendSchema,
+    bodyOf: (address, confirm) => ({ to: address.trim(), energy, ...(confirm ? { confirm: true } : {}) }),
+  });
   const [pdfError, setPdfError] = useState<string | null>(null);
-  const address = to ?? contactEmail ?? '';
 
   const preview = () => {
     setPdfError(null);
     openPdf(`/jobs/${jobId}/proposal.pdf${queryString(energyParams(energy))}`, `proposal-job-${jobId}.pdf`).catch((e) => setPdfError(errorText(e)));
-  };
-  const doSend = (confirmed: boolean) => {
-    const parsed = ProposalSendSchema.safeParse({ to: address.trim(), energy, ...(confirmed ? { confirm: true } : {}) });
-    if (!parsed.success) {
-      setToError(parsed.error.issues[0]?.message);
-      return;
-    }
-    setToError(undefined);
-    send.mutate(parsed.data, {
-      onSuccess: () => {
-        setOpen(false);
-        setAskAgain(null);
-      },
-      onError: (err) => {
-        // Like the record report: the server asks before the same proposal goes out twice within a minute.
-        if (err instanceof ApiError && err.code === 'recently-sent') setAskAgain(err.message);
-      },
-    });
   };
 
   return (
@@ -64,26 +48,11 @@ export function ProposalCard({ jobId, contactEmail, energy, optionCount }: Props
         <Button mode="outlined" icon="file-pdf-box" onPress={preview} disabled={optionCount === 0} contentStyle={styles.button} testID="proposal-pdf">
           Preview PDF
         </Button>
-        <Button mode="contained" icon="email-outline" onPress={() => setOpen(true)} disabled={optionCount === 0} contentStyle={styles.button} testID="proposal-send">
+        <Button mode="contained" icon="email-outline" onPress={email.open} disabled={optionCount === 0} contentStyle={styles.button} testID="proposal-send">
           Send to customer
         </Button>
       </View>
-      <SendEmailDialog
-        visible={open}
-        title="E-mail the proposal"
-        testIdPrefix="proposal-send"
-        address={address}
-        addressError={toError}
-        askAgain={askAgain}
-        pending={send.isPending}
-        error={send.isError ? send.error : null}
-        onAddressChange={(v) => {
-          setTo(v);
-          setAskAgain(null);
-        }}
-        onSend={doSend}
-        onDismiss={() => setOpen(false)}
-      />
+      <SendEmailDialog title="E-mail the proposal" testIdPrefix="proposal-send" {...email.dialog} />
     </SectionCard>
   );
 }

@@ -4,11 +4,10 @@ import { RulesSettingsBodySchema, type RulesSettingsBody, type RulesSettingsResp
 /** The admin form's text values: settings as strings, transition rules with editable dates and notes. */
 export interface RulesDraft {
   settings: Record<string, string>;
-  tier: { name: string; seer2: string; eer2: string; hspf2: string };
   rules: TransitionRule[];
 }
 
-export const SETTING_FIELDS: { key: keyof Omit<RuleSettings, 'rebateTier'>; label: string }[] = [
+export const SETTING_FIELDS: { key: keyof Omit<RuleSettings, 'rebateTiers'>; label: string }[] = [
   { key: 'cfmPerTonMin', label: 'Airflow band, low (CFM per ton)' },
   { key: 'cfmPerTonMax', label: 'Airflow band, high (CFM per ton)' },
   { key: 'defaultTargetSubcoolingF', label: 'Default target subcooling (°F)' },
@@ -37,21 +36,15 @@ const text = (n: number | undefined) => (n === undefined ? '' : String(n));
 const num = (s: string) => (s.trim() === '' ? undefined : Number(s.replace(/,/g, '')));
 
 export function draftOf(data: RulesSettingsResponse): RulesDraft {
-  const t = data.settings.rebateTier;
   return {
     settings: Object.fromEntries(ALL_SETTING_FIELDS.map((f) => [f.key, text(data.settings[f.key])])),
-    tier: { name: t?.name ?? '', seer2: text(t?.seer2), eer2: text(t?.eer2), hspf2: text(t?.hspf2) },
     rules: data.transitionRules.map((r) => ({ ...r })),
   };
 }
 
 /** Validates the draft with the server's own schema; errors keyed by path ("settings.cfmPerTonMax"). */
 export function bodyOf(draft: RulesDraft): { ok: true; body: RulesSettingsBody } | { ok: false; errors: Record<string, string> } {
-  const tierGiven = Object.values(draft.tier).some((v) => v.trim() !== '');
   const settings: Record<string, unknown> = Object.fromEntries(ALL_SETTING_FIELDS.map((f) => [f.key, num(draft.settings[f.key] ?? '')]));
-  if (tierGiven) {
-    settings.rebateTier = { name: draft.tier.name, seer2: num(draft.tier.seer2), eer2: num(draft.tier.eer2), hspf2: num(draft.tier.hspf2) };
-  }
   const rules = draft.rules.map((r) => {
     const { manufacturedBefore, ...rest } = r;
     return manufacturedBefore ? { ...rest, manufacturedBefore } : rest;
@@ -61,4 +54,10 @@ export function bodyOf(draft: RulesDraft): { ok: true; body: RulesSettingsBody }
   const errors: Record<string, string> = {};
   for (const issue of result.error.issues) errors[issue.path.join('.')] ??= issue.message;
   return { ok: false, errors };
+}
+
+/** Where the rebate tiers live, as the Rules screen says it: checks use the shop's one list on Pricing. */
+export function rebateTiersText(count: number): string {
+  const set = count === 0 ? 'none is set up yet' : `${count} ${count === 1 ? 'is' : 'are'} set up`;
+  return `Checks judge each combination against the shop's rebate tiers, kept with the prices on Admin → Pricing (${set}).`;
 }

@@ -1,53 +1,34 @@
-import { useEffect, useState } from 'react';
+import { router } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
-import { ActivityIndicator, Button, Text } from 'react-native-paper';
+import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
-import { errorText } from '@/hooks/error-text';
 import { useRuleSettings, useSaveRuleSettings } from '@/hooks/use-rule-settings';
 import { FormField } from '@/components/ui/form-field';
-import { MessageBanner } from '@/components/ui/message-banner';
-import { Screen } from '@/components/ui/screen';
-import { bodyOf, defaultHint, draftOf, SETTING_FIELDS, type RulesDraft } from './rules-draft';
+import { bodyOf, defaultHint, draftOf, rebateTiersText, SETTING_FIELDS } from './rules-draft';
+import { SettingsPanelFrame } from './settings-panel-frame';
 import { TransitionRuleCard } from './transition-rule-card';
+import { useSettingsForm } from './use-settings-form';
 import { CommissioningSettings } from './commissioning-settings';
 
 /** Admin → Rules: the shop's thresholds and the refrigerant transition rules checks run with. */
 export function RulesPanel() {
   const query = useRuleSettings();
   const save = useSaveRuleSettings();
-  const [draft, setDraft] = useState<RulesDraft | null>(null);
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [saved, setSaved] = useState(false);
-
-  useEffect(() => {
-    if (query.data && !draft) setDraft(draftOf(query.data));
-  }, [query.data, draft]);
-
-  const onSave = () => {
-    if (!draft) return;
-    const built = bodyOf(draft);
-    setSaved(false);
-    if (!built.ok) return setErrors(built.errors);
-    setErrors({});
-    save.mutate(built.body, { onSuccess: (data) => (setDraft(draftOf(data)), setSaved(true)) });
-  };
+  const form = useSettingsForm({ data: query.data, draftOf, bodyOf, save });
+  const { draft, edit: setDraft, errors } = form;
   const resetDefaults = () => query.data && draft && setDraft({ ...draftOf({ ...query.data, settings: query.data.defaults }), rules: draft.rules });
 
   return (
-    <Screen
+    <SettingsPanelFrame
       title="Rules"
       subtitle="Thresholds your shop works to, and the refrigerant rules in force. Every check uses these."
-      actions={
-        <Button mode="contained" icon="content-save-outline" onPress={onSave} loading={save.isPending} disabled={!draft || save.isPending} contentStyle={styles.button} testID="save-rules">
-          Save
-        </Button>
-      }
+      saveTestID="save-rules"
+      loadingLabel="Loading the rule settings"
+      savedText="Saved. New checks use these settings."
+      query={query}
+      save={save}
+      form={form}
     >
-      {query.isPending ? <ActivityIndicator /> : null}
-      {query.isError ? <MessageBanner tone="error">{errorText(query.error)}</MessageBanner> : null}
-      {save.isError ? <MessageBanner tone="error">{errorText(save.error)}</MessageBanner> : null}
-      {saved ? <MessageBanner tone="success">Saved. New checks use these settings.</MessageBanner> : null}
-      {Object.keys(errors).length ? <MessageBanner tone="error">Some entries need fixing (marked below).</MessageBanner> : null}
       {draft ? (
         <>
           <View style={styles.grid}>
@@ -75,23 +56,14 @@ export function RulesPanel() {
             Put the default thresholds back
           </Button>
           <Text variant="titleMedium" role="heading" aria-level={2}>
-            Rebate tier
+            Rebate tiers
           </Text>
-          <Text variant="bodySmall">The tier your shop sells to; leave every box empty to check none.</Text>
-          <View style={styles.grid}>
-            {(['name', 'seer2', 'eer2', 'hspf2'] as const).map((k) => (
-              <FormField
-                key={k}
-                style={styles.cell}
-                label={{ name: 'Tier name', seer2: 'Minimum SEER2', eer2: 'Minimum EER2', hspf2: 'Minimum HSPF2' }[k]}
-                value={draft.tier[k]}
-                keyboardType={k === 'name' ? 'default' : 'decimal-pad'}
-                onChangeText={(v) => setDraft({ ...draft, tier: { ...draft.tier, [k]: v } })}
-                error={errors[`settings.rebateTier.${k}`] ?? (k === 'name' ? errors['settings.rebateTier'] : undefined)}
-                testID={`tier-${k}`}
-              />
-            ))}
-          </View>
+          <Text variant="bodySmall" testID="rules-rebate-tiers">
+            {rebateTiersText(query.data?.settings.rebateTiers?.length ?? 0)}
+          </Text>
+          <Button mode="outlined" icon="cash-multiple" onPress={() => router.push('/admin/pricing')} contentStyle={styles.button} style={styles.start}>
+            Edit the rebate tiers on Pricing
+          </Button>
           <Text variant="titleMedium" role="heading" aria-level={2}>
             Refrigerant transition rules
           </Text>
@@ -110,7 +82,7 @@ export function RulesPanel() {
           ))}
         </>
       ) : null}
-    </Screen>
+    </SettingsPanelFrame>
   );
 }
 
@@ -118,4 +90,5 @@ const styles = StyleSheet.create({
   button: { minHeight: TOUCH_TARGET },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
   cell: { flexGrow: 1, minWidth: 240 },
+  start: { alignSelf: 'flex-start' },
 });

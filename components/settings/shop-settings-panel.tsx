@@ -1,16 +1,14 @@
-import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { ActivityIndicator, Button, Text } from 'react-native-paper';
+import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
-import { errorText } from '@/hooks/error-text';
 import { useSaveShopSettings, useShopSettings } from '@/hooks/use-shop-settings';
 import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
-import { Screen } from '@/components/ui/screen';
 import { SectionCard } from '@/components/ui/section-card';
 import { ToggleGroup } from '@/components/ui/toggle-group';
 import type { ShopSettings } from '@/shared/schemas/options';
 import { RebateTierRow } from './rebate-tier-row';
+import { SettingsPanelFrame } from './settings-panel-frame';
 import {
   bodyOf,
   defaultHint,
@@ -24,9 +22,9 @@ import {
   REPAIR_FIELD,
   TAX_FIELD,
   type ShopField,
-  type ShopSettingsDraft,
   type ShopTierDraft,
 } from './shop-settings-draft';
+import { useSettingsForm } from './use-settings-form';
 
 const PRICING_OPTIONS = [
   { value: 'markup', label: 'Markup on cost', testID: 'pricing-markup' },
@@ -37,25 +35,8 @@ const PRICING_OPTIONS = [
 export function ShopSettingsPanel() {
   const query = useShopSettings();
   const save = useSaveShopSettings();
-  const [draft, setDraft] = useState<ShopSettingsDraft | null>(null);
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [saved, setSaved] = useState(false);
-
-  useEffect(() => {
-    if (query.data && !draft) setDraft(draftOf(query.data));
-  }, [query.data, draft]);
-
-  const edit = (next: ShopSettingsDraft) => (setDraft(next), setSaved(false));
-  // A field's message goes once it is retyped; the save checks everything again.
-  const clearError = (key: string) => errors[key] && setErrors(({ [key]: _gone, ...rest }) => rest);
-  const onSave = () => {
-    if (!draft) return;
-    const built = bodyOf(draft);
-    setSaved(false);
-    if (!built.ok) return setErrors(built.errors);
-    setErrors({});
-    save.mutate(built.body, { onSuccess: (data) => (setDraft(draftOf(data)), setSaved(true)) });
-  };
+  const form = useSettingsForm({ data: query.data, draftOf, bodyOf, save });
+  const { draft, edit, errors, saved, onSave, clearError } = form;
   const resetDefaults = () => query.data && draft && edit({ ...draftOf({ settings: query.data.defaults }), tiers: draft.tiers });
 
   const field = (f: ShopField, defaults: ShopSettings | undefined) =>
@@ -78,20 +59,16 @@ export function ShopSettingsPanel() {
 
   const defaults = query.data?.defaults;
   return (
-    <Screen
+    <SettingsPanelFrame
       title="Pricing and estimates"
       subtitle="The figures every priced option starts from."
-      actions={
-        <Button mode="contained" icon="content-save-outline" onPress={onSave} loading={save.isPending} disabled={!draft || save.isPending} contentStyle={styles.button} testID="save-shop-settings">
-          Save
-        </Button>
-      }
+      saveTestID="save-shop-settings"
+      loadingLabel="Loading the shop settings"
+      savedText="Saved. New options use these figures; options already saved keep theirs."
+      query={query}
+      save={save}
+      form={form}
     >
-      {query.isPending ? <ActivityIndicator accessibilityLabel="Loading the shop settings" /> : null}
-      {query.isError ? <MessageBanner tone="error">{errorText(query.error)}</MessageBanner> : null}
-      {save.isError ? <MessageBanner tone="error">{errorText(save.error)}</MessageBanner> : null}
-      {saved ? <MessageBanner tone="success">Saved. New options use these figures; options already saved keep theirs.</MessageBanner> : null}
-      {Object.keys(errors).length ? <MessageBanner tone="error">Some entries need fixing (marked below).</MessageBanner> : null}
       <Text variant="bodyMedium" testID="shop-settings-note">
         When an estimator saves a new option, it copies the labor rate, the markup or margin and the tax rate in from here (unless the estimator types its own); options already saved keep
         the figures they were priced with. The energy figures, rebate tiers and the repair-or-replace threshold are read each time options are shown.
@@ -132,10 +109,10 @@ export function ShopSettingsPanel() {
           </SectionCard>
           <SectionCard title="Rebate tiers" testID="rebate-tiers">
             <Text variant="bodySmall">
-              Each option shows which of these tiers it meets. Give each tier at least one minimum rating; take the figures from your program&apos;s own
-              rules.
+              Each option shows which of these tiers it meets, and every compatibility check flags a combination that falls short of them (the one list
+              of tiers: Admin → Rules uses it too). Give each tier at least one minimum rating; take the figures from your program&apos;s own rules.
             </Text>
-            {draft.tiers.length === 0 ? <Text variant="bodyMedium">No tiers: options will not show a rebate tier.</Text> : null}
+            {draft.tiers.length === 0 ? <Text variant="bodyMedium">No tiers: options and checks will not judge a rebate tier.</Text> : null}
             {draft.tiers.map((tier, i) => (
               <RebateTierRow
                 key={i}
@@ -171,7 +148,7 @@ export function ShopSettingsPanel() {
           {Object.keys(errors).length ? <MessageBanner tone="error">Some entries need fixing (marked above).</MessageBanner> : null}
         </>
       ) : null}
-    </Screen>
+    </SettingsPanelFrame>
   );
 }
 

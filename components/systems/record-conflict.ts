@@ -1,14 +1,10 @@
 import type { SystemPatch } from '@/shared/schemas/systems';
 import type { SystemRecord } from '@/hooks/use-systems';
+import type { ConflictRow } from '@/components/ui/conflict-row';
+import { whenText } from '@/components/jobs/job-words';
 import { CHECKLIST_STATE_WORDS, SERIAL_SLOTS } from './record-words';
 
-/** One field the tech changed that the server's newer revision holds differently. */
-export interface ConflictRow {
-  key: string;
-  label: string;
-  mine: string;
-  theirs: string;
-}
+export type { ConflictRow };
 
 const blank = (v: string | undefined) => (v && v.length ? v : '(empty)');
 
@@ -38,4 +34,9 @@ export function conflictRows(patch: SystemPatch, theirs: Pick<SystemRecord, 'ser
 /** The same edit re-based on the server's newer revision ("keep mine"). */
 export function rebase(patch: SystemPatch, theirs: Pick<SystemRecord, 'latestRevision'>): SystemPatch {
   return { ...patch, revision: theirs.latestRevision };
+}
+
+/** Who saved the newer revision and when, for the conflict dialog. */
+export function recordConflictIntro(theirs: Pick<SystemRecord, 'latestRevision' | 'savedAt' | 'savedBy'>): string {
+  return `Revision ${theirs.latestRevision} was saved ${whenText(theirs.savedAt)}${theirs.savedBy ? ` by ${theirs.savedBy.name}` : ''} while you edited. Nothing is lost: choose which to keep.`;
 }

@@ -14,13 +14,14 @@ import { FindingGroups } from '@/components/check/finding-groups';
 import { safetyPoints } from '@/components/check/safety-points';
 import { VerdictBanner } from '@/components/check/verdict-banner';
 import { readingsSafetyPoints } from '@/components/readings/readings-safety';
+import { ConflictDialog } from '@/components/ui/conflict-dialog';
 import { MessageBanner } from '@/components/ui/message-banner';
 import { SafetyNote } from '@/components/ui/safety-note';
 import { SectionCard } from '@/components/ui/section-card';
 import { whenText } from '@/components/jobs/job-words';
 import { ChecklistCard } from './checklist-card';
-import { ConflictDialog } from './conflict-dialog';
 import { HistoryCard } from './history-card';
+import { recordConflictIntro } from './record-conflict';
 import { PhotosCard } from './photos-card';
 import { RecordReadingsCard } from './record-readings-card';
 import { RECORD_STATUS_WORDS } from './record-words';
@@ -114,7 +115,17 @@ export function RecordScreen({ id }: { id: number }) {
   const report = <ReportCard record={record} viewingRevision={viewing} />;
   const history = <HistoryCard record={latest.data} viewing={viewing} onView={setViewing} />;
   const safety = <SafetyNote points={[...safetyPoints(record.check.findings, refrigerant), ...(refrigerant ? readingsSafetyPoints(refrigerant) : [])]} />;
-  const conflict = <ConflictDialog conflict={saver.conflict} onKeepMine={saver.keepMine} onTakeTheirs={saver.takeTheirs} />;
+  const conflict = (
+    <ConflictDialog
+      visible={saver.conflict !== null}
+      intro={saver.conflict ? recordConflictIntro(saver.conflict.theirs) : null}
+      rows={saver.conflict?.rows ?? []}
+      noClashText="Your change does not clash with theirs; keeping yours adds it on top."
+      testID="conflict"
+      onKeepMine={saver.keepMine}
+      onTakeTheirs={saver.takeTheirs}
+    />
+  );
 
   if (wide) {
     return (

@@ -2,9 +2,9 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
-import { ApiError } from '@/hooks/api-client';
 import { errorText } from '@/hooks/error-text';
 import { useJob } from '@/hooks/use-jobs';
+import { useSendEmail } from '@/hooks/use-send-email';
 import { useFinalizeSystem, useSendReport, type SystemRecord } from '@/hooks/use-systems';
 import { SendReportSchema } from '@/shared/schemas/systems';
 import { AppDialog } from '@/components/ui/app-dialog';
@@ -22,13 +22,14 @@ export function ReportCard({ record, viewingRevision }: { record: SystemRecord; 
   const [finalizing, setFinalizing] = useState(false);
   const [reason, setReason] = useState('');
   const [reasonError, setReasonError] = useState<string>();
-  const [sending, setSending] = useState(false);
-  const [to, setTo] = useState<string | null>(null);
-  const [toError, setToError] = useState<string>();
-  const [askAgain, setAskAgain] = useState<string | null>(null);
+  const email = useSendEmail({
+    send,
+    defaultAddress: job.data?.contactEmail ?? '',
+    schema: SendReportSchema,
+    bodyOf: (address, confirm) => ({ to: address, ...(confirm ? { confirm: true } : {}) }),
+  });
   const [pdfError, setPdfError] = useState<string | null>(null);
   const openCount = record.openChecklistItems.length;
-  const address = to ?? job.data?.contactEmail ?? '';
 
   const doFinalize = () => {
     if (openCount > 0 && !reason.trim()) {
@@ -39,24 +40,6 @@ export function ReportCard({ record, viewingRevision }: { record: SystemRecord; 
       { revision: record.latestRevision, ...(openCount > 0 ? { openItemsReason: reason.trim() } : {}) },
       { onSuccess: () => setFinalizing(false) },
     );
-  };
-  const doSend = (confirm: boolean) => {
-    const parsed = SendReportSchema.safeParse({ to: address, ...(confirm ? { confirm: true } : {}) });
-    if (!parsed.success) {
-      setToError(parsed.error.issues[0]?.message);
-      return;
-    }
-    setToError(undefined);
-    send.mutate(parsed.data, {
-      onSuccess: () => {
-        setSending(false);
-        setAskAgain(null);
-      },
-      onError: (err) => {
-        // The server asks before sending the same report twice within a minute.
-        if (err instanceof ApiError && err.code === 'recently-sent') setAskAgain(err.message);
-      },
-    });
   };
   const revision = viewingRevision ?? record.latestRevision;
   const openReport = () => {
@@ -88,7 +71,7 @@ export function ReportCard({ record, viewingRevision }: { record: SystemRecord; 
         <Button mode="outlined" icon="file-pdf-box" onPress={openReport} contentStyle={styles.button} testID="record-pdf">
           Open PDF
         </Button>
-        <Button mode="outlined" icon="email-outline" onPress={() => setSending(true)} contentStyle={styles.button} testID="record-send">
+        <Button mode="outlined" icon="email-outline" onPress={email.open} contentStyle={styles.button} testID="record-send">
           Send report
         </Button>
       </View>
@@ -123,22 +106,7 @@ export function ReportCard({ record, viewingRevision }: { record: SystemRecord; 
         {finalize.isError ? <MessageBanner tone="error">{errorText(finalize.error)}</MessageBanner> : null}
       </AppDialog>
 
-      <SendEmailDialog
-        visible={sending}
-        title="E-mail the report"
-        testIdPrefix="send"
-        address={address}
-        addressError={toError}
-        askAgain={askAgain}
-        pending={send.isPending}
-        error={send.isError ? send.error : null}
-        onAddressChange={(v) => {
-          setTo(v);
-          setAskAgain(null);
-        }}
-        onSend={doSend}
-        onDismiss={() => setSending(false)}
-      />
+      <SendEmailDialog title="E-mail the report" testIdPrefix="send" {...email.dialog} />
     </SectionCard>
   );
 }

@@ -2,7 +2,7 @@ import { compareSeason } from '../../shared/estimates/annual-energy';
 import { estimateExistingEfficiency } from '../../shared/estimates/existing-efficiency';
 import { formatDollars } from '../../shared/estimates/money';
 import { paybackText, simplePaybackYears } from '../../shared/estimates/payback';
-import type { EnergyComparison, EnergyQuery, ShopSettings } from '../../shared/schemas/options';
+import { NO_RATED_SEER2, type EnergyComparison, type EnergyLeg, type EnergyQuery, type ShopSettings } from '../../shared/schemas/options';
 
 /** Age assumed when neither the existing figures nor its age are given. */
 const DEFAULT_AGE_YEARS = 15;
@@ -37,17 +37,31 @@ export function energyComparison(
   }
   const existingSeer2 = query.existingSeer2 ?? estimate.seer2;
   const existingHspf2 = query.existingHspf2 ?? estimate.hspf2;
-  const zero = { existingKwh: 0, newKwh: 0, savingKwh: 0, existingCostCents: 0, newCostCents: 0, savingCents: 0 };
-  let cooling = zero;
+  let cooling: EnergyLeg | null = null;
   if (figures.seer2 !== undefined)
     cooling = compareSeason('cooling', figures.coolingBtuh, coolingHours, existingSeer2, figures.seer2, centsPerKwh);
-  else assumptions.push('The new SEER2 is not known: no cooling saving is counted.');
+  else assumptions.push(`The yearly cooling cost and the payback are not worked out: ${NO_RATED_SEER2}.`);
   let heating: EnergyComparison['heating'];
   if (heatPump && existingHeatPump) {
     if (figures.hspf2 !== undefined)
       heating = compareSeason('heating', figures.coolingBtuh, heatingHours, existingHspf2, figures.hspf2, centsPerKwh);
     else assumptions.push('The new HSPF2 is not known: no heating saving is counted.');
     assumptions.push('Heating load approximated by the rated cooling capacity (no heat-loss calculation; backup heat not counted).');
+  }
+  const existing = { seer2: existingSeer2, ...(existingHeatPump ? { hspf2: existingHspf2 } : {}), basis };
+  if (!cooling) {
+    // Without the cooling leg any saving (and so any payback) would be a guess: say why instead of a zero.
+    const paybackWords = `Payback not worked out: ${NO_RATED_SEER2}.`;
+    return {
+      cooling: null,
+      ...(heating ? { heating } : {}),
+      annualSavingCents: null,
+      paybackYears: null,
+      paybackText: paybackWords,
+      notComputed: NO_RATED_SEER2,
+      existing,
+      assumptions,
+    };
   }
   const annualSavingCents = cooling.savingCents + (heating?.savingCents ?? 0);
   assumptions.push(`Annual saving ${formatDollars(annualSavingCents)}; simple payback = price ÷ annual saving, no discounting.`);
@@ -57,7 +71,7 @@ export function energyComparison(
     annualSavingCents,
     paybackYears: simplePaybackYears(priceCents, annualSavingCents),
     paybackText: paybackText(priceCents, annualSavingCents),
-    existing: { seer2: existingSeer2, ...(existingHeatPump ? { hspf2: existingHspf2 } : {}), basis },
+    existing,
     assumptions,
   };
 }

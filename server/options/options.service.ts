@@ -122,29 +122,37 @@ function mergeInput(row: JobOptionRow, patch: OptionPatch): unknown {
   return { ...merged, lines: nextLines };
 }
 
-function assertRevision(row: JobOptionRow, revision: number) {
-  if (row.revision !== revision) {
-    throw conflict(`This option was changed by someone else (now revision ${row.revision}): reload it and make your change again.`, {
-      revision: row.revision,
-    });
-  }
+/** The 409 for a save from a stale revision, carrying the option as it now stands (as a record's conflict does). */
+async function staleOption(ctx: AppContext, id: number): Promise<AppError> {
+  const current = await getOption(ctx, id);
+  return conflict(
+    `This option was changed by someone else (now revision ${current.revision}): review their version and choose which to keep.`,
+    {
+      revision: current.revision,
+      currentRevision: current.revision,
+      current,
+    },
+  );
 }
 
-/** PATCH /api/options/:id: a stale revision is a 409; lines keep their snapshot unless re-priced or replaced. */
+/** PATCH /api/options/:id: a stale revision is a 409 with the current option; lines keep their snapshot unless re-priced or replaced. */
 export async function patchOption(ctx: AppContext, id: number, patch: OptionPatch): Promise<OptionView> {
   const row = await requireOption(ctx, id);
-  assertRevision(row, patch.revision);
+  if (row.revision !== patch.revision) throw await staleOption(ctx, id);
   const parsed = OptionInputSchema.safeParse(mergeInput(row, patch));
   if (!parsed.success) throw validationError(parsed.error);
   const job = await requireJob(ctx, row.jobId);
   const { content, lines } = await pricedContent(ctx, job.state, parsed.data);
-  await withWriteLock(ctx, async (manager) => {
+  const saved = await withWriteLock(ctx, async (manager) => {
     const repo = manager.getRepository(JobOptionRow);
     const current = await repo.findOneBy({ id });
     if (!current) throw notFound('Option');
-    assertRevision(current, patch.revision);
+    // Someone saved in between: leave the lock first, then describe their version (a read outside this transaction).
+    if (current.revision !== patch.revision) return false;
     await repo.update({ id }, { name: content.name, content, lines, revision: current.revision + 1, updatedAt: nowIso() });
+    return true;
   });
+  if (!saved) throw await staleOption(ctx, id);
   return getOption(ctx, id);
 }
 

@@ -1,5 +1,5 @@
 import { formatDollars } from '../../shared/estimates/money';
-import type { EnergyQuery, OptionView } from '../../shared/schemas/options';
+import { NO_RATED_SEER2, type EnergyQuery, type OptionView } from '../../shared/schemas/options';
 import type { AppContext } from '../context';
 import { requireJob } from '../jobs/jobs.service';
 import { AppError } from '../lib/errors';
@@ -55,13 +55,15 @@ export async function renderProposal(ctx: AppContext, jobId: number, options: { 
     ),
     row('Energy cost a year (now → new)', (o) => {
       const e = o.energy;
+      if (!e.cooling) return `Not worked out: ${e.notComputed ?? NO_RATED_SEER2}`;
       const now = e.cooling.existingCostCents + (e.heating?.existingCostCents ?? 0);
       const next = e.cooling.newCostCents + (e.heating?.newCostCents ?? 0);
       return `${formatDollars(now)} → ${formatDollars(next)}`;
     }),
-    row(
-      'Saving a year / simple payback',
-      (o) => `${formatDollars(o.energy.annualSavingCents)} / ${o.energy.paybackYears === null ? 'none' : `${o.energy.paybackYears} years`}`,
+    row('Saving a year / simple payback', (o) =>
+      o.energy.annualSavingCents === null
+        ? 'Not worked out'
+        : `${formatDollars(o.energy.annualSavingCents)} / ${o.energy.paybackYears === null ? 'none' : `${o.energy.paybackYears} years`}`,
     ),
   ]);
 

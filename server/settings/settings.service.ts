@@ -1,16 +1,17 @@
-import type { DataSource } from 'typeorm';
 import { DEFAULT_RULE_SETTINGS, resolveSettings } from '../../shared/rules/settings';
-import type { RuleContext, TransitionRule } from '../../shared/rules/types';
+import type { RebateTierThresholds, RuleContext, RuleSettings, TransitionRule } from '../../shared/rules/types';
+import type { ShopRebateTier } from '../../shared/schemas/options';
 import type { RulesSettingsBody, RulesSettingsResponse } from '../../shared/schemas/settings';
 import type { AppContext } from '../context';
 import { withWriteLock } from '../db/write-transaction';
+import { getShopSettings } from '../options/shop-settings.service';
 import { RuleSettingsRow } from './rule-settings.entity';
+import { rulesSettingsCache } from './rules-settings-cache';
 import { TransitionRuleRow } from './transition-rule.entity';
 
 const SETTINGS_ROW_ID = 1;
 
-// Every check needs the settings: keep them in memory per database, dropped when an admin saves.
-const cache = new WeakMap<DataSource, Promise<RulesSettingsResponse>>();
+const cache = rulesSettingsCache;
 
 /** The rule settings and transition rules checks run with (cached until the next save). */
 export function getRulesSettings(ctx: AppContext): Promise<RulesSettingsResponse> {
@@ -46,11 +47,19 @@ export async function saveRulesSettings(ctx: AppContext, body: RulesSettingsBody
   return getRulesSettings(ctx);
 }
 
+/** The shop's rebate tiers as the engine takes them (thresholds only; the shop's notes stay on Admin → Pricing). */
+function engineTiers(tiers: ShopRebateTier[]): RebateTierThresholds[] {
+  return tiers.map(({ name, seer2, eer2, hspf2 }) => stripUndefined({ name, seer2, eer2, hspf2 }));
+}
+
 async function readRulesSettings(ctx: AppContext): Promise<RulesSettingsResponse> {
   const row = await ctx.dataSource.getRepository(RuleSettingsRow).findOneBy({ id: SETTINGS_ROW_ID });
   const rules = await ctx.dataSource.getRepository(TransitionRuleRow).find({ order: { position: 'ASC' } });
+  const shop = await getShopSettings(ctx);
+  // A single tier stored before the shop list became the one source is moved by migration 1765430000000; never read it here.
+  const { rebateTier: _legacy, rebateTiers: _stored, ...stored } = (row?.settings ?? {}) as RuleSettings & { rebateTier?: unknown };
   return {
-    settings: resolveSettings(row?.settings),
+    settings: { ...resolveSettings(stored), rebateTiers: engineTiers(shop.settings.rebateTiers) },
     transitionRules: rules.map(fromRow),
     defaults: DEFAULT_RULE_SETTINGS,
     updatedAt: row?.updatedAt ?? null,

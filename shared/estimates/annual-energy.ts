@@ -2,16 +2,10 @@
 // kWh/yr = capacity (Btu/h) × full-load hours / (rating × 1000) — the same method ENERGY STAR's savings
 // calculators use. Heating load is approximated by the heat pump's rated cooling capacity (an assumption, said so).
 import { annualCoolingKwh } from '../efficiency/energy';
+import type { EnergyLeg } from '../schemas/options';
 import { roundCents } from './money';
 
-export interface EnergyLeg {
-  existingKwh: number;
-  newKwh: number;
-  savingKwh: number;
-  existingCostCents: number;
-  newCostCents: number;
-  savingCents: number;
-}
+export type { EnergyLeg };
 
 /** Annual heating energy in kWh from capacity (Btu/h), full-load heating hours (h/yr) and HSPF2 (Btu/Wh). */
 export function annualHeatingKwh(capacityBtuh: number, fullLoadHours: number, hspf2: number): number {

@@ -1,39 +1,20 @@
 // Pricing an option: cost of the lines and labor, a markup or a target margin, then sales tax on the
 // taxable (equipment and material) lines only. Markup vs margin: sell = cost × (1 + m) vs cost / (1 − g)
 // (the textbook definitions of markup on cost and gross margin on price; common practice (no source)).
+import type { OptionLine, OptionPrice } from '../schemas/options';
 import { roundCents } from './money';
 
-export interface PriceLine {
-  quantity: number;
-  unitPriceCents: number;
-  taxable: boolean;
-}
+/** What pricing reads of a line: the option line's own fields. */
+export type PriceLine = Pick<OptionLine, 'quantity' | 'unitPriceCents' | 'taxable'>;
 
-export interface PriceTerms {
+/** The option's terms: labor, and the pricing, percent and tax rate the option view reports. */
+export type PriceTerms = Pick<OptionPrice, 'pricing' | 'pct' | 'taxRatePct'> & {
   laborHours: number;
   laborRateCents: number;
-  pricing: 'markup' | 'margin';
-  /** Markup on cost, or target gross margin on the selling price, in percent. */
-  pct: number;
-  taxRatePct: number;
-}
+};
 
-export interface PriceBreakdown {
-  materialCostCents: number;
-  laborCostCents: number;
-  costCents: number;
-  pricing: 'markup' | 'margin';
-  pct: number;
-  materialSellCents: number;
-  laborSellCents: number;
-  subtotalCents: number;
-  taxableSellCents: number;
-  taxRatePct: number;
-  taxCents: number;
-  totalCents: number;
-  grossMarginPct: number;
-  notes: string[];
-}
+/** The breakdown is the option view's `price` itself (shared/schemas/options.ts), so the two never drift. */
+export type PriceBreakdown = OptionPrice;
 
 /** A line's amount in cents: quantity × unit price (cents), rounded half up to the cent. */
 export function lineExtendedCents(quantity: number, unitPriceCents: number): number {

@@ -15,7 +15,8 @@ export interface OptionSaving {
   optionId: number;
   name: string;
   totalCents: number;
-  annualSavingCents: number;
+  /** null when the option's saving is not worked out (no rated SEER2). */
+  annualSavingCents: number | null;
   paybackYears: number | null;
   compatible: boolean;
 }
@@ -51,9 +52,11 @@ export function adviseRepairOrReplace(facts: RepairOrReplaceFacts, options: Opti
     .sort((a, b) => (a.paybackYears ?? Infinity) - (b.paybackYears ?? Infinity))[0];
   for (const o of options) {
     arithmetic.push(
-      o.paybackYears === null
-        ? `${o.name}: ${formatDollars(o.totalCents)}, no energy saving over the existing system.`
-        : `${o.name}: ${formatDollars(o.totalCents)} ÷ ${formatDollars(o.annualSavingCents)} a year saved = ${o.paybackYears} years payback.`,
+      o.annualSavingCents === null
+        ? `${o.name}: ${formatDollars(o.totalCents)}, saving not worked out (no rated SEER2 for this combination).`
+        : o.paybackYears === null
+          ? `${o.name}: ${formatDollars(o.totalCents)}, no energy saving over the existing system.`
+          : `${o.name}: ${formatDollars(o.totalCents)} ÷ ${formatDollars(o.annualSavingCents)} a year saved = ${o.paybackYears} years payback.`,
     );
   }
   let recommendation: RepairOrReplaceAdvice['recommendation'];

@@ -19,7 +19,7 @@ export const DEFAULT_RULE_SETTINGS: RuleSettings = {
   defaultMaxLineLengthFt: 50,
   defaultMaxLiftFt: 20,
   defaultStandardLineLengthFt: undefined,
-  rebateTier: undefined,
+  rebateTiers: [],
   superheatToleranceF: 5,
   subcoolingToleranceF: 3,
   evacuationTargetMicrons: 500,

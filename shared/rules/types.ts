@@ -53,6 +53,14 @@ export interface Pairing {
   ratedCombinations?: RatedCombinationSpec[];
 }
 
+/** A rebate tier's minimum ratings (at least one given). */
+export interface RebateTierThresholds {
+  name: string;
+  seer2?: number;
+  eer2?: number;
+  hspf2?: number;
+}
+
 /** Shop-tunable thresholds (defaults in settings.ts, admin overrides stored by the server). */
 export interface RuleSettings {
   cfmPerTonMin: number;
@@ -63,8 +71,11 @@ export interface RuleSettings {
   defaultMaxLiftFt: number;
   /** Line length beyond which long-line practice applies when the unit gives none (optional for stored settings). */
   defaultStandardLineLengthFt?: number;
-  /** The rebate tier the shop works with; undefined thresholds are not checked. */
-  rebateTier?: { name: string; seer2?: number; eer2?: number; hspf2?: number };
+  /**
+   * The shop's rebate tiers: the one list kept with the shop settings (Admin → Pricing), merged in by the
+   * server. Undefined thresholds are not checked; none configured, no finding.
+   */
+  rebateTiers?: RebateTierThresholds[];
   // Start-up readings (shared/commissioning); optional so settings stored before them still load.
   /** ± band in °F around the fixed-orifice target superheat that counts as on target. */
   superheatToleranceF?: number;

@@ -199,21 +199,30 @@ export interface OptionPrice {
   notes: string[];
 }
 
+/** One season's kWh per year and cost per year in cents, existing system vs this option. */
+export interface EnergyLeg {
+  existingKwh: number;
+  newKwh: number;
+  savingKwh: number;
+  existingCostCents: number;
+  newCostCents: number;
+  savingCents: number;
+}
+
+/** Why the cooling cost and payback are left out when the option has no SEER2 to divide by. */
+export const NO_RATED_SEER2 = 'no rated SEER2 for this combination';
+
 export interface EnergyComparison {
-  /** kWh per year and cost per year in cents, existing system vs this option. */
-  cooling: { existingKwh: number; newKwh: number; savingKwh: number; existingCostCents: number; newCostCents: number; savingCents: number };
-  heating?: {
-    existingKwh: number;
-    newKwh: number;
-    savingKwh: number;
-    existingCostCents: number;
-    newCostCents: number;
-    savingCents: number;
-  };
-  annualSavingCents: number;
-  /** Customer price / annual saving, one decimal; null when nothing is saved. */
+  /** Cooling, existing vs this option; null (never zeros) when the combination has no rated SEER2. */
+  cooling: EnergyLeg | null;
+  heating?: EnergyLeg;
+  /** null when the cooling figure is not worked out. */
+  annualSavingCents: number | null;
+  /** Customer price / annual saving, one decimal; null when nothing is saved or the saving is not worked out. */
   paybackYears: number | null;
   paybackText: string;
+  /** Present when a figure is left out, saying why (NO_RATED_SEER2). */
+  notComputed?: string;
   existing: { seer2: number; hspf2?: number; basis: 'given' | 'estimated-from-age' | 'assumed-default' };
   /** Every assumption in words (hours, kWh price, capacity, existing efficiency). */
   assumptions: string[];
@@ -308,7 +317,8 @@ export interface RepairOrReplaceResult {
     optionId: number;
     name: string;
     totalCents: number;
-    annualSavingCents: number;
+    /** null when not worked out (no rated SEER2 for this combination). */
+    annualSavingCents: number | null;
     paybackYears: number | null;
     verdict: Verdict;
   }[];

@@ -5,21 +5,11 @@ import { isoDate, refrigerant } from './fields';
 /**
  * Shop rule settings and refrigerant transition rules as an admin edits them
  * (GET/PUT /api/settings/rules). The same schema validates the server's PUT and the admin form.
+ * Rebate tiers are not among them: the one list is the shop settings' (PUT /api/settings/shop); GET
+ * /api/settings/rules carries it in `settings.rebateTiers` so checks on the phone use it too.
  */
 
 const optionalNumber = (min: number, max: number) => z.number().min(min).max(max).optional();
-
-export const RebateTierSchema = z
-  .object({
-    name: z.string().trim().min(1).max(80),
-    seer2: optionalNumber(8, 40),
-    eer2: optionalNumber(5, 25),
-    hspf2: optionalNumber(4, 15),
-  })
-  .refine((t) => t.seer2 !== undefined || t.eer2 !== undefined || t.hspf2 !== undefined, {
-    error: 'a rebate tier needs at least one of seer2, eer2, hspf2',
-    path: ['seer2'],
-  });
 
 export const RuleSettingsSchema = z
   .object({
@@ -35,7 +25,6 @@ export const RuleSettingsSchema = z
     decayLimitMicrons: z.number().int().min(50).max(5000).optional(),
     decayHoldMinutes: z.number().int().min(1).max(120).optional(),
     defaultStandardLineLengthFt: z.number().min(5).max(500).optional(),
-    rebateTier: RebateTierSchema.optional(),
   })
   .refine((s) => s.cfmPerTonMax > s.cfmPerTonMin, { error: 'cfmPerTonMax must be above cfmPerTonMin', path: ['cfmPerTonMax'] })
   .refine((s) => s.decayLimitMicrons === undefined || s.evacuationTargetMicrons === undefined || s.decayLimitMicrons > s.evacuationTargetMicrons, {

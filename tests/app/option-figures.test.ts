@@ -50,9 +50,22 @@ describe('option figures', () => {
 });
 
 describe('an option with no rated SEER2', () => {
-  it('when the efficiency has no SEER2, then its yearly cost is not worked out rather than $0', () => {
-    const unrated = { ...option('U', 'C-9', 1, [50_000, 0]), efficiency: { source: 'outdoor-unit', sourceText: '', coolingBtuh: 36_000 } } as unknown as OptionView;
+  it('when the server leaves the cooling figure out, then the cost is null and every energy row gives its reason rather than $0', () => {
+    const unrated = {
+      ...option('U', 'C-9', 1, [50_000, 0]),
+      efficiency: { source: 'outdoor-unit', sourceText: '', coolingBtuh: 36_000 },
+      energy: { cooling: null, annualSavingCents: null, paybackYears: null, paybackText: 'Payback not worked out', notComputed: 'no rated SEER2 for this combination' },
+    } as unknown as OptionView;
     expect(annualCostCents(unrated)).toBeNull();
-    expect(optionFigureRows([unrated]).find((r) => r.key === 'payback')?.values[0]).toMatch(/Not worked out/);
+    const rows = optionFigureRows([unrated]);
+    for (const key of ['cooling', 'saving', 'payback'])
+      expect(rows.find((r) => r.key === key)?.values[0]).toBe('Not worked out: no rated SEER2 for this combination');
+  });
+
+  it('when the first option is unrated, then the existing system cost comes from the next option that has a cooling comparison', () => {
+    const unrated = { ...option('U', 'C-9', 1, [50_000, 0]), energy: { cooling: null, annualSavingCents: null } } as unknown as OptionView;
+    // 50,000 cents: the rated option's existing-system figure as given above (arithmetic).
+    expect(existingAnnualCostCents([unrated, option('R', 'C-1', 1, [50_000, 30_000])])).toBe(50_000);
+    expect(existingAnnualCostCents([unrated])).toBeNull();
   });
 });

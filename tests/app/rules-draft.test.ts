@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { bodyOf, defaultHint, draftOf } from '@/components/settings/rules-draft';
+import { bodyOf, defaultHint, draftOf, rebateTiersText } from '@/components/settings/rules-draft';
 import { DEFAULT_RULE_SETTINGS } from '@/shared/rules/settings';
 
 const response = (over: Partial<typeof DEFAULT_RULE_SETTINGS> = {}) => ({
@@ -36,5 +36,15 @@ describe('Admin → Rules draft', () => {
   it('when a setting has no default, then its hint says so instead of printing "undefined"', () => {
     expect(defaultHint(undefined)).not.toMatch(/undefined/);
     expect(defaultHint(50)).toBe('Default 50');
+  });
+});
+
+describe('Admin → Rules: rebate tiers', () => {
+  it('when the rule settings carry the shop tiers, then the form sends none back (the shop list is the one source) and says where they live', () => {
+    const data = { ...response(), settings: { ...DEFAULT_RULE_SETTINGS, rebateTiers: [{ name: 'Shop tier', seer2: 16 }] } };
+    const built = bodyOf(draftOf(data));
+    expect(built.ok && 'rebateTiers' in built.body.settings).toBe(false);
+    expect(rebateTiersText(1)).toContain('1 is set up');
+    expect(rebateTiersText(0)).toContain('none is set up yet');
   });
 });

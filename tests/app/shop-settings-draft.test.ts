@@ -97,11 +97,12 @@ describe('Admin → Pricing draft: rebate tiers', () => {
   });
 
   it('when a tier row is removed, then the body no longer carries it', () => {
-    const draft = draftFrom();
-    expect(draft.tiers).toHaveLength(DEFAULT_SHOP_SETTINGS.rebateTiers.length);
+    // Two invented tiers (no source; not any real program).
+    const draft = draftFrom({ rebateTiers: [{ name: 'Tier one', seer2: 15.2 }, { name: 'Tier two', seer2: 17, hspf2: 8.5 }] });
+    expect(draft.tiers).toHaveLength(2);
     draft.tiers = draft.tiers.slice(1);
     const result = bodyOf(draft);
-    expect(result.ok && result.body.rebateTiers.map((t) => t.name)).toEqual(DEFAULT_SHOP_SETTINGS.rebateTiers.slice(1).map((t) => t.name));
+    expect(result.ok && result.body.rebateTiers.map((t) => t.name)).toEqual(['Tier two']);
   });
 });
 

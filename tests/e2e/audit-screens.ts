@@ -222,7 +222,7 @@ export const AUDIT_SCREENS: AuditScreen[] = [
     open: async (page) => {
       await page.goto('/admin/pricing');
       await visible(page, 'save-shop-settings');
-      await visible(page, 'tier-row-0');
+      await visible(page, 'rebate-tiers');
     },
   },
   {

@@ -1,5 +1,6 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 import { Table } from 'typeorm';
+import { id } from './columns';
 import { portableTable } from './portable-table';
 
 /** Users and their roles (Foundation). Written with the Table API so it runs on SQLite and PostgreSQL. */
@@ -11,7 +12,7 @@ export class Users1764650000000 implements MigrationInterface {
       portableTable(queryRunner, new Table({
         name: 'users',
         columns: [
-          { name: 'id', type: 'integer', isPrimary: true, isGenerated: true, generationStrategy: 'increment' },
+          id,
           { name: 'email', type: 'varchar', length: '254', isUnique: true },
           { name: 'name', type: 'varchar', length: '120' },
           { name: 'role', type: 'varchar', length: '16' },

@@ -1,5 +1,6 @@
 import type { MigrationInterface, QueryRunner, TableColumnOptions } from 'typeorm';
 import { Table, TableIndex } from 'typeorm';
+import { id } from './columns';
 import { portableTable } from './portable-table';
 
 /**
@@ -7,7 +8,6 @@ import { portableTable } from './portable-table';
  * Table API only, so it runs on SQLite and PostgreSQL. Frozen: later changes get their own migration.
  */
 
-const id: TableColumnOptions = { name: 'id', type: 'integer', isPrimary: true, isGenerated: true, generationStrategy: 'increment' };
 const str = (name: string, length: number, nullable = true): TableColumnOptions => ({ name, type: 'varchar', length: String(length), isNullable: nullable });
 const num = (name: string, nullable = true): TableColumnOptions => ({ name, type: 'double precision', isNullable: nullable });
 const int = (name: string, nullable = true): TableColumnOptions => ({ name, type: 'integer', isNullable: nullable });

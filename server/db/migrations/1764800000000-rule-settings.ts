@@ -1,6 +1,7 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 import { Table } from 'typeorm';
 import { DEFAULT_TRANSITION_RULES } from '../../../shared/regulation/transition-rules';
+import { settingsRowColumns } from './columns';
 
 /**
  * Rule settings (one row of admin values) and the refrigerant transition rules as editable data,
@@ -13,12 +14,7 @@ export class RuleSettings1764800000000 implements MigrationInterface {
     await queryRunner.createTable(
       new Table({
         name: 'rule_settings',
-        columns: [
-          { name: 'id', type: 'integer', isPrimary: true },
-          { name: 'settings', type: 'text' },
-          { name: 'updatedAt', type: 'varchar', length: '30' },
-          { name: 'updatedBy', type: 'integer', isNullable: true },
-        ],
+        columns: settingsRowColumns(),
       }),
     );
     await queryRunner.createTable(

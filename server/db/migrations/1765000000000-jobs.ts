@@ -1,15 +1,6 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 import { Table, TableIndex } from 'typeorm';
-
-const id = { name: 'id', type: 'integer', isPrimary: true, isGenerated: true, generationStrategy: 'increment' as const };
-const at = (name: string, nullable = false) => ({ name, type: 'varchar', length: '30', isNullable: nullable });
-const ref = (name: string, nullable = false) => ({ name, type: 'integer', isNullable: nullable });
-const fk = (column: string, table: string, onDelete = 'RESTRICT') => ({
-  columnNames: [column],
-  referencedTableName: table,
-  referencedColumnNames: ['id'],
-  onDelete,
-});
+import { at, fk, id, ref } from './columns';
 
 /** Jobs with their change history, matched-system records and revisions, readings, attachments, sent e-mail. */
 export class Jobs1765000000000 implements MigrationInterface {

@@ -1,15 +1,6 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 import { Table, TableColumn, TableIndex } from 'typeorm';
-
-const id = { name: 'id', type: 'integer', isPrimary: true, isGenerated: true, generationStrategy: 'increment' as const };
-const at = (name: string, nullable = false) => ({ name, type: 'varchar', length: '30', isNullable: nullable });
-const ref = (name: string, nullable = false) => ({ name, type: 'integer', isNullable: nullable });
-const fk = (column: string, table: string, onDelete = 'RESTRICT') => ({
-  columnNames: [column],
-  referencedTableName: table,
-  referencedColumnNames: ['id'],
-  onDelete,
-});
+import { at, fk, id, ref, settingsRowColumns } from './columns';
 
 /** Priced options on a job (issue 11), the shop's pricing settings, and proposal e-mails in the outbox. */
 export class JobOptions1765200000000 implements MigrationInterface {
@@ -38,12 +29,7 @@ export class JobOptions1765200000000 implements MigrationInterface {
     await queryRunner.createTable(
       new Table({
         name: 'shop_settings',
-        columns: [
-          { name: 'id', type: 'integer', isPrimary: true },
-          { name: 'settings', type: 'text' },
-          at('updatedAt'),
-          ref('updatedBy', true),
-        ],
+        columns: settingsRowColumns(),
       }),
     );
     // A proposal e-mail belongs to a job, not a system record: systemId and revision become optional.

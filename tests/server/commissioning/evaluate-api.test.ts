@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { R410A_TXV_ON_TARGET } from '../../helpers/charge-readings';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 
 let t: TestApp;
@@ -15,17 +16,8 @@ const evaluate = (body: object, role: 'tech' | 'estimator' | 'admin' = 'tech') =
   request(t.app).post('/api/commissioning/evaluate').set(auth(role)).send(body);
 const paths = (res: request.Response) => (res.body.error.details as { path: string }[]).map((d) => d.path);
 
-// R-410A: dew 118.4 psig at 40 °F, bubble 318.5 psig at 100 °F — CoolProp 8.0.0, Lemmon 2003 EOS (values.json PT-02).
-const TXV_READINGS = {
-  refrigerant: 'R-410A',
-  meteringType: 'txv',
-  suctionPsig: 118.4,
-  suctionLineF: 50,
-  liquidPsig: 318.5,
-  liquidLineF: 90,
-  outdoorDbF: 95,
-  targetSubcoolingF: 10,
-};
+// Right on target (tests/helpers/charge-readings.ts: dew 40 °F at 118.4 psig, bubble 100 °F at 318.5 psig, values.json PT-02).
+const TXV_READINGS = { ...R410A_TXV_ON_TARGET, outdoorDbF: 95, targetSubcoolingF: 10 };
 
 describe('POST /api/commissioning/evaluate', () => {
   it('when a TXV system reads 10 °F subcooling against a 10 °F target, then the contract shape with on-target', async () => {

@@ -2,20 +2,14 @@ import { createHash } from 'node:crypto';
 import { readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { describe, expect, it } from 'vitest';
+import { useFixtureApp } from '../../helpers/fixture-app';
+import type { TestApp } from '../../helpers/test-app';
 import { jpegHead, tinyPng } from '../systems/images';
-import { authFor, buildFixture, recordBody, type Fixture } from '../systems/system-fixtures';
+import { authFor, recordBody, type Fixture } from '../systems/system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
-beforeAll(async () => {
-  t = await createTestApp();
-  f = await buildFixture(t);
-});
-afterAll(async () => {
-  await t.close();
-});
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 
 const auth = (role: 'tech' | 'estimator' | 'admin' = 'tech') => authFor(t, role);
 const upload = (data: Buffer, name: string, fields: Record<string, string> = {}) => {

@@ -1,11 +1,11 @@
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
-import { createServer, type AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { simpleParser } from 'mailparser';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startLocalMailService, type LocalMailService } from '../../../server/mail/local-mail-service';
+import { closedPort } from '../../helpers/closed-port';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 import { pdfText } from '../systems/pdf-text';
 import { authFor, buildFixture, recordBody, type Fixture } from '../systems/system-fixtures';
@@ -30,15 +30,6 @@ const auth = (role: 'tech' | 'estimator' | 'admin' = 'tech') => authFor(t, role)
 const newRecord = async (app = t, fx = f) =>
   (await request(app.app).post(`/api/jobs/${fx.jobId}/systems`).set(authFor(app)).send(recordBody(fx)).expect(201)).body;
 const messages = () => readdirSync(mail.dir).filter((n) => n.endsWith('.eml'));
-
-/** A loopback port with nothing listening on it. */
-async function closedPort(): Promise<number> {
-  const server = createServer();
-  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
-  const { port } = server.address() as AddressInfo;
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  return port;
-}
 
 describe('POST /api/systems/:id/send', () => {
   it('when a tech sends the report, then the local mail service keeps the message with the PDF attached and the outbox lists it', async () => {

@@ -1,18 +1,25 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { DEFAULT_SHOP_SETTINGS } from '../../../shared/estimates/shop-defaults';
 import type { OptionView } from '../../../shared/schemas/options';
 import { uploadImport } from '../../../server/imports/imports.service';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
-import { authFor, buildFixture, type Fixture } from '../systems/system-fixtures';
+import { useFixtureApp } from '../../helpers/fixture-app';
+import type { TestApp } from '../../helpers/test-app';
+import { authFor, type Fixture } from '../systems/system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 beforeAll(async () => {
-  t = await createTestApp();
-  f = await buildFixture(t);
-});
-afterAll(async () => {
-  await t.close();
+  // Two invented tiers (not any real program): the shop's list, which the options judge each option against.
+  const rebateTiers = [
+    { name: 'Demo tier 1 (invented)', seer2: 15.2, eer2: 11 },
+    { name: 'Demo tier 2 (invented)', seer2: 17, hspf2: 8.5 },
+  ];
+  await request(t.app)
+    .put('/api/settings/shop')
+    .set(authFor(t, 'admin'))
+    .send({ ...DEFAULT_SHOP_SETTINGS, rebateTiers })
+    .expect(200);
 });
 
 const est = () => authFor(t, 'estimator');
@@ -114,7 +121,7 @@ describe('options: contract, price and figures', () => {
     expect(o.efficiency).toMatchObject({ source: 'rated-combination', seer2: 15.2, eer2: 11.7, hspf2: 7.8, coolingBtuh: 35000 });
     // GA is in the Southeast; split heat pumps: 14.3 SEER2 / 7.5 HSPF2 (10 CFR 430.32(c)).
     expect(o.regional).toMatchObject({ state: 'GA', meets: true, minimum: { seer2: 14.3, hspf2: 7.5 } });
-    // Default (invented demo) tiers: tier 1 needs 15.2 SEER2 / 11 EER2 → met; tier 2 needs 17 SEER2 / 8.5 HSPF2 → not met.
+    // The shop's tiers (set in beforeAll, invented): tier 1 needs 15.2 SEER2 / 11 EER2 → met; tier 2 needs 17 SEER2 / 8.5 HSPF2 → not met.
     expect(o.rebateTiers.map((r) => r.met)).toEqual([true, false]);
     expect(o.rebateTiers[1].missing[0]).toContain('SEER2 17 needed, has 15.2');
   });

@@ -1,11 +1,11 @@
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
-import { createServer, type AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { simpleParser } from 'mailparser';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startLocalMailService, type LocalMailService } from '../../../server/mail/local-mail-service';
+import { closedPort } from '../../helpers/closed-port';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 import { pdfText } from '../systems/pdf-text';
 import { authFor, buildFixture, type Fixture } from '../systems/system-fixtures';
@@ -131,15 +131,6 @@ describe('proposal', () => {
     expect(messages().length).toBe(before);
   });
 });
-
-/** A loopback port with nothing listening on it. */
-async function closedPort(): Promise<number> {
-  const server = createServer();
-  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
-  const { port } = server.address() as AddressInfo;
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  return port;
-}
 
 describe('proposal: a mail failure', () => {
   it('when the mail server can not be reached, then 502, the outbox records a failed attempt and no option changes', async () => {

@@ -1,34 +1,18 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
-import { authFor, buildFixture, recordBody, type Fixture } from './system-fixtures';
+import { describe, expect, it } from 'vitest';
+import { R410A_TXV_ON_TARGET } from '../../helpers/charge-readings';
+import { useFixtureApp } from '../../helpers/fixture-app';
+import type { TestApp } from '../../helpers/test-app';
+import { authFor, recordBody, type Fixture } from './system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
-beforeAll(async () => {
-  t = await createTestApp();
-  f = await buildFixture(t);
-});
-afterAll(async () => {
-  await t.close();
-});
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 
 const auth = (role: 'tech' | 'admin' = 'tech') => authFor(t, role);
 const newRecord = async () => (await request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send(recordBody(f)).expect(201)).body;
 
-// R-410A: dew point 40 °F at 118.4 psig, bubble point 100 °F at 318.5 psig (values.json PT-02, CoolProp 8.0.0),
-// so 50 °F on the suction line is 10 °F superheat and 90 °F on the liquid line is 10 °F subcooling (±1 °F, PT-02 tolerance).
-const charge = {
-  refrigerant: 'R-410A',
-  meteringType: 'txv',
-  suctionPsig: 118.4,
-  suctionLineF: 50,
-  liquidPsig: 318.5,
-  liquidLineF: 90,
-  indoorWbF: 63,
-  indoorDbF: 75,
-  outdoorDbF: 88,
-};
+// Right on target (tests/helpers/charge-readings.ts: 10 °F superheat, 10 °F subcooling), with indoor and outdoor conditions.
+const charge = { ...R410A_TXV_ON_TARGET, indoorWbF: 63, indoorDbF: 75, outdoorDbF: 88 };
 
 describe('POST /api/systems/:id/readings', () => {
   it('when charge readings are posted, then superheat and subcooling are computed and stored with who, when and the conditions', async () => {

@@ -2,6 +2,7 @@ import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { R410A_TXV_ON_TARGET } from '../../helpers/charge-readings';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 import { tinyPng } from './images';
 import { pdfText } from './pdf-text';
@@ -33,17 +34,8 @@ const getPdf = (url: string) =>
 // Optional: keep the rendered PDFs to look at them with pdftoppm (REPORT_OUT=/some/dir).
 const keep = (name: string, pdf: Buffer) => process.env.REPORT_OUT && writeFileSync(path.join(process.env.REPORT_OUT, name), pdf);
 
-// R-410A dew point 40 °F at 118.4 psig, bubble point 100 °F at 318.5 psig (values.json PT-02): 10 °F superheat, 10 °F subcooling.
-const charge = {
-  refrigerant: 'R-410A',
-  meteringType: 'txv',
-  suctionPsig: 118.4,
-  suctionLineF: 50,
-  liquidPsig: 318.5,
-  liquidLineF: 90,
-  indoorWbF: 63,
-  outdoorDbF: 88,
-};
+// Right on target (tests/helpers/charge-readings.ts): 10 °F superheat, 10 °F subcooling.
+const charge = { ...R410A_TXV_ON_TARGET, indoorWbF: 63, outdoorDbF: 88 };
 
 describe('GET /api/systems/:id/report.pdf', () => {
   it('when a full record is reported, then the PDF parses and states the shop, models, serials, superheat, checklist and the safety note on one page', async () => {

@@ -1,17 +1,11 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
-import { authFor, buildFixture, recordBody, type Fixture } from './system-fixtures';
+import { describe, expect, it } from 'vitest';
+import { useFixtureApp } from '../../helpers/fixture-app';
+import type { TestApp } from '../../helpers/test-app';
+import { authFor, recordBody, type Fixture } from './system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
-beforeAll(async () => {
-  t = await createTestApp();
-  f = await buildFixture(t);
-});
-afterAll(async () => {
-  await t.close();
-});
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 
 const auth = () => authFor(t, 'tech');
 const create = async () => (await request(t.app).post(`/api/jobs/${f.jobId}/systems`).set(auth()).send(recordBody(f)).expect(201)).body as { id: number };

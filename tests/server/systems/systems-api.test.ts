@@ -1,18 +1,12 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Finding } from '../../../shared/rules/types';
+import { useFixtureApp } from '../../helpers/fixture-app';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 import { authFor, buildFixture, recordBody, type Fixture } from './system-fixtures';
 
-let t: TestApp;
-let f: Fixture;
-beforeAll(async () => {
-  t = await createTestApp();
-  f = await buildFixture(t);
-});
-afterAll(async () => {
-  await t.close();
-});
+let t: TestApp, f: Fixture;
+useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
 
 const auth = (role: 'tech' | 'estimator' | 'admin' = 'tech') => authFor(t, role);
 const create = (over: object = {}, role: 'tech' | 'estimator' | 'admin' = 'tech') =>

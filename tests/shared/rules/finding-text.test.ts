@@ -8,6 +8,7 @@ import { articleFor } from '../../../shared/rules/text';
 import type { Finding, Pairing, RuleContext, Severity } from '../../../shared/rules/types';
 import { awg, edit } from './worked-case-builder';
 import { REGRESSION_PAIRINGS } from './regression-pairings';
+import { heatKitAirHandler, ownCoilAirHandler } from '../../helpers/pairing-edits';
 
 /**
  * Every finding is titled by what is wrong, in plain words with its key numbers (Issue 7): one case
@@ -35,10 +36,7 @@ const heatPump = (p: Pairing) => {
   p.controls = { thermostatHeatPump: true, auxHeatStages: 1 };
 };
 /** An air handler with its own coil (no separate coil part), kept from the old system. */
-const ownCoilAirHandler = (p: Pairing, refrigerants: Pairing['outdoor']['spec']['refrigerant'][]) => {
-  p.indoorCoil = undefined;
-  p.airHandler = { kept: true, spec: { model: 'HW-AH36', kind: 'air-handler', minTons: 2, maxTons: 3.5, airflowCfm: 1200, refrigerants } };
-};
+const keptOwnCoilAirHandler = (p: Pairing, refrigerants: Pairing['outdoor']['spec']['refrigerant'][]) => ownCoilAirHandler(p, { refrigerants }, true);
 
 const CASES: TextCase[] = [
   {
@@ -66,7 +64,7 @@ const CASES: TextCase[] = [
     // The air handler's listing finding is titled as the air handler's, not the coil's (Issue 7)
     ruleId: 'refrigerant.coil-listing',
     severity: 'blocker',
-    pairing: () => edit((p) => ownCoilAirHandler(p, ['R-22', 'R-410A'])),
+    pairing: () => edit((p) => keptOwnCoilAirHandler(p, ['R-22', 'R-410A'])),
     title: 'Air handler is listed for R-22 or R-410A, not R-454B',
     detail: ['The air handler HW-AH36 is listed for R-22 and R-410A'],
   },
@@ -132,7 +130,7 @@ const CASES: TextCase[] = [
     pairing: () =>
       edit((p) => {
         r410a(p);
-        ownCoilAirHandler(p, ['R-22']);
+        keptOwnCoilAirHandler(p, ['R-22']);
         Object.assign(p.lineSet!, { reused: true, previousRefrigerant: 'R-22', burnoutHistory: false });
       }),
     title: 'Kept line set and air handler hold mineral oil from R-22',
@@ -299,7 +297,7 @@ const CASES: TextCase[] = [
     pairing: () =>
       edit((p) => {
         heatPump(p);
-        ownCoilAirHandler(p, ['R-454B']);
+        keptOwnCoilAirHandler(p, ['R-454B']);
         p.airHandler!.spec.heatKitKw = 10;
         p.controls = { thermostatHeatPump: true, auxHeatStages: 0 };
       }),
@@ -499,15 +497,7 @@ const CASES: TextCase[] = [
     severity: 'blocker',
     pairing: () =>
       edit((p) => {
-        ownCoilAirHandler(p, ['R-454B']);
-        Object.assign(p.airHandler!.spec, {
-          a2lListed: true,
-          leakSensor: true,
-          heatKitKw: 10,
-          mcaAmps: 40,
-          mocpAmps: 45,
-          voltage: '208/230',
-        });
+        heatKitAirHandler(p, {}, true);
         p.indoorElectrical = { breakerAmps: 50, wireAwg: awg(6), wireMaterial: 'copper' };
       }),
     title: 'Air handler breaker 50 A is above its 45 A maximum',
@@ -519,15 +509,7 @@ const CASES: TextCase[] = [
     severity: 'info',
     pairing: () =>
       edit((p) => {
-        ownCoilAirHandler(p, ['R-454B']);
-        Object.assign(p.airHandler!.spec, {
-          a2lListed: true,
-          leakSensor: true,
-          heatKitKw: 10,
-          mcaAmps: 40,
-          mocpAmps: 45,
-          voltage: '208/230',
-        });
+        heatKitAirHandler(p, {}, true);
         p.indoorElectrical = { breakerAmps: 45, wireAwg: awg(6), wireMaterial: 'copper', supplyVoltage: 230 };
       }),
     title: 'The 10 kW heat kit gives about 9.18 kW at 230 V',
@@ -549,7 +531,7 @@ const CASES: TextCase[] = [
     ruleId: 'efficiency.rebate-tier',
     severity: 'caution',
     pairing: () => edit(() => {}),
-    context: { ...DEFAULT_CONTEXT, settings: { ...DEFAULT_CONTEXT.settings, rebateTier: { name: 'Tier 2', seer2: 16 } } },
+    context: { ...DEFAULT_CONTEXT, settings: { ...DEFAULT_CONTEXT.settings, rebateTiers: [{ name: 'Tier 2', seer2: 16 }] } },
     title: 'Short of the Tier 2 rebate tier: SEER2 15.2 is below 16',
     detail: ['SEER2 15.2 is below 16'],
   },

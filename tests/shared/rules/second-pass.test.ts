@@ -11,6 +11,7 @@ import { a2lListing } from '../../../shared/rules/refrigerant/a2l-listing';
 import { oilCompatibility } from '../../../shared/rules/refrigerant/oil-compatibility';
 import type { Finding, Pairing, Rule } from '../../../shared/rules/types';
 import { awg, edit } from './worked-case-builder';
+import { heatKitAirHandler, ownCoilAirHandler } from '../../helpers/pairing-edits';
 
 /**
  * Issue 12 corrections 2–8, each as a case table at its edges and a worked pairing argued as a
@@ -24,11 +25,6 @@ const r410a = (p: Pairing) => {
   p.scope = 'component-replacement';
   Object.assign(p.outdoor.spec, { refrigerant: 'R-410A' });
   Object.assign(p.indoorCoil!.spec, { refrigerants: ['R-410A'], meteringRefrigerant: 'R-410A', a2lListed: false });
-};
-/** An air handler with its own coil standing in for the coil part. */
-const ownCoilAirHandler = (p: Pairing, spec: Partial<NonNullable<Pairing['airHandler']>['spec']> = {}, kept = false) => {
-  p.indoorCoil = undefined;
-  p.airHandler = { kept, spec: { model: 'HW-AH36', kind: 'air-handler', minTons: 2, maxTons: 3.5, airflowCfm: 1200, ...spec } };
 };
 
 describe('correction 2: oil compatibility only for parts that carried refrigerant', () => {
@@ -284,16 +280,7 @@ describe('correction 6: charge adjustment per DESIGN §4 with differing liquid s
 describe('correction 7: heat-kit output from the kit rated voltage', () => {
   const kit = (supplyVoltage: number, heatKitRatedVoltage?: number) =>
     edit((p) => {
-      ownCoilAirHandler(p, {
-        refrigerants: ['R-454B'],
-        a2lListed: true,
-        leakSensor: true,
-        heatKitKw: 10,
-        heatKitRatedVoltage,
-        mcaAmps: 40,
-        mocpAmps: 45,
-        voltage: '208/230',
-      });
+      heatKitAirHandler(p, { heatKitRatedVoltage });
       p.indoorElectrical = { breakerAmps: 45, wireAwg: awg(6), wireMaterial: 'copper', supplyVoltage };
     });
   const outputKw = (p: Pairing) => run(heatKitCircuit, p).find((f) => f.severity === 'info' && !isMissingFacts(f))!.values.outputKw;

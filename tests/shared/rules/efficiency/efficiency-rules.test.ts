@@ -60,19 +60,30 @@ describe('efficiency.regional-minimum', () => {
 });
 
 describe('efficiency.rebate-tier', () => {
+  // Invented shop thresholds (no source; not any real program).
   const tier = { name: 'Utility Tier A', seer2: 16, eer2: 12, hspf2: 8.1 };
+  const higher = { name: 'Utility Tier B', seer2: 18 };
   it.each([
-    ['no tier configured', undefined, { seer2: 10 }, []],
-    ['at the thresholds', tier, { seer2: 16, eer2: 12 }, []],
-    ['SEER2 short', tier, { seer2: 15.9, eer2: 12 }, ['caution']],
-    ['EER2 not given', tier, { seer2: 16 }, ['missing']],
-    ['heat pump short on HSPF2', tier, { systemType: 'heat-pump' as const, seer2: 17, eer2: 13, hspf2: 8 }, ['caution']],
-  ])('when %s, then %j', (_name, rebate, unit, expected) => {
-    expect(severities(rebateTier, pairing({ outdoor: unit }), context({ rebateTier: rebate }))).toEqual(expected);
+    ['no tier configured', [], { seer2: 10 }, []],
+    ['at the thresholds', [tier], { seer2: 16, eer2: 12 }, []],
+    ['SEER2 short', [tier], { seer2: 15.9, eer2: 12 }, ['caution']],
+    ['EER2 not given', [tier], { seer2: 16 }, ['missing']],
+    ['heat pump short on HSPF2', [tier], { systemType: 'heat-pump' as const, seer2: 17, eer2: 13, hspf2: 8 }, ['caution']],
+    ['short of both of two tiers', [tier, higher], { seer2: 15, eer2: 12 }, ['caution', 'caution']],
+    ['meeting the lower of two tiers', [tier, higher], { seer2: 17, eer2: 12 }, ['info']],
+    ['meeting both tiers', [tier, higher], { seer2: 18, eer2: 12 }, []],
+  ])('when %s, then %j', (_name, rebateTiers, unit, expected) => {
+    expect(severities(rebateTier, pairing({ outdoor: unit }), context({ rebateTiers }))).toEqual(expected);
+  });
+
+  it('when two tiers want a figure that is not rated, then one missing note names both', () => {
+    const findings = run(rebateTier, pairing({ outdoor: { seer2: 18 } }), context({ rebateTiers: [tier, { name: 'Utility Tier C', eer2: 13 }] }));
+    expect(findings).toHaveLength(1);
+    expect(findings[0].detail).toContain('Utility Tier A and Utility Tier C EER2 threshold not checked');
   });
 
   it('when it fires, then the detail names the tier and numbers', () => {
-    const [f] = run(rebateTier, pairing({ outdoor: { seer2: 15.9, eer2: 12 } }), context({ rebateTier: tier }));
+    const [f] = run(rebateTier, pairing({ outdoor: { seer2: 15.9, eer2: 12 } }), context({ rebateTiers: [tier] }));
     expect(f.detail).toContain('Utility Tier A');
     expect(f.detail).toContain('SEER2 15.9 is below 16');
   });
