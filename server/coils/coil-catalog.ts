@@ -14,8 +14,6 @@ export const IDENTITY_FIELDS: ReadonlySet<string> = new Set(['model', 'brand', '
  */
 export interface CoilCatalog {
   rows: IndoorCoil[];
-  /** Position of each row object. */
-  positionOf: Map<IndoorCoil, number>;
   /** Rank of each position in `localeCompare` order of the model (equal models share a rank). */
   modelRank: Int32Array;
   /** Positions listed for each refrigerant, catalog order. */
@@ -40,9 +38,6 @@ export function coilCatalog(index: KindIndex): CoilCatalog {
 
 function buildCoilCatalog(rows: IndoorCoil[]): CoilCatalog {
   const n = rows.length;
-  const positionOf = new Map<IndoorCoil, number>();
-  rows.forEach((row, i) => positionOf.set(row, i));
-
   // One collator sort per catalog version, so a search compares integers instead of strings.
   const collator = new Intl.Collator();
   const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => collator.compare(rows[a].model, rows[b].model));
@@ -63,27 +58,32 @@ function buildCoilCatalog(rows: IndoorCoil[]): CoilCatalog {
   });
   const byRefrigerant = new Map([...lists].map(([r, list]) => [r, Int32Array.from(list)]));
 
-  const specs: (IndoorCoilSpec | undefined)[] = new Array(n);
-  const priceKeys: (string | undefined)[] = new Array(n);
-  const groups = new Int32Array(n).fill(-1);
+  // Specs and groups up front: every search after an import needs them, and each costs a few microseconds.
+  const specs = rows.map((row) => toSpec('indoor-coils', row));
   const groupIds = new Map<string, number>();
-  const spec = (i: number) => (specs[i] ??= toSpec('indoor-coils', rows[i]));
+  const groups = Int32Array.from(specs, (spec) => {
+    const key = groupKey(spec);
+    let id = groupIds.get(key);
+    if (id === undefined) groupIds.set(key, (id = groupIds.size));
+    return id;
+  });
+  const priceKeys: (string | undefined)[] = new Array(n);
   return {
     rows,
-    positionOf,
     modelRank,
     byRefrigerant,
     narrowed: new Map(),
-    spec,
+    spec: (i) => specs[i],
     priceKey: (i) => (priceKeys[i] ??= normalizeModel(rows[i].model)),
-    groupOf(i) {
-      if (groups[i] < 0) {
-        const key = JSON.stringify(spec(i), (k, v) => (IDENTITY_FIELDS.has(k) ? undefined : v));
-        let id = groupIds.get(key);
-        if (id === undefined) groupIds.set(key, (id = groupIds.size));
-        groups[i] = id;
-      }
-      return groups[i];
-    },
+    groupOf: (i) => groups[i],
   };
+}
+
+/** Every field of the spec but the identity ones, as text (values as JSON, so no two specs collide). */
+function groupKey(spec: IndoorCoilSpec): string {
+  let key = '';
+  for (const [field, value] of Object.entries(spec)) {
+    if (!IDENTITY_FIELDS.has(field)) key += `${field}=${JSON.stringify(value)};`;
+  }
+  return key;
 }
