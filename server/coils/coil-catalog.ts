@@ -25,6 +25,8 @@ export interface CoilCatalog {
   priceKey(position: number): string;
   /** Small integer naming the coil's group (equal non-identity spec fields). */
   groupOf(position: number): number;
+  /** How many coils of the catalog are in the group. */
+  groupSize(group: number): number;
 }
 
 const catalogs = new WeakMap<KindIndex, CoilCatalog>();
@@ -67,6 +69,8 @@ function buildCoilCatalog(rows: IndoorCoil[]): CoilCatalog {
     if (id === undefined) groupIds.set(key, (id = groupIds.size));
     return id;
   });
+  const sizes = new Int32Array(groupIds.size);
+  for (const g of groups) sizes[g]++;
   const priceKeys: (string | undefined)[] = new Array(n);
   return {
     rows,
@@ -76,6 +80,7 @@ function buildCoilCatalog(rows: IndoorCoil[]): CoilCatalog {
     spec: (i) => specs[i],
     priceKey: (i) => (priceKeys[i] ??= normalizeModel(rows[i].model)),
     groupOf: (i) => groups[i],
+    groupSize: (g) => sizes[g],
   };
 }
 

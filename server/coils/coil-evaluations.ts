@@ -8,6 +8,25 @@ import { efficiencyFigures } from '../../shared/efficiency/pairing-figures';
 import type { CoilCatalog } from './coil-catalog';
 import { coilGroup, type CoilGroup } from './group-findings';
 
+/** Fewest coils in a group for its shared findings to be worked out once (else each coil runs every rule). */
+export const GROUP_PROBE_MIN = 8;
+
+/** A group whose coils run every rule that reads the coil themselves. */
+function everyCoilRuleApart(fixed: KnownFindings): CoilGroup {
+  const perCoil: number[] = [];
+  let blockers = 0;
+  let cautions = 0;
+  for (let r = 0; r < RULES.length; r++) {
+    const out = fixed[r];
+    if (!out) perCoil.push(r);
+    for (const f of out ?? []) {
+      if (f.severity === 'blocker') blockers++;
+      else if (f.severity === 'caution') cautions++;
+    }
+  }
+  return { known: fixed, perCoil, blockers, cautions };
+}
+
 /** A coil's check in brief: enough to count, filter and sort without its findings. */
 export interface CoilSummary {
   blocked: boolean;
@@ -51,7 +70,9 @@ export class CoilEvaluations {
       const pairing = this.pairing(position);
       // The rules that never read the coil (line set, electrical, controls…) hold for every coil.
       this.fixed ??= fixedFindings(pairing, this.context, 'indoorCoil');
-      this.groups.set(id, (group = coilGroup(pairing, this.context, this.fixed)));
+      // Watching a rule's reads costs several runs of it: worth it only for a group of a few coils.
+      group = this.catalog.groupSize(id) >= GROUP_PROBE_MIN ? coilGroup(pairing, this.context, this.fixed) : everyCoilRuleApart(this.fixed);
+      this.groups.set(id, group);
     }
     return group;
   }

@@ -2,6 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Finding } from '../../../shared/rules/types';
 import type { CompatibleCoil } from '../../../shared/schemas/coils';
+import { GROUP_PROBE_MIN } from '../../../server/coils/coil-evaluations';
 import { compatibleCoils } from '../../../server/coils/coils.service';
 import { revertImport, uploadImport } from '../../../server/imports/imports.service';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
@@ -34,16 +35,11 @@ beforeAll(async () => {
   // default 350–450 CFM/ton band (common practice, no source; shared/rules/settings.ts).
   await load('outdoor-units', 'model,system_type,refrigerant,nominal_tons,metering_required,seer2,eer2,hspf2\nKV-HP36,heat-pump,R-410A,3,txv,14.3,11.7,7.5\n');
   await load('air-handlers', 'model,kind,min_tons,max_tons,airflow_cfm,refrigerants\nKV-AH36,air-handler,2,4,1200,R-410A\n');
-  // KV-TWIN-A and KV-TWIN-B differ only in model (one group of like coils); only A has a rated combination.
-  await load(
-    'indoor-coils',
-    [
-      COIL_HEADER,
-      'KV-TWIN-A,upflow,yes,aluminum,2.5,3.5,R-410A,txv,R-410A,yes,17.5',
-      'KV-TWIN-B,upflow,yes,aluminum,2.5,3.5,R-410A,txv,R-410A,yes,17.5',
-      'KV-MOVER,horizontal,no,copper,2.5,3.5,R-410A,txv,R-410A,yes,21',
-    ].join('\n'),
-  );
+  // KV-TWIN-A…H differ only in model: a group of like coils big enough to share its findings
+  // (GROUP_PROBE_MIN); only A has a rated combination.
+  const twins = 'ABCDEFGH'.split('').map((x) => `KV-TWIN-${x},upflow,yes,aluminum,2.5,3.5,R-410A,txv,R-410A,yes,17.5`);
+  expect(twins.length).toBeGreaterThanOrEqual(GROUP_PROBE_MIN);
+  await load('indoor-coils', [COIL_HEADER, ...twins, 'KV-MOVER,horizontal,no,copper,2.5,3.5,R-410A,txv,R-410A,yes,21'].join('\n'));
   await load('rated-combinations', 'outdoor_model,indoor_model,seer2,eer2,hspf2,reference\nKV-HP36,KV-TWIN-A,15.2,12.1,7.8,KV-REF-1\n');
   for (const kind of ['outdoor-units', 'air-handlers'] as const) {
     const res = await request(t.app).get(`/api/catalog/${kind}`).query({ pageSize: 100 }).set(auth());
@@ -55,7 +51,7 @@ afterAll(async () => {
 });
 
 describe('GET /api/coils/compatible: coils that differ only in model', () => {
-  it('when two like coils differ only in model and one is rated, then each keeps its own rating and its own words', async () => {
+  it('when a group of like coils differ only in model and one is rated, then each keeps its own rating and its own words', async () => {
     const { items, byModel } = await search();
     const a = byModel.get('KV-TWIN-A')!;
     const b = byModel.get('KV-TWIN-B')!;
@@ -68,6 +64,8 @@ describe('GET /api/coils/compatible: coils that differ only in model', () => {
     expect(noRating(b)).toHaveLength(1);
     expect(noRating(b)[0].detail).toContain('KV-TWIN-B');
     expect(JSON.stringify(b.findings)).not.toContain('KV-TWIN-A');
+    // The other twins read like B, each with its own model.
+    expect(items.filter((i) => i.coil.model.startsWith('KV-TWIN-')).map((i) => noRating(i)[0]?.detail.includes(i.coil.model) ?? i.coil.model === 'KV-TWIN-A')).toEqual(Array(8).fill(true));
   });
 
   it('when the same search is asked twice, then the second answer equals the first', async () => {
