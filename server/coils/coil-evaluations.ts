@@ -123,7 +123,7 @@ export const cautionsIn = (packed: number) => packed >>> 2;
 
 /** Most search contexts kept per database (each holds a few bytes per coil plus the coils once shown). */
 const MAX_CONTEXTS = 64;
-const contexts = new WeakMap<DataSource, Map<string, CoilEvaluations>>();
+const contexts = new WeakMap<DataSource, { generation: string; byKey: Map<string, CoilEvaluations> }>();
 
 const objectIds = new WeakMap<object, number>();
 let nextObjectId = 0;
@@ -136,19 +136,20 @@ export function objectId(value: object): number {
 
 /**
  * The evaluations of a context, reused while its key holds (least recently used dropped past
- * MAX_CONTEXTS). The key names the catalog index and settings objects, which are replaced when an import
- * commits or reverts, a write rolls back or an admin saves settings: a stale context is never found again.
+ * MAX_CONTEXTS). `generation` names the catalog index and settings objects, which are replaced when an
+ * import commits or reverts, a write rolls back or an admin saves settings: a new generation drops
+ * every context of the old one (and the old catalog's rows with them).
  */
-export function evaluationsFor(dataSource: DataSource, key: string, create: () => CoilEvaluations): CoilEvaluations {
-  let perSource = contexts.get(dataSource);
-  if (!perSource) contexts.set(dataSource, (perSource = new Map()));
-  let found = perSource.get(key);
+export function evaluationsFor(dataSource: DataSource, generation: string, key: string, create: () => CoilEvaluations): CoilEvaluations {
+  let held = contexts.get(dataSource);
+  if (!held || held.generation !== generation) contexts.set(dataSource, (held = { generation, byKey: new Map() }));
+  let found = held.byKey.get(key);
   if (found) {
-    perSource.delete(key);
+    held.byKey.delete(key);
   } else {
     found = create();
-    if (perSource.size >= MAX_CONTEXTS) perSource.delete(perSource.keys().next().value!);
+    if (held.byKey.size >= MAX_CONTEXTS) held.byKey.delete(held.byKey.keys().next().value!);
   }
-  perSource.set(key, found);
+  held.byKey.set(key, found);
   return found;
 }

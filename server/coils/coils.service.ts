@@ -81,14 +81,9 @@ export async function compatibleCoils(ctx: AppContext, query: CoilsQuery, today?
   );
   const catalog = coilCatalog(coils);
   const book = await priceBook(ctx.dataSource, coils, today ?? todayIso());
-  const key = [
-    ...[outdoors, handlers, coils, combos, context.settings, context.transitionRules].map(objectId),
-    query.outdoorUnitId,
-    query.airHandlerId ?? '',
-    query.state ?? '',
-    base.installDate,
-  ].join('|');
-  const evaluations = evaluationsFor(ctx.dataSource, key, () => new CoilEvaluations(catalog, base, context, query.state));
+  const generation = [outdoors, handlers, coils, combos, context.settings, context.transitionRules].map(objectId).join('|');
+  const key = [query.outdoorUnitId, query.airHandlerId ?? '', query.state ?? '', base.installDate].join('|');
+  const evaluations = evaluationsFor(ctx.dataSource, generation, key, () => new CoilEvaluations(catalog, base, context, query.state));
 
   const narrowed = narrowCandidates(catalog, base.outdoor.spec.refrigerant, base.outdoor.spec.nominalTons);
   const candidates = select(catalog, narrowed, query);
