@@ -1,6 +1,7 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { PerformanceObserver } from 'node:perf_hooks';
 import pino from 'pino';
 import { runChecks } from '../shared/rules/engine';
 import { kindIndex } from '../server/catalog/catalog-index';
@@ -8,6 +9,7 @@ import { toSpec } from '../server/catalog/catalog-specs';
 import type { IndoorCoil } from '../server/catalog/indoor-coil.entity';
 import { resolvePairing } from '../server/checks/checks.service';
 import { compatibleCoils } from '../server/coils/coils.service';
+import type { CoilsQuery } from '../shared/schemas/coils';
 import type { AppContext } from '../server/context';
 import { openDatabase } from '../server/db/data-source';
 import type { AppConfig } from '../server/env';
@@ -44,6 +46,52 @@ function pricesCsv(): string {
   return `${lines.join('\n')}\n`;
 }
 
+interface QueryRun {
+  query: CoilsQuery;
+  ms: number;
+  total: number;
+  gcMs: number;
+}
+
+/** Garbage-collection pause time (ms) since the last take, from the gc performance entries. */
+function gcPauses() {
+  let pending = 0;
+  const observer = new PerformanceObserver((list) => {
+    for (const entry of list.getEntries()) pending += entry.duration;
+  });
+  observer.observe({ entryTypes: ['gc'] });
+  return {
+    take() {
+      for (const entry of observer.takeRecords()) pending += entry.duration;
+      const ms = pending;
+      pending = 0;
+      return ms;
+    },
+    stop: () => observer.disconnect(),
+  };
+}
+
+/**
+ * Per-query timing by parameter set (printed, not measured): the first search of an outdoor unit works
+ * out its context, the ones after reuse it; the slowest queries with their size and GC pauses.
+ */
+function printBreakdown(runs: QueryRun[]): void {
+  const seen = new Set<number>();
+  const sets = new Map<string, number[]>();
+  for (const r of runs) {
+    const kind = `${r.query.q ? 'q+configuration' : 'outdoor only'}, ${seen.has(r.query.outdoorUnitId) ? 'context reused' : 'first for its outdoor unit'}`;
+    seen.add(r.query.outdoorUnitId);
+    sets.set(kind, [...(sets.get(kind) ?? []), r.ms]);
+  }
+  console.log('\n  coils: per-query timing by parameter set (ms)');
+  for (const [kind, ms] of sets) console.log(`    ${kind.padEnd(48)} n=${String(ms.length).padStart(3)}  p50 ${percentile(ms, 50).toFixed(1).padStart(6)}  p95 ${percentile(ms, 95).toFixed(1).padStart(6)}  max ${Math.max(...ms).toFixed(1).padStart(6)}`);
+  console.log(`    GC pauses during the timed queries: ${runs.reduce((s, r) => s + r.gcMs, 0).toFixed(1)} ms in total`);
+  console.log('  slowest queries:');
+  for (const r of [...runs].sort((a, b) => b.ms - a.ms).slice(0, 5)) {
+    console.log(`    ${r.ms.toFixed(1).padStart(7)} ms  total ${String(r.total).padStart(5)}  gc ${r.gcMs.toFixed(1).padStart(5)} ms  ${JSON.stringify(r.query)}`);
+  }
+}
+
 export async function run(): Promise<Measure[]> {
   const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-bench-coils-'));
   try {
@@ -59,11 +107,19 @@ export async function run(): Promise<Measure[]> {
 
     const queries = outdoorIds.flatMap((id, i) => [{ outdoorUnitId: id, limit: 50 }, { outdoorUnitId: id, limit: 50, q: `BC-0${i}`, configuration: 'upflow' as const }]);
     const times: number[] = [];
+    const runs: QueryRun[] = [];
+    const gc = gcPauses();
     for (const query of queries) {
       const started = performance.now();
-      await compatibleCoils(ctx, query);
-      times.push(performance.now() - started);
+      const answer = await compatibleCoils(ctx, query);
+      const ms = performance.now() - started;
+      times.push(ms);
+      // GC entries arrive in a later task: let them in (outside the timed part) before reading them.
+      await new Promise((resolve) => setImmediate(resolve));
+      runs.push({ query, ms, total: answer.total, gcMs: gc.take() });
     }
+    gc.stop();
+    printBreakdown(runs);
 
     // Baseline: the same engine over every coil in the catalog, no narrowing (a few outdoor units: it is slow).
     const coils = (await kindIndex(ds, 'indoor-coils')).rows as unknown as IndoorCoil[];

@@ -1,81 +1,68 @@
-import { fixedFindings, runChecks, type KnownFindings } from '../../shared/rules/engine';
-import type { Pairing, RuleContext } from '../../shared/rules/types';
 import type { CoilsQuery, CompatibleCoil, CompatibleCoilsResponse } from '../../shared/schemas/coils';
-import { efficiencyFigures } from '../../shared/efficiency/pairing-figures';
 import { kindIndex } from '../catalog/catalog-index';
-import { toSpec } from '../catalog/catalog-specs';
-import type { IndoorCoil } from '../catalog/indoor-coil.entity';
-import { currentPricesBatch } from '../catalog/prices.service';
-import { normalizeModel } from '../../shared/schemas/fields';
+import { todayIso } from '../catalog/dates';
 import { resolvePairing } from '../checks/checks.service';
 import type { AppContext } from '../context';
 import { notFound } from '../lib/errors';
 import { loadRuleContext } from '../settings/settings.service';
-import { pickBestPrice } from './best-price';
+import { coilCatalog, type CoilCatalog } from './coil-catalog';
 import { fuzzyFilter, leftOutCandidates, matchesSpecFilters, narrowCandidates } from './coil-candidates';
+import { CoilEvaluations, cautionsIn, evaluationsFor, isBlocked, isRated, objectId } from './coil-evaluations';
+import { priceBook, type PriceBook } from './price-book';
 
-/** A coil row's spec, worked out once per row object (rows live as long as their catalog index). */
-const specs = new WeakMap<IndoorCoil, ReturnType<typeof toSpec<'indoor-coils'>>>();
-function specOf(coil: IndoorCoil) {
-  let spec = specs.get(coil);
-  if (!spec) specs.set(coil, (spec = toSpec('indoor-coils', coil)));
-  return spec;
+/** One candidate with its sort keys (rated first, fewer cautions, cheaper, model, then the order given). */
+interface Ranked {
+  position: number;
+  seq: number;
+  unrated: number;
+  cautions: number;
+  priceCents: number;
+  modelRank: number;
 }
 
-const withCoil = (base: Pairing, coil: IndoorCoil): Pairing => ({ ...base, indoorCoil: { spec: specOf(coil), kept: false, id: coil.id } });
+const byRank = (a: Ranked, b: Ranked) =>
+  a.unrated - b.unrated || a.cautions - b.cautions || (a.priceCents === b.priceCents ? 0 : a.priceCents < b.priceCents ? -1 : 1) || a.modelRank - b.modelRank || a.seq - b.seq;
 
 /**
- * The check of one coil with the fixed parts: the same engine, settings and scope as POST /api/checks.
- * `known` holds the findings of the rules that never read the coil, worked out once per search.
+ * Sorts the passing and the failing coils apart by rating, cautions, price (none last) and model, with
+ * the ratedOnly and inStock filters; the order given breaks what the model leaves tied, as a stable sort did.
  */
-function checkCoil(base: Pairing, context: RuleContext, known: KnownFindings, coil: IndoorCoil, state: string | undefined): CompatibleCoil {
-  const pairing = withCoil(base, coil);
-  const spec = pairing.indoorCoil!.spec;
-  const result = runChecks(pairing, context, undefined, known);
-  const item: CompatibleCoil = { coil: { id: coil.id, ...spec, model: coil.model }, verdict: result.verdict, findings: result.findings };
-  const combo = result.computed.ratedCombination as CompatibleCoil['ratedCombination'];
-  if (combo) item.ratedCombination = combo;
-  if (state && result.computed.regionalMinimum && efficiencyFigures(pairing).seer2 !== undefined) {
-    item.meetsRegionalMinimum = !result.findings.some((f) => f.ruleId === 'efficiency.regional-minimum' && f.severity === 'blocker');
+function rank(catalog: CoilCatalog, evaluations: CoilEvaluations, book: PriceBook, positions: readonly number[], query: CoilsQuery) {
+  const passing: Ranked[] = [];
+  const failing: Ranked[] = [];
+  for (let seq = 0; seq < positions.length; seq++) {
+    const position = positions[seq];
+    const packed = evaluations.summary(position);
+    const blocked = isBlocked(packed);
+    if (blocked && !query.includeIncompatible) continue;
+    if (query.ratedOnly && !isRated(packed)) continue;
+    const priceCents = book.get(catalog.priceKey(position))?.priceCents ?? Infinity;
+    if (query.inStock && priceCents === Infinity) continue;
+    (blocked ? failing : passing).push({ position, seq, unrated: isRated(packed) ? 0 : 1, cautions: cautionsIn(packed), priceCents, modelRank: catalog.modelRank[position] });
   }
-  return item;
+  return { passing: passing.sort(byRank), failing: failing.sort(byRank) };
 }
 
-/** Cautions per item, counted once: the sort compares each item many times. */
-const cautionCounts = new WeakMap<CompatibleCoil, number>();
-function cautionsOf(item: CompatibleCoil): number {
-  let n = cautionCounts.get(item);
-  if (n === undefined) {
-    n = 0;
-    for (const f of item.findings) if (f.severity === 'caution') n++;
-    cautionCounts.set(item, n);
-  }
-  return n;
-}
-
-/** Rated combination first, then fewer cautions, then price (no price last), then model for a stable order. */
-export function compareCoils(a: CompatibleCoil, b: CompatibleCoil): number {
-  const rated = Number(!a.ratedCombination) - Number(!b.ratedCombination);
-  if (rated !== 0) return rated;
-  const cautions = cautionsOf(a) - cautionsOf(b);
-  if (cautions !== 0) return cautions;
-  const pa = a.bestPrice?.priceCents ?? Infinity;
-  const pb = b.bestPrice?.priceCents ?? Infinity;
-  if (pa !== pb) return pa < pb ? -1 : 1;
-  return a.coil.model.localeCompare(b.coil.model);
+/** The positions a query's own filters keep (spec filters, then the fuzzy search). */
+function select(catalog: CoilCatalog, positions: Iterable<number>, query: CoilsQuery): number[] {
+  const kept: number[] = [];
+  for (const p of positions) if (matchesSpecFilters(catalog.rows[p], query)) kept.push(p);
+  return query.q ? fuzzyFilter(catalog, kept, query.q) : kept;
 }
 
 /**
  * GET /api/coils/compatible: every catalog coil that passes with the outdoor unit (and the kept air
  * handler or furnace), with rating and best price. Candidates are narrowed by refrigerant listing and
- * tonnage through the catalog index, then each is run through the shared engine; incompatible coils
- * come after the passing ones only when asked for.
+ * tonnage through the catalog index; each is summarised by the shared engine (rules that read no coil
+ * identity run once per group of like coils, results kept per search context); only the page shown gets
+ * its full findings. Incompatible coils come after the passing ones only when asked for.
  */
 export async function compatibleCoils(ctx: AppContext, query: CoilsQuery, today?: string): Promise<CompatibleCoilsResponse> {
-  const [outdoors, handlers, coils, context] = await Promise.all([
+  const [outdoors, handlers, coils, combos, context] = await Promise.all([
     kindIndex(ctx.dataSource, 'outdoor-units'),
     kindIndex(ctx.dataSource, 'air-handlers'),
     kindIndex(ctx.dataSource, 'indoor-coils'),
+    kindIndex(ctx.dataSource, 'rated-combinations'),
     loadRuleContext(ctx),
   ]);
   const outdoor = outdoors.byId.get(query.outdoorUnitId);
@@ -92,33 +79,23 @@ export async function compatibleCoils(ctx: AppContext, query: CoilsQuery, today?
     },
     today,
   );
+  const catalog = coilCatalog(coils);
+  const book = await priceBook(ctx.dataSource, coils, today ?? todayIso());
+  const generation = [outdoors, handlers, coils, combos, context.settings, context.transitionRules].map(objectId).join('|');
+  const key = [query.outdoorUnitId, query.airHandlerId ?? '', query.state ?? '', base.installDate].join('|');
+  const evaluations = evaluationsFor(ctx.dataSource, generation, key, () => new CoilEvaluations(catalog, base, context, query.state));
 
-  const narrowed = narrowCandidates(coils, base.outdoor.spec.refrigerant, base.outdoor.spec.nominalTons);
-  const select = (list: IndoorCoil[]) => {
-    const filtered = list.filter((c) => matchesSpecFilters(c, query));
-    return query.q ? fuzzyFilter(filtered, query.q) : filtered;
-  };
+  const narrowed = narrowCandidates(catalog, base.outdoor.spec.refrigerant, base.outdoor.spec.nominalTons);
+  const candidates = select(catalog, narrowed, query);
+  const leftOut = query.includeIncompatible ? select(catalog, leftOutCandidates(catalog, narrowed), query) : [];
+  const { passing, failing } = rank(catalog, evaluations, book, [...candidates, ...leftOut], query);
+  const ordered = query.includeIncompatible ? [...passing, ...failing] : passing;
 
-  const candidates = select(narrowed);
-  const leftOut = query.includeIncompatible ? select(leftOutCandidates(coils, narrowed)) : [];
-  // The rules that never read the coil (line set, electrical, controls…) give the same findings for every candidate.
-  const probe = candidates[0] ?? leftOut[0];
-  const known = probe ? fixedFindings(withCoil(base, probe), context, 'indoorCoil') : [];
-  const passing: CompatibleCoil[] = [];
-  const failing: CompatibleCoil[] = [];
-  for (const coil of candidates) {
-    const item = checkCoil(base, context, known, coil, query.state);
-    (item.verdict === 'incompatible' ? failing : passing).push(item);
-  }
-  for (const coil of leftOut) failing.push(checkCoil(base, context, known, coil, query.state));
-
-  const shown = query.includeIncompatible ? [...passing, ...failing] : passing;
-  const prices = await currentPricesBatch(ctx, shown.map((i) => i.coil.model), today);
-  for (const item of shown) {
-    const best = pickBestPrice(prices.get(normalizeModel(item.coil.model)));
-    if (best) item.bestPrice = best;
-  }
-  const kept = (list: CompatibleCoil[]) => list.filter((i) => (!query.ratedOnly || i.ratedCombination) && (!query.inStock || i.bestPrice)).sort(compareCoils);
-  const items = [...kept(passing), ...(query.includeIncompatible ? kept(failing) : [])];
-  return { items: items.slice(0, query.limit), total: items.length };
+  // Pagination before the full findings: only the coils shown are checked in full.
+  const items = ordered.slice(0, query.limit).map(({ position }): CompatibleCoil => {
+    const best = book.get(catalog.priceKey(position));
+    const checked = evaluations.check(position);
+    return best ? { ...checked, bestPrice: best } : { ...checked };
+  });
+  return { items, total: ordered.length };
 }
