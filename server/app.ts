@@ -6,6 +6,7 @@ import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.routes';
 import { catalogVersionScope } from './catalog/catalog-version';
 import type { AppContext } from './context';
+import { startChangeWatch } from './db/change-watch';
 import { defaultEmptyBody, requireKnownBodyType } from './lib/body-type';
 import { apiNotFound, errorMiddleware } from './lib/errors';
 import { apiRoutes } from './routes';
@@ -13,6 +14,8 @@ import { apiRoutes } from './routes';
 /** Builds the Express app (no listen): the API under /api, then the web app with a deep-link fallback. */
 export function createApp(ctx: AppContext): Express {
   const app = express();
+  // Cached users and catalog versions are dropped on any instance's change (server/db/change-watch.ts).
+  startChangeWatch(ctx.dataSource);
   app.disable('x-powered-by');
   // API answers are per-user and rarely re-fetched unchanged; hashing every body is not worth it.
   app.set('etag', false);

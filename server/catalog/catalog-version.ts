@@ -1,6 +1,7 @@
 import { AsyncLocalStorage } from 'node:async_hooks';
 import type { RequestHandler } from 'express';
 import type { DataSource, EntityManager } from 'typeorm';
+import { forgetCachedRows, StampedCache, wroteWatchedTable } from '../db/change-watch';
 import { dialectOf } from '../db/dialect';
 
 /**
@@ -15,9 +16,20 @@ export async function bumpCatalogVersion(manager: EntityManager, kind: string): 
     {},
   );
   await manager.query(sql, params);
+  // Raw SQL: TypeORM does not report it, so tell the change watch (its commit then waits for the echo).
+  wroteWatchedTable(manager);
 }
 
-// One read of the version table per request, shared by every kind it looks at (a check reads four).
+// The versions themselves, kept until catalog_versions may have changed (server/db/change-watch.ts).
+const versionCaches = new WeakMap<DataSource, StampedCache<'all', Map<string, number>>>();
+
+function readVersions(dataSource: DataSource): Promise<Map<string, number>> {
+  let cache = versionCaches.get(dataSource);
+  if (!cache) versionCaches.set(dataSource, (cache = new StampedCache(dataSource)));
+  return cache.get('all', () => dialectOf(dataSource).catalogVersions(dataSource));
+}
+
+// One look per request, shared by every kind it looks at (a check reads four).
 const requestScope = new AsyncLocalStorage<Map<DataSource, Promise<Map<string, number>>>>();
 
 /** Opens the per-request memo for catalog versions (mount after the body parsers). */
@@ -27,14 +39,14 @@ export const catalogVersionScope: RequestHandler = (_req, _res, next) => request
 const inFlight = new WeakMap<DataSource, Promise<Map<string, number>>>();
 
 /**
- * Every kind's version as the database has it now: read once per request, so a request that starts
- * after another instance's import committed sees that import.
+ * Every kind's version as the database has it now: looked up once per request (from memory while no
+ * change was signalled), so a request that starts after another instance's import committed sees that import.
  */
 export function catalogVersions(dataSource: DataSource): Promise<Map<string, number>> {
   const memo = requestScope.getStore();
   const known = memo?.get(dataSource) ?? (memo ? undefined : inFlight.get(dataSource));
   if (known) return known;
-  const read = dialectOf(dataSource).catalogVersions(dataSource);
+  const read = readVersions(dataSource);
   if (memo) memo.set(dataSource, read);
   else {
     inFlight.set(dataSource, read);
@@ -48,4 +60,5 @@ export function catalogVersions(dataSource: DataSource): Promise<Map<string, num
 export function forgetCatalogVersions(dataSource: DataSource): void {
   requestScope.getStore()?.delete(dataSource);
   inFlight.delete(dataSource);
+  forgetCachedRows(dataSource);
 }

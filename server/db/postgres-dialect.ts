@@ -1,5 +1,6 @@
 import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 import type { DatabaseDialect, UserRow } from './dialect';
+import { listenerConfig, PostgresChangeListener } from './postgres-change-listener';
 
 // PostgreSQL takes at most 65535 parameters a statement; stay well under it.
 const MAX_PARAMS = 30_000;
@@ -72,5 +73,10 @@ export const postgresDialect: DatabaseDialect = {
   async catalogVersions(dataSource) {
     const rows = (await dataSource.query('SELECT "kind", "version" FROM "catalog_versions"')) as { kind: string; version: number }[];
     return new Map(rows.map((r) => [r.kind, r.version]));
+  },
+
+  /** LISTEN on a dedicated connection for the NOTIFY the watched tables' triggers send at commit. */
+  watchChanges(dataSource) {
+    return new PostgresChangeListener(listenerConfig(dataSource));
   },
 };

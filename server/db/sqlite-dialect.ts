@@ -55,4 +55,24 @@ export const sqliteDialect: DatabaseDialect = {
     const rows = statement(handleOf(dataSource.manager), 'SELECT "kind", "version" FROM "catalog_versions"').all() as { kind: string; version: number }[];
     return new Map(rows.map((r) => [r.kind, r.version]));
   },
+
+  /**
+   * `total_changes()` counts this connection's writes, `data_version` moves when another connection
+   * (another process on the file) commits: one prepared read, a few microseconds. While a transaction
+   * is open on the shared connection its uncommitted rows are visible, so nothing is trusted then.
+   */
+  watchChanges(dataSource) {
+    const raw = handleOf(dataSource.manager) as RawSqlite & { inTransaction: boolean };
+    const counters = statement(raw, 'SELECT total_changes() AS "c", "data_version" AS "v" FROM pragma_data_version');
+    return {
+      stamp() {
+        if (raw.inTransaction) return null;
+        const { c, v } = counters.get() as { c: number; v: number };
+        return `${c}.${v}`;
+      },
+      settle: () => undefined,
+      echo: () => Promise.resolve(),
+      close: () => Promise.resolve(),
+    };
+  },
 };
