@@ -4,9 +4,8 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.routes';
-import { catalogVersionScope } from './catalog/catalog-version';
 import type { AppContext } from './context';
-import { startChangeWatch } from './db/change-watch';
+import { changeScope, startChangeWatch } from './db/change-watch';
 import { defaultEmptyBody, requireKnownBodyType } from './lib/body-type';
 import { apiNotFound, errorMiddleware } from './lib/errors';
 import { apiRoutes } from './routes';
@@ -47,7 +46,7 @@ export function createApp(ctx: AppContext): Express {
     }),
   );
   if (ctx.config.corsOrigin) app.use('/api', devCors(ctx.config.corsOrigin));
-  app.use('/api', requireKnownBodyType, express.json({ limit: '1mb' }), defaultEmptyBody, catalogVersionScope);
+  app.use('/api', requireKnownBodyType, express.json({ limit: '1mb' }), defaultEmptyBody, changeScope);
 
   app.get('/api/health', (_req, res) => {
     res.json({ status: 'ok' });

@@ -1,7 +1,5 @@
-import { AsyncLocalStorage } from 'node:async_hooks';
-import type { RequestHandler } from 'express';
 import type { DataSource, EntityManager } from 'typeorm';
-import { forgetCachedRows, StampedCache, wroteWatchedTable } from '../db/change-watch';
+import { forgetCachedRows, requestMemo, StampedCache, wroteWatchedTable } from '../db/change-watch';
 import { dialectOf } from '../db/dialect';
 
 /**
@@ -29,12 +27,8 @@ function readVersions(dataSource: DataSource): Promise<Map<string, number>> {
   return cache.get('all', () => dialectOf(dataSource).catalogVersions(dataSource));
 }
 
-// One look per request, shared by every kind it looks at (a check reads four).
-const requestScope = new AsyncLocalStorage<Map<DataSource, Promise<Map<string, number>>>>();
-
-/** Opens the per-request memo for catalog versions (mount after the body parsers). */
-export const catalogVersionScope: RequestHandler = (_req, _res, next) => requestScope.run(new Map(), next);
-
+// One look per request (the request memo of server/db/change-watch.ts), shared by every kind it looks
+// at (a check reads four).
 // Outside a request (tasks, benches): concurrent callers share the read in flight, nothing more.
 const inFlight = new WeakMap<DataSource, Promise<Map<string, number>>>();
 
@@ -43,7 +37,7 @@ const inFlight = new WeakMap<DataSource, Promise<Map<string, number>>>();
  * change was signalled), so a request that starts after another instance's import committed sees that import.
  */
 export function catalogVersions(dataSource: DataSource): Promise<Map<string, number>> {
-  const memo = requestScope.getStore();
+  const memo = requestMemo() as Map<DataSource, Promise<Map<string, number>>> | undefined;
   const known = memo?.get(dataSource) ?? (memo ? undefined : inFlight.get(dataSource));
   if (known) return known;
   const read = readVersions(dataSource);
@@ -58,7 +52,7 @@ export function catalogVersions(dataSource: DataSource): Promise<Map<string, num
 
 /** Drops the versions read so far in this request and in flight (after this process wrote the catalog). */
 export function forgetCatalogVersions(dataSource: DataSource): void {
-  requestScope.getStore()?.delete(dataSource);
+  requestMemo()?.delete(dataSource);
   inFlight.delete(dataSource);
   forgetCachedRows(dataSource);
 }

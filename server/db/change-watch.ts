@@ -1,3 +1,5 @@
+import { AsyncLocalStorage } from 'node:async_hooks';
+import type { RequestHandler } from 'express';
 import type { DataSource, EntityManager, EntitySubscriberInterface, QueryRunner } from 'typeorm';
 import { dialectOf, type ChangeStamp, type ChangeWatch } from './dialect';
 
@@ -79,6 +81,37 @@ export function forgetCachedRows(dataSource: DataSource): void {
   watchOf(dataSource).local++;
 }
 
+// Per request: what it has looked up once (the stamp per watch; the catalog versions per data source).
+const requestScope = new AsyncLocalStorage<Map<object, unknown>>();
+
+/** Opens the per-request memo (mount once, early, on /api). */
+export const changeScope: RequestHandler = (_req, _res, next) => requestScope.run(new Map(), next);
+
+/** This request's memo, or undefined outside a request (tasks, benches). */
+export function requestMemo(): Map<object, unknown> | undefined {
+  return requestScope.getStore();
+}
+
+interface StampSeen {
+  stamp: ChangeStamp;
+  local: number;
+}
+
+/**
+ * The stamp as this request sees it: looked up once per request (the first cache it asks), then reused
+ * while this process has written nothing, since a request must see what committed before it started.
+ */
+async function stampFor(watch: Watch): Promise<ChangeStamp | null> {
+  const memo = requestScope.getStore();
+  const seen = memo?.get(watch) as StampSeen | undefined;
+  if (seen && seen.local === watch.local) return seen.stamp;
+  const settling = watch.db.settle();
+  if (settling) await settling;
+  const stamp = watch.db.stamp();
+  if (memo && stamp !== null) memo.set(watch, { stamp, local: watch.local });
+  return stamp;
+}
+
 /**
  * Values read from the database, kept while nothing that could change them has happened: the dialect's
  * stamp (another instance or process committed) and this process's own writes. When the database can
@@ -97,9 +130,7 @@ export class StampedCache<K, V> {
 
   async get(key: K, load: () => Promise<V>): Promise<V> {
     const watch = watchOf(this.dataSource);
-    const settling = watch.db.settle();
-    if (settling) await settling;
-    const stamp = watch.db.stamp();
+    const stamp = await stampFor(watch);
     if (stamp === null) return load();
     const local = watch.local;
     if (stamp !== this.stamp || local !== this.local) {
