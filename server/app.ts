@@ -4,8 +4,8 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.routes';
-import { catalogVersionScope } from './catalog/catalog-version';
 import type { AppContext } from './context';
+import { changeScope, startChangeWatch } from './db/change-watch';
 import { defaultEmptyBody, requireKnownBodyType } from './lib/body-type';
 import { apiNotFound, errorMiddleware } from './lib/errors';
 import { apiRoutes } from './routes';
@@ -13,6 +13,8 @@ import { apiRoutes } from './routes';
 /** Builds the Express app (no listen): the API under /api, then the web app with a deep-link fallback. */
 export function createApp(ctx: AppContext): Express {
   const app = express();
+  // Cached users and catalog versions are dropped on any instance's change (server/db/change-watch.ts).
+  startChangeWatch(ctx.dataSource);
   app.disable('x-powered-by');
   // API answers are per-user and rarely re-fetched unchanged; hashing every body is not worth it.
   app.set('etag', false);
@@ -44,7 +46,7 @@ export function createApp(ctx: AppContext): Express {
     }),
   );
   if (ctx.config.corsOrigin) app.use('/api', devCors(ctx.config.corsOrigin));
-  app.use('/api', requireKnownBodyType, express.json({ limit: '1mb' }), defaultEmptyBody, catalogVersionScope);
+  app.use('/api', requireKnownBodyType, express.json({ limit: '1mb' }), defaultEmptyBody, changeScope);
 
   app.get('/api/health', (_req, res) => {
     res.json({ status: 'ok' });

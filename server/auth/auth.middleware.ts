@@ -1,8 +1,10 @@
 import type { RequestHandler } from 'express';
+import type { DataSource } from 'typeorm';
 import type { Role } from '../../shared/schemas/auth';
 import type { AppContext } from '../context';
 import { forbidden, unauthorized } from '../lib/errors';
-import { dialectOf } from '../db/dialect';
+import { StampedCache } from '../db/change-watch';
+import { dialectOf, type UserRow } from '../db/dialect';
 import { verifyToken } from './tokens';
 
 export interface AuthUser {
@@ -20,7 +22,8 @@ declare module 'express-serve-static-core' {
 
 /**
  * Checks the bearer token and loads the user: a deactivated or deleted user is refused even with a
- * valid token, and a role change takes effect at once (the role comes from the database).
+ * valid token, and a role change takes effect at once (the role comes from the database, through a
+ * cache that every write to the users table, on any instance, invalidates).
  */
 export function requireAuth(ctx: AppContext): RequestHandler {
   const findUser = userLookup(ctx);
@@ -36,11 +39,21 @@ export function requireAuth(ctx: AppContext): RequestHandler {
   };
 }
 
-/** The user behind a token, read on every request through the database's fast path (no query builder). */
+/**
+ * The user behind a token through the database's fast path (no query builder), kept in memory until
+ * the users table may have changed: a write in this process, another process's commit on the SQLite
+ * file, or a NOTIFY from another instance on PostgreSQL (server/db/change-watch.ts).
+ */
 function userLookup(ctx: AppContext) {
   const dialect = dialectOf(ctx.dataSource);
-  return (id: number) => dialect.userById(ctx.dataSource, id);
+  let cache = userCaches.get(ctx.dataSource);
+  if (!cache) userCaches.set(ctx.dataSource, (cache = new StampedCache(ctx.dataSource)));
+  const users = cache;
+  return (id: number) => users.get(id, () => dialect.userById(ctx.dataSource, id));
 }
+
+// One per data source, shared by every router's requireAuth.
+const userCaches = new WeakMap<DataSource, StampedCache<number, UserRow | null>>();
 
 /** Allows only the listed roles (use after requireAuth). */
 export function requireRole(...roles: Role[]): RequestHandler {

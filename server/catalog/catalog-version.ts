@@ -1,6 +1,5 @@
-import { AsyncLocalStorage } from 'node:async_hooks';
-import type { RequestHandler } from 'express';
 import type { DataSource, EntityManager } from 'typeorm';
+import { forgetCachedRows, requestMemo, StampedCache, wroteWatchedTable } from '../db/change-watch';
 import { dialectOf } from '../db/dialect';
 
 /**
@@ -15,26 +14,33 @@ export async function bumpCatalogVersion(manager: EntityManager, kind: string): 
     {},
   );
   await manager.query(sql, params);
+  // Raw SQL: TypeORM does not report it, so tell the change watch (its commit then waits for the echo).
+  wroteWatchedTable(manager);
 }
 
-// One read of the version table per request, shared by every kind it looks at (a check reads four).
-const requestScope = new AsyncLocalStorage<Map<DataSource, Promise<Map<string, number>>>>();
+// The versions themselves, kept until catalog_versions may have changed (server/db/change-watch.ts).
+const versionCaches = new WeakMap<DataSource, StampedCache<'all', Map<string, number>>>();
 
-/** Opens the per-request memo for catalog versions (mount after the body parsers). */
-export const catalogVersionScope: RequestHandler = (_req, _res, next) => requestScope.run(new Map(), next);
+function readVersions(dataSource: DataSource): Promise<Map<string, number>> {
+  let cache = versionCaches.get(dataSource);
+  if (!cache) versionCaches.set(dataSource, (cache = new StampedCache(dataSource)));
+  return cache.get('all', () => dialectOf(dataSource).catalogVersions(dataSource));
+}
 
+// One look per request (the request memo of server/db/change-watch.ts), shared by every kind it looks
+// at (a check reads four).
 // Outside a request (tasks, benches): concurrent callers share the read in flight, nothing more.
 const inFlight = new WeakMap<DataSource, Promise<Map<string, number>>>();
 
 /**
- * Every kind's version as the database has it now: read once per request, so a request that starts
- * after another instance's import committed sees that import.
+ * Every kind's version as the database has it now: looked up once per request (from memory while no
+ * change was signalled), so a request that starts after another instance's import committed sees that import.
  */
 export function catalogVersions(dataSource: DataSource): Promise<Map<string, number>> {
-  const memo = requestScope.getStore();
+  const memo = requestMemo() as Map<DataSource, Promise<Map<string, number>>> | undefined;
   const known = memo?.get(dataSource) ?? (memo ? undefined : inFlight.get(dataSource));
   if (known) return known;
-  const read = dialectOf(dataSource).catalogVersions(dataSource);
+  const read = readVersions(dataSource);
   if (memo) memo.set(dataSource, read);
   else {
     inFlight.set(dataSource, read);
@@ -46,6 +52,7 @@ export function catalogVersions(dataSource: DataSource): Promise<Map<string, num
 
 /** Drops the versions read so far in this request and in flight (after this process wrote the catalog). */
 export function forgetCatalogVersions(dataSource: DataSource): void {
-  requestScope.getStore()?.delete(dataSource);
+  requestMemo()?.delete(dataSource);
   inFlight.delete(dataSource);
+  forgetCachedRows(dataSource);
 }

@@ -33,7 +33,7 @@ export interface DatabaseDialect {
     rows: unknown[][],
     keepWhenNull?: (keyof T & string)[],
   ): Promise<void>;
-  /** Every catalog kind's version counter (catalog_versions), read once per request. */
+  /** Every catalog kind's version counter (catalog_versions); cached while the change watch stays put. */
   catalogVersions(dataSource: DataSource): Promise<Map<string, number>>;
   /** Whether the entity's table has a row with this id (a prepared read: one per record save). */
   hasRow<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, id: number): Promise<boolean>;
@@ -45,6 +45,21 @@ export interface DatabaseDialect {
   selectRows<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, query: RowQuery<T>): Promise<Record<string, unknown>[]>;
   /** Inserts one row inside the manager's transaction and returns its generated id. */
   insertRowReturningId<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, columns: (keyof T & string)[], values: unknown[]): Promise<number>;
+  /** Tells when `users` or `catalog_versions` may have changed, here or on another instance (server/db/change-watch.ts). */
+  watchChanges(dataSource: DataSource): ChangeWatch;
+}
+
+/** A value that moves whenever the watched tables may have changed; null while the database can not tell. */
+export type ChangeStamp = string | number;
+
+export interface ChangeWatch {
+  /** Now, without a query: the current stamp, or null (read through to the database). */
+  stamp(): ChangeStamp | null;
+  /** Resolves once changes already sent to this process have been taken in (undefined: nothing to wait for). */
+  settle(): Promise<void> | undefined;
+  /** Resolves once this instance has heard of a commit it just made (or gave up waiting). */
+  echo(): Promise<void>;
+  close(): Promise<void>;
 }
 
 /** The dialect of the database behind a data source or manager. */

@@ -1,6 +1,7 @@
 import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 import type { DatabaseDialect, UserRow } from './dialect';
 import { rowQuerySql } from './row-query';
+import { listenerConfig, PostgresChangeListener } from './postgres-change-listener';
 
 // PostgreSQL takes at most 65535 parameters a statement; stay well under it.
 const MAX_PARAMS = 30_000;
@@ -91,5 +92,10 @@ export const postgresDialect: DatabaseDialect = {
       values,
     )) as { id: number }[];
     return Number(rows[0].id);
+  },
+
+  /** LISTEN on a dedicated connection for the NOTIFY the watched tables' triggers send at commit. */
+  watchChanges(dataSource) {
+    return new PostgresChangeListener(listenerConfig(dataSource));
   },
 };

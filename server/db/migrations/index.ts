@@ -6,6 +6,7 @@ import { ImportBounds1764950000000 } from './1764950000000-import-bounds';
 import { Jobs1765000000000 } from './1765000000000-jobs';
 import { JobOptions1765200000000 } from './1765200000000-job-options';
 import { CatalogVersions1765300000000 } from './1765300000000-catalog-versions';
+import { ChangeNotify1765400000000 } from './1765400000000-change-notify';
 import { RebateTiersOneList1765430000000 } from './1765430000000-rebate-tiers-one-list';
 
 /** Every migration, in order. Add new ones at the end (one file per change, named by timestamp). */
@@ -18,5 +19,6 @@ export const migrations = [
   Jobs1765000000000,
   JobOptions1765200000000,
   CatalogVersions1765300000000,
+  ChangeNotify1765400000000,
   RebateTiersOneList1765430000000,
 ];
