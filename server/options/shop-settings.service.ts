@@ -2,7 +2,7 @@ import { DEFAULT_SHOP_SETTINGS } from '../../shared/estimates/shop-defaults';
 import type { ShopSettings, ShopSettingsResponse } from '../../shared/schemas/options';
 import type { AppContext } from '../context';
 import { withWriteLock } from '../db/write-transaction';
-import { forgetRulesSettings } from '../settings/rules-settings-cache';
+import { forgetRulesSettings, settingsChanged } from '../settings/rules-settings-cache';
 import { ShopSettingsRow } from './shop-settings.entity';
 
 const ROW_ID = 1;
@@ -16,8 +16,9 @@ export async function getShopSettings(ctx: AppContext): Promise<ShopSettingsResp
 /** PUT /api/settings/shop (admin): replaces the settings, the rebate tiers that checks use among them. */
 export async function saveShopSettings(ctx: AppContext, settings: ShopSettings, userId: number): Promise<ShopSettingsResponse> {
   // The rebate tiers are also what checks run with: drop the cached rule settings (even on failure, as they do).
-  await withWriteLock(ctx, (manager) =>
-    manager.getRepository(ShopSettingsRow).save({ id: ROW_ID, settings, updatedAt: new Date().toISOString(), updatedBy: userId }),
-  ).finally(() => forgetRulesSettings(ctx));
+  await withWriteLock(ctx, async (manager) => {
+    await manager.getRepository(ShopSettingsRow).save({ id: ROW_ID, settings, updatedAt: new Date().toISOString(), updatedBy: userId });
+    await settingsChanged(manager);
+  }).finally(() => forgetRulesSettings(ctx));
   return getShopSettings(ctx);
 }

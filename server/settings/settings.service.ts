@@ -6,22 +6,14 @@ import type { AppContext } from '../context';
 import { withWriteLock } from '../db/write-transaction';
 import { getShopSettings } from '../options/shop-settings.service';
 import { RuleSettingsRow } from './rule-settings.entity';
-import { rulesSettingsCache } from './rules-settings-cache';
+import { cachedRulesSettings, forgetRulesSettings, settingsChanged } from './rules-settings-cache';
 import { TransitionRuleRow } from './transition-rule.entity';
 
 const SETTINGS_ROW_ID = 1;
 
-const cache = rulesSettingsCache;
-
-/** The rule settings and transition rules checks run with (cached until the next save). */
+/** The rule settings and transition rules checks run with (cached until a save on any instance). */
 export function getRulesSettings(ctx: AppContext): Promise<RulesSettingsResponse> {
-  let pending = cache.get(ctx.dataSource);
-  if (!pending) {
-    pending = readRulesSettings(ctx);
-    cache.set(ctx.dataSource, pending);
-    pending.catch(() => cache.delete(ctx.dataSource));
-  }
-  return pending;
+  return cachedRulesSettings(ctx, () => readRulesSettings(ctx));
 }
 
 /** The context the rules engine takes. */
@@ -43,7 +35,8 @@ export async function saveRulesSettings(ctx: AppContext, body: RulesSettingsBody
     const rules = manager.getRepository(TransitionRuleRow);
     await rules.clear();
     if (body.transitionRules.length) await rules.insert(body.transitionRules.map(toRow));
-  }).finally(() => cache.delete(ctx.dataSource));
+    await settingsChanged(manager);
+  }).finally(() => forgetRulesSettings(ctx));
   return getRulesSettings(ctx);
 }
 

@@ -115,6 +115,26 @@ describe('the catalog versions, kept in memory', () => {
   });
 });
 
+describe('the rule and shop settings, kept in memory', () => {
+  it('when an admin saves the rules on A and the rebate tiers on A, then B checks and answers with them on its next request', async () => {
+    const admin = as(a.tokenFor('admin'));
+    const tech = as(a.tokenFor('tech'));
+    const before = (await request(b).get('/api/settings/rules').set(tech).expect(200)).body;
+    await request(b).get('/api/settings/rules').set(tech).expect(200);
+    const cfmPerTonMin = before.settings.cfmPerTonMin + 5;
+    await request(a.app)
+      .put('/api/settings/rules')
+      .set(admin)
+      .send({ settings: { ...before.settings, rebateTiers: undefined, cfmPerTonMin }, transitionRules: before.transitionRules })
+      .expect(200);
+    await vi.waitFor(async () => expect((await request(b).get('/api/settings/rules').set(tech).expect(200)).body.settings.cfmPerTonMin).toBe(cfmPerTonMin), { timeout: 2000, interval: 20 });
+    const shop = (await request(a.app).get('/api/settings/shop').set(admin).expect(200)).body.settings;
+    const tier = { name: 'Cache test tier (invented)', seer2: 16 };
+    await request(a.app).put('/api/settings/shop').set(admin).send({ ...shop, rebateTiers: [tier] }).expect(200);
+    await vi.waitFor(async () => expect((await request(b).get('/api/settings/rules').set(tech).expect(200)).body.settings.rebateTiers).toEqual([tier]), { timeout: 2000, interval: 20 });
+  });
+});
+
 describe.skipIf(!onPostgres)('when B loses its LISTEN connection', () => {
   it('then B reads every request through (a deactivation is still refused at once) and listens again afterwards', async () => {
     const { id, token } = await newUser('tech');
