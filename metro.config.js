@@ -1,5 +1,6 @@
 // Metro for the web export: Expo's defaults plus three aliases that keep the main bundle small.
 // Each one is a footgun entry in DEVELOPERS.md ("Bundle aliases").
+const fs = require('node:fs');
 const path = require('node:path');
 const { getDefaultConfig } = require('expo/metro-config');
 
@@ -33,9 +34,20 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
 
 module.exports = config;
 
-// Defer each import to its first use: boot evaluates only what the first screen touches.
+// Defer each import to its first use: boot evaluates only what the sign-in screen touches. Not for the
+// check screen and the engine (components/check/, shared/): deferred there, the rules and refrigerant tables
+// would be evaluated on the first tap on Check (budget 300 ms) instead of when the screen opens.
+const EAGER_DIRS = ['components/check', 'shared'];
+function* sourceFiles(dir) {
+  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
+    const full = path.join(dir, entry.name);
+    if (entry.isDirectory()) yield* sourceFiles(full);
+    else if (/\.(tsx?|jsx?)$/.test(entry.name)) yield full;
+  }
+}
+const blockList = Object.fromEntries(EAGER_DIRS.flatMap((dir) => [...sourceFiles(here(dir))]).map((file) => [file, true]));
 const getTransformOptions = config.transformer.getTransformOptions;
 config.transformer.getTransformOptions = async (...args) => {
   const options = await getTransformOptions(...args);
-  return { ...options, transform: { ...options.transform, inlineRequires: true } };
+  return { ...options, transform: { ...options.transform, inlineRequires: { blockList } } };
 };
