@@ -1,5 +1,4 @@
 import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
-import { useFonts } from 'expo-font';
 import { Stack } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
 import { useEffect, useState } from 'react';
@@ -7,19 +6,21 @@ import { ActivityIndicator, useColorScheme, View } from 'react-native';
 import { PaperProvider } from 'react-native-paper';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { ConnectionBanner } from '@/components/ui/connection-banner';
-import { darkTheme, FONT_FILES, lightTheme } from '@/constants/theme';
+import { darkTheme, lightTheme } from '@/constants/theme';
 import { createQueryClient } from '@/hooks/query-client';
 import { persistOptions } from '@/hooks/query-persistence';
 import { registerServiceWorker } from '@/hooks/register-service-worker';
 import { SessionProvider } from '@/hooks/use-session';
+import { useTextFonts } from '@/hooks/use-text-fonts';
 import { PAPER_SETTINGS } from '@/components/ui/paper-icon';
 
 /**
- * Root: the text fonts first (no flash of fallback text), then theme, data and session. The icon font
- * (1.3 MB) does not hold up the first screen: each icon loads it on its own and appears when it lands.
+ * Root: the text fonts first (no flash of fallback text; on the web they are declared, not awaited — see
+ * hooks/use-text-fonts.web.ts), then theme, data and session. The icon font (1.3 MB) does not hold up the
+ * first screen: each icon loads it on its own and appears when it lands.
  */
 export default function RootLayout() {
-  const [fontsLoaded] = useFonts(FONT_FILES);
+  const fontsLoaded = useTextFonts();
   const [queryClient] = useState(createQueryClient);
   const [persistence] = useState(persistOptions);
   const scheme = useColorScheme();

@@ -3,7 +3,7 @@
 // the export (JS, CSS, fonts including the icon font under assets/node_modules, icons) so the app
 // opens with no signal after one visit. The API is never cached: answers must be live or computed
 // on the phone, never stale copies.
-import { readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { generateSW } from 'workbox-build';
@@ -16,13 +16,30 @@ const HEAD_TAGS = [
   '<link rel="apple-touch-icon" href="/icons/apple-touch-icon.png" />',
 ];
 
-/** Adds the manifest/icon tags to index.html once (a rebuild over the same file does not repeat them). */
+/** Where the export puts our own assets/fonts (the text faces; the icon font sits under assets/node_modules). */
+const TEXT_FONTS_DIR = 'assets/assets/fonts';
+
+/**
+ * Preload tags for the text faces, so they download while the bundle runs: the web app declares them with
+ * font-display: block and does not wait for them (hooks/use-text-fonts.web.ts). `crossorigin` because the
+ * browser fetches fonts in CORS mode; a preload without it is fetched twice.
+ */
+export function fontPreloadTags(outDir) {
+  const dir = path.join(outDir, TEXT_FONTS_DIR);
+  if (!existsSync(dir)) return [];
+  return readdirSync(dir)
+    .filter((name) => name.endsWith('.ttf'))
+    .sort()
+    .map((name) => `<link rel="preload" href="/${TEXT_FONTS_DIR}/${name}" as="font" type="font/ttf" crossorigin />`);
+}
+
+/** Adds the manifest/icon/font tags to index.html once (a rebuild over the same file does not repeat them). */
 export function linkManifest(outDir) {
   const file = path.join(outDir, 'index.html');
   let html = readFileSync(file, 'utf8');
   // Expo writes its own theme-color from app.json; keep one.
   html = html.replace(/<meta name="theme-color"[^>]*>\s*/g, '');
-  const missing = HEAD_TAGS.filter((tag) => !html.includes(tag));
+  const missing = [...HEAD_TAGS, ...fontPreloadTags(outDir)].filter((tag) => !html.includes(tag));
   if (missing.length) html = html.replace('</head>', `${missing.join('')}</head>`);
   writeFileSync(file, html);
 }

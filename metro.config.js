@@ -1,0 +1,53 @@
+// Metro for the web export: Expo's defaults plus three aliases that keep the main bundle small.
+// Each one is a footgun entry in DEVELOPERS.md ("Bundle aliases").
+const fs = require('node:fs');
+const path = require('node:path');
+const { getDefaultConfig } = require('expo/metro-config');
+
+const config = getDefaultConfig(__dirname);
+const here = (file) => path.join(__dirname, file);
+
+/** zod's barrel of every locale → English only (zod's classic, mini and core entries all re-export it). */
+const ZOD_LOCALES = `${path.sep}node_modules${path.sep}zod${path.sep}v4${path.sep}`;
+/** Paper's icon font glyph map (~7,000 names) → the names the app and Paper use (scripts/icon-subset.mjs). */
+const MCI_GLYPHS = 'glyphmaps/MaterialCommunityIcons.json';
+/**
+ * npm keeps three copies of TanStack's query-core (react-query's 5.108, the persister's 5.104.x) and two of
+ * the persist-client core: one of each is enough, and one QueryClient class is what the providers expect.
+ */
+const SINGLE_COPY = {
+  '@tanstack/query-core': here('node_modules/@tanstack/react-query/package.json'),
+  '@tanstack/query-persist-client-core': here('node_modules/@tanstack/react-query-persist-client/package.json'),
+};
+
+config.resolver.resolveRequest = (context, moduleName, platform) => {
+  if (moduleName === '../locales/index.js' && context.originModulePath.includes(ZOD_LOCALES)) {
+    return { type: 'sourceFile', filePath: here('metro-shims/zod-locales-en.js') };
+  }
+  if (moduleName.endsWith(MCI_GLYPHS)) {
+    return { type: 'sourceFile', filePath: here('assets/fonts/material-community-glyphs.json') };
+  }
+  const singleFrom = SINGLE_COPY[moduleName];
+  if (singleFrom) return context.resolveRequest({ ...context, originModulePath: singleFrom }, moduleName, platform);
+  return context.resolveRequest(context, moduleName, platform);
+};
+
+module.exports = config;
+
+// Defer each import to its first use: boot evaluates only what the sign-in screen touches. Not for the
+// check screen and the engine (components/check/, shared/): deferred there, the rules and refrigerant tables
+// would be evaluated on the first tap on Check (budget 300 ms) instead of when the screen opens.
+const EAGER_DIRS = ['components/check', 'shared'];
+function* sourceFiles(dir) {
+  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
+    const full = path.join(dir, entry.name);
+    if (entry.isDirectory()) yield* sourceFiles(full);
+    else if (/\.(tsx?|jsx?)$/.test(entry.name)) yield full;
+  }
+}
+const blockList = Object.fromEntries(EAGER_DIRS.flatMap((dir) => [...sourceFiles(here(dir))]).map((file) => [file, true]));
+const getTransformOptions = config.transformer.getTransformOptions;
+config.transformer.getTransformOptions = async (...args) => {
+  const options = await getTransformOptions(...args);
+  return { ...options, transform: { ...options.transform, inlineRequires: { blockList } } };
+};
