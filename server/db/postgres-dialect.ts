@@ -1,32 +1,9 @@
 import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 import type { DatabaseDialect, UserRow } from './dialect';
 
-// PostgreSQL takes at most 65535 parameters a statement; stay well under it.
-const MAX_PARAMS = 30_000;
-const MAX_ROWS = 2_000;
-
 const quote = (name: string) => `"${name}"`;
 
-function rowsPerStatement(columnCount: number): number {
-  return Math.max(1, Math.min(MAX_ROWS, Math.floor(MAX_PARAMS / columnCount)));
-}
-
-function* batches<T>(items: T[], size: number): Generator<T[]> {
-  for (let i = 0; i < items.length; i += size) yield items.slice(i, i + size);
-}
-
-/** `($1, $2), ($3, $4)…` for rows of `width` values; `cast` adds each column's type to the first row. */
-function valuesList(rowCount: number, width: number, cast?: string[]): string {
-  const out: string[] = [];
-  for (let r = 0; r < rowCount; r++) {
-    const cells: string[] = [];
-    for (let c = 0; c < width; c++) cells.push(`$${r * width + c + 1}${r === 0 && cast ? `::${cast[c]}` : ''}`);
-    out.push(`(${cells.join(', ')})`);
-  }
-  return out.join(', ');
-}
-
-/** The SQL types of an entity's columns, as PostgreSQL names them (for casting VALUES lists). */
+/** The SQL types of an entity's columns, as PostgreSQL names them (for casting array parameters). */
 function columnTypes<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, names: string[]): string[] {
   const metadata = manager.connection.getMetadata(entity);
   return names.map((name) => {
@@ -36,9 +13,25 @@ function columnTypes<T extends ObjectLiteral>(manager: EntityManager, entity: En
   });
 }
 
+/** Row-major parameter rows as one array per column (what unnest takes). */
+function byColumn(rows: unknown[][], width: number): unknown[][] {
+  const columns: unknown[][] = [];
+  for (let c = 0; c < width; c++) columns.push(new Array(rows.length));
+  for (let r = 0; r < rows.length; r++) {
+    const row = rows[r];
+    for (let c = 0; c < width; c++) columns[c][r] = row[c];
+  }
+  return columns;
+}
+
+/** `unnest($1::integer[], $2::character varying[], …)`: one array parameter per column, however many rows. */
+const unnestOf = (types: string[]) => `unnest(${types.map((t, i) => `$${i + 1}::${t}[]`).join(', ')})`;
+
 /**
- * PostgreSQL: rows go in as multi-row INSERT/UPDATE … FROM (VALUES …) statements of up to 2,000 rows,
- * one round trip each, on the manager's own connection (so inside its transaction).
+ * PostgreSQL: the rows of a call go in as ONE statement whatever their number, with one array
+ * parameter per column (INSERT … SELECT FROM unnest(…), UPDATE … FROM unnest(…)): a short statement
+ * PostgreSQL parses and plans once, instead of a VALUES list of thousands of parameters. One round
+ * trip on the manager's own connection (so inside its transaction).
  */
 export const postgresDialect: DatabaseDialect = {
   name: 'postgres',
@@ -49,24 +42,21 @@ export const postgresDialect: DatabaseDialect = {
   },
 
   async insertRows(manager, entity, columns, rows) {
+    if (rows.length === 0) return;
     const table = manager.connection.getMetadata(entity).tableName;
-    const head = `INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) VALUES `;
-    for (const batch of batches(rows, rowsPerStatement(columns.length))) {
-      await manager.query(head + valuesList(batch.length, columns.length), batch.flat());
-    }
+    const names = columns.map(quote).join(', ');
+    await manager.query(`INSERT INTO ${quote(table)} (${names}) SELECT * FROM ${unnestOf(columnTypes(manager, entity, columns))}`, byColumn(rows, columns.length));
   },
 
   async updateRowsById(manager, entity, columns, rows, keepWhenNull = []) {
+    if (rows.length === 0) return;
     const table = manager.connection.getMetadata(entity).tableName;
-    const casts = columnTypes(manager, entity, ['id', ...columns]);
+    const all = ['id', ...columns];
     const sets = columns.map((c) => (keepWhenNull.includes(c) ? `${quote(c)} = COALESCE(v.${quote(c)}, t.${quote(c)})` : `${quote(c)} = v.${quote(c)}`));
-    const names = ['id', ...columns].map(quote).join(', ');
-    for (const batch of batches(rows, rowsPerStatement(columns.length + 1))) {
-      await manager.query(
-        `UPDATE ${quote(table)} AS t SET ${sets.join(', ')} FROM (VALUES ${valuesList(batch.length, columns.length + 1, casts)}) AS v(${names}) WHERE t."id" = v."id"`,
-        batch.flat(),
-      );
-    }
+    await manager.query(
+      `UPDATE ${quote(table)} AS t SET ${sets.join(', ')} FROM ${unnestOf(columnTypes(manager, entity, all))} AS v(${all.map(quote).join(', ')}) WHERE t."id" = v."id"`,
+      byColumn(rows, all.length),
+    );
   },
 
   async catalogVersions(dataSource) {
