@@ -37,12 +37,12 @@ async function main() {
     const file = path.join(dir, 'prices.csv');
     writeFileSync(file, priceCsv(100_000));
     for (let i = 0; i < n; i++) {
-      let s = { seconds: NaN, rows: 0 };
+      let s = { seconds: NaN, cpuSeconds: NaN, rows: 0 };
       if (which !== 'pg') {
         for (const suffix of ['', '-wal', '-shm']) rmSync(path.join(dir, `real.sqlite${suffix}`), { force: true });
         s = await realImport(dir, file);
       }
-      let p = { seconds: NaN, rows: 0 };
+      let p = { seconds: NaN, cpuSeconds: NaN, rows: 0 };
       let pgCpu = NaN;
       if (which !== 'sqlite') {
         const admin = new pg.Client({ connectionString: cluster.url });
@@ -59,7 +59,8 @@ async function main() {
         p = await realImport(dir, file, url.toString());
         pgCpu = treeCpuS(postmaster) - before;
       }
-      console.log(JSON.stringify({ sqliteS: s.seconds, pgS: p.seconds, ratio: p.seconds / s.seconds, pgServerCpuS: pgCpu, rows: [s.rows, p.rows] }));
+      const r = (x: number) => Math.round(x * 100) / 100;
+      console.log(JSON.stringify({ sqliteS: r(s.seconds), sqliteCpuS: r(s.cpuSeconds), pgS: r(p.seconds), pgNodeCpuS: r(p.cpuSeconds), pgServerCpuS: r(pgCpu), ratio: r(p.seconds / s.seconds), rows: [s.rows, p.rows] }));
     }
   } finally {
     rmSync(dir, { recursive: true, force: true });

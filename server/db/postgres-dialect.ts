@@ -24,14 +24,38 @@ function byColumn(rows: unknown[][], width: number): unknown[][] {
   return columns;
 }
 
-/** `unnest($1::integer[], $2::character varying[], …)`: one array parameter per column, however many rows. */
-const unnestOf = (types: string[]) => `unnest(${types.map((t, i) => `$${i + 1}::${t}[]`).join(', ')})`;
+const NEEDS_ESCAPE = /["\\]/;
+
+/**
+ * A column's values as PostgreSQL's array text (`{"a","b \"c\"",NULL,3}`), built here rather than
+ * by pg when the statement is sent: the caller can build the next batch's while PostgreSQL still runs
+ * this one. Values other than strings, numbers, booleans and null go to pg as they are.
+ */
+function arrayText(values: unknown[]): unknown {
+  const parts = new Array<string>(values.length);
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (v === null || v === undefined) parts[i] = 'NULL';
+    else if (typeof v === 'string') parts[i] = NEEDS_ESCAPE.test(v) ? `"${v.replace(/["\\]/g, '\\$&')}"` : `"${v}"`;
+    else if (typeof v === 'number' || typeof v === 'boolean') parts[i] = String(v);
+    else return values;
+  }
+  return `{${parts.join(',')}}`;
+}
+
+/** Whether every row holds the same value in this column (an import's own id, its distributor…). */
+function isConstant(values: unknown[]): boolean {
+  for (let i = 1; i < values.length; i++) if (values[i] !== values[0]) return false;
+  return true;
+}
 
 /**
  * PostgreSQL: the rows of a call go in as ONE statement whatever their number, with one array
  * parameter per column (INSERT … SELECT FROM unnest(…), UPDATE … FROM unnest(…)): a short statement
- * PostgreSQL parses and plans once, instead of a VALUES list of thousands of parameters. One round
- * trip on the manager's own connection (so inside its transaction).
+ * PostgreSQL parses and plans once, instead of a VALUES list of thousands of parameters. A column
+ * with one value in every row (the import's id) goes as a single parameter. One round trip on the
+ * manager's own connection (so inside its transaction); the arrays are built when the call is made,
+ * so a caller that does not wait for one call before the next overlaps its work with PostgreSQL's.
  */
 export const postgresDialect: DatabaseDialect = {
   name: 'postgres',
@@ -44,19 +68,32 @@ export const postgresDialect: DatabaseDialect = {
   async insertRows(manager, entity, columns, rows) {
     if (rows.length === 0) return;
     const table = manager.connection.getMetadata(entity).tableName;
-    const names = columns.map(quote).join(', ');
-    await manager.query(`INSERT INTO ${quote(table)} (${names}) SELECT * FROM ${unnestOf(columnTypes(manager, entity, columns))}`, byColumn(rows, columns.length));
+    const types = columnTypes(manager, entity, columns);
+    const values = byColumn(rows, columns.length);
+    const params: unknown[] = [];
+    const arrays: { name: string; sql: string }[] = [];
+    const select = columns.map((column, i) => {
+      // At least one column stays an array: it is what gives the statement its rows.
+      if (rows.length > 1 && (arrays.length > 0 || i < columns.length - 1) && isConstant(values[i])) {
+        params.push(values[i][0]);
+        return `$${params.length}::${types[i]}`;
+      }
+      params.push(arrayText(values[i]));
+      arrays.push({ name: quote(column), sql: `$${params.length}::${types[i]}[]` });
+      return `u.${quote(column)}`;
+    });
+    const from = `unnest(${arrays.map((a) => a.sql).join(', ')}) AS u(${arrays.map((a) => a.name).join(', ')})`;
+    await manager.query(`INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) SELECT ${select.join(', ')} FROM ${from}`, params);
   },
 
   async updateRowsById(manager, entity, columns, rows, keepWhenNull = []) {
     if (rows.length === 0) return;
     const table = manager.connection.getMetadata(entity).tableName;
     const all = ['id', ...columns];
+    const types = columnTypes(manager, entity, all);
     const sets = columns.map((c) => (keepWhenNull.includes(c) ? `${quote(c)} = COALESCE(v.${quote(c)}, t.${quote(c)})` : `${quote(c)} = v.${quote(c)}`));
-    await manager.query(
-      `UPDATE ${quote(table)} AS t SET ${sets.join(', ')} FROM ${unnestOf(columnTypes(manager, entity, all))} AS v(${all.map(quote).join(', ')}) WHERE t."id" = v."id"`,
-      byColumn(rows, all.length),
-    );
+    const from = `unnest(${types.map((t, i) => `$${i + 1}::${t}[]`).join(', ')}) AS v(${all.map(quote).join(', ')})`;
+    await manager.query(`UPDATE ${quote(table)} AS t SET ${sets.join(', ')} FROM ${from} WHERE t."id" = v."id"`, byColumn(rows, all.length).map(arrayText));
   },
 
   async catalogVersions(dataSource) {

@@ -64,13 +64,29 @@ export async function applyPricePlan(manager: EntityManager, distributorId: numb
   }, (rows) => dialect.insertRows(manager, ImportChange, CHANGE_COLUMNS, rows));
 }
 
-/** Writes items a slice at a time as parameter rows, letting other requests in between slices. */
+/**
+ * Writes items a slice at a time as parameter rows, letting other requests in between slices. A slice
+ * is built while the one before it is still being written (PostgreSQL works on its own process then;
+ * SQLite's writes are done by the time write returns), and at most one write is in flight.
+ */
 async function inSlicesOf<T>(items: T[], toRow: (item: T) => unknown[], write: (rows: unknown[][]) => Promise<void>): Promise<void> {
-  for (let i = 0; i < items.length; i += ROWS_PER_SLICE) {
-    if (i > 0) await nextTurn();
-    const end = Math.min(items.length, i + ROWS_PER_SLICE);
-    const rows: unknown[][] = new Array(end - i);
-    for (let j = i; j < end; j++) rows[j - i] = toRow(items[j]);
-    await write(rows);
+  const inFlight: Promise<void>[] = [];
+  try {
+    for (let i = 0; i < items.length; i += ROWS_PER_SLICE) {
+      if (i > 0) await nextTurn();
+      const end = Math.min(items.length, i + ROWS_PER_SLICE);
+      const rows: unknown[][] = new Array(end - i);
+      for (let j = i; j < end; j++) rows[j - i] = toRow(items[j]);
+      const written = write(rows);
+      // Observed at once so a failure is not reported as unhandled while the write before it is awaited.
+      written.catch(() => undefined);
+      inFlight.push(written);
+      if (inFlight.length > 1) await inFlight.shift();
+    }
+    if (inFlight.length > 0) await inFlight.shift();
+  } catch (err) {
+    // The transaction fails as a whole: let the write still queued settle before the caller rolls back.
+    await Promise.allSettled(inFlight);
+    throw err;
   }
 }

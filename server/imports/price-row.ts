@@ -73,6 +73,21 @@ export function quickPriceRow(input: Record<string, string>, today: string, conv
   return quickPriceFields(input.model, read.cents, input.effectiveFrom, input.description, input.currency, today);
 }
 
+// A file repeats a few effective dates many times: each is checked once, and every row shares one
+// string for it (100k copies of "2025-01-01" are a lot of garbage-collector work). Bounded: cleared when full.
+const KNOWN_DATES = new Map<string, string>();
+const MAX_KNOWN_DATES = 4096;
+
+/** The date itself (a shared copy) when it is a real ISO calendar date, else undefined. */
+function realDate(value: string): string | undefined {
+  const known = KNOWN_DATES.get(value);
+  if (known !== undefined) return known;
+  if (!isRealIsoDate(value)) return undefined;
+  if (KNOWN_DATES.size >= MAX_KNOWN_DATES) KNOWN_DATES.clear();
+  KNOWN_DATES.set(value, value);
+  return value;
+}
+
 /**
  * quickPriceRow for a price already read to cents (PriceColumn reads the column once): the row's
  * cells as written (undefined when blank), or null when any of them needs the schema.
@@ -88,8 +103,8 @@ export function quickPriceFields(
   const model = trimmed(modelCell);
   if (model === undefined || model.length > 80) return null;
   if (!Number.isInteger(cents) || cents <= 0 || cents > MAX_PRICE_CENTS) return null;
-  const effectiveFrom = trimmed(effectiveCell) ?? today;
-  if (!isRealIsoDate(effectiveFrom)) return null;
+  const effectiveFrom = realDate(trimmed(effectiveCell) ?? today);
+  if (effectiveFrom === undefined) return null;
   const description = trimmed(descriptionCell);
   if (description !== undefined && description.length > 300) return null;
   const currency = trimmed(currencyCell)?.toUpperCase() ?? 'USD';
