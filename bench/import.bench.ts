@@ -43,7 +43,7 @@ async function baseline(dir: string, file: string): Promise<number> {
 }
 
 /** The real import in a process of its own, so its peak RSS is the import's alone (bench/import-run.ts). */
-export function realImport(dir: string, file: string, databaseUrl?: string): Promise<{ seconds: number; peakRssMb: number; rows: number }> {
+export function realImport(dir: string, file: string, databaseUrl?: string): Promise<{ seconds: number; cpuSeconds: number; peakRssMb: number; rows: number }> {
   const root = path.resolve(__dirname, '..');
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'import-run.ts'), dir, file, ...(databaseUrl ? [databaseUrl] : [])], {

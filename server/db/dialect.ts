@@ -20,7 +20,7 @@ export interface DatabaseDialect {
   readonly name: 'sqlite' | 'postgres';
   /** One user by id: read on every authenticated request, so no query builder. */
   userById(dataSource: DataSource, id: number): Promise<UserRow | null>;
-  /** Many rows into one table inside the manager's transaction (prepared statement / multi-row INSERTs). */
+  /** Many rows into one table inside the manager's transaction (a prepared statement / one unnest INSERT). */
   insertRows<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, columns: (keyof T & string)[], rows: unknown[][]): Promise<void>;
   /**
    * Updates rows by id: each row is `[id, ...values of columns]`; a column in `keepWhenNull` keeps its

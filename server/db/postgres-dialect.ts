@@ -3,32 +3,9 @@ import type { DatabaseDialect, UserRow } from './dialect';
 import { rowQuerySql } from './row-query';
 import { listenerConfig, PostgresChangeListener } from './postgres-change-listener';
 
-// PostgreSQL takes at most 65535 parameters a statement; stay well under it.
-const MAX_PARAMS = 30_000;
-const MAX_ROWS = 2_000;
-
 const quote = (name: string) => `"${name}"`;
 
-function rowsPerStatement(columnCount: number): number {
-  return Math.max(1, Math.min(MAX_ROWS, Math.floor(MAX_PARAMS / columnCount)));
-}
-
-function* batches<T>(items: T[], size: number): Generator<T[]> {
-  for (let i = 0; i < items.length; i += size) yield items.slice(i, i + size);
-}
-
-/** `($1, $2), ($3, $4)…` for rows of `width` values; `cast` adds each column's type to the first row. */
-function valuesList(rowCount: number, width: number, cast?: string[]): string {
-  const out: string[] = [];
-  for (let r = 0; r < rowCount; r++) {
-    const cells: string[] = [];
-    for (let c = 0; c < width; c++) cells.push(`$${r * width + c + 1}${r === 0 && cast ? `::${cast[c]}` : ''}`);
-    out.push(`(${cells.join(', ')})`);
-  }
-  return out.join(', ');
-}
-
-/** The SQL types of an entity's columns, as PostgreSQL names them (for casting VALUES lists). */
+/** The SQL types of an entity's columns, as PostgreSQL names them (for casting array parameters). */
 function columnTypes<T extends ObjectLiteral>(manager: EntityManager, entity: EntityTarget<T>, names: string[]): string[] {
   const metadata = manager.connection.getMetadata(entity);
   return names.map((name) => {
@@ -38,9 +15,49 @@ function columnTypes<T extends ObjectLiteral>(manager: EntityManager, entity: En
   });
 }
 
+/** Row-major parameter rows as one array per column (what unnest takes). */
+function byColumn(rows: unknown[][], width: number): unknown[][] {
+  const columns: unknown[][] = [];
+  for (let c = 0; c < width; c++) columns.push(new Array(rows.length));
+  for (let r = 0; r < rows.length; r++) {
+    const row = rows[r];
+    for (let c = 0; c < width; c++) columns[c][r] = row[c];
+  }
+  return columns;
+}
+
+const NEEDS_ESCAPE = /["\\]/;
+
 /**
- * PostgreSQL: rows go in as multi-row INSERT/UPDATE … FROM (VALUES …) statements of up to 2,000 rows,
- * one round trip each, on the manager's own connection (so inside its transaction).
+ * A column's values as PostgreSQL's array text (`{"a","b \"c\"",NULL,3}`), built here rather than
+ * by pg when the statement is sent: the caller can build the next batch's while PostgreSQL still runs
+ * this one. Values other than strings, numbers, booleans and null go to pg as they are.
+ */
+function arrayText(values: unknown[]): unknown {
+  const parts = new Array<string>(values.length);
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (v === null || v === undefined) parts[i] = 'NULL';
+    else if (typeof v === 'string') parts[i] = NEEDS_ESCAPE.test(v) ? `"${v.replace(/["\\]/g, '\\$&')}"` : `"${v}"`;
+    else if (typeof v === 'number' || typeof v === 'boolean') parts[i] = String(v);
+    else return values;
+  }
+  return `{${parts.join(',')}}`;
+}
+
+/** Whether every row holds the same value in this column (an import's own id, its distributor…). */
+function isConstant(values: unknown[]): boolean {
+  for (let i = 1; i < values.length; i++) if (values[i] !== values[0]) return false;
+  return true;
+}
+
+/**
+ * PostgreSQL: the rows of a call go in as ONE statement whatever their number, with one array
+ * parameter per column (INSERT … SELECT FROM unnest(…), UPDATE … FROM unnest(…)): a short statement
+ * PostgreSQL parses and plans once, instead of a VALUES list of thousands of parameters. A column
+ * with one value in every row (the import's id) goes as a single parameter. One round trip on the
+ * manager's own connection (so inside its transaction); the arrays are built when the call is made,
+ * so a caller that does not wait for one call before the next overlaps its work with PostgreSQL's.
  */
 export const postgresDialect: DatabaseDialect = {
   name: 'postgres',
@@ -51,24 +68,34 @@ export const postgresDialect: DatabaseDialect = {
   },
 
   async insertRows(manager, entity, columns, rows) {
+    if (rows.length === 0) return;
     const table = manager.connection.getMetadata(entity).tableName;
-    const head = `INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) VALUES `;
-    for (const batch of batches(rows, rowsPerStatement(columns.length))) {
-      await manager.query(head + valuesList(batch.length, columns.length), batch.flat());
-    }
+    const types = columnTypes(manager, entity, columns);
+    const values = byColumn(rows, columns.length);
+    const params: unknown[] = [];
+    const arrays: { name: string; sql: string }[] = [];
+    const select = columns.map((column, i) => {
+      // At least one column stays an array: it is what gives the statement its rows.
+      if (rows.length > 1 && (arrays.length > 0 || i < columns.length - 1) && isConstant(values[i])) {
+        params.push(values[i][0]);
+        return `$${params.length}::${types[i]}`;
+      }
+      params.push(arrayText(values[i]));
+      arrays.push({ name: quote(column), sql: `$${params.length}::${types[i]}[]` });
+      return `u.${quote(column)}`;
+    });
+    const from = `unnest(${arrays.map((a) => a.sql).join(', ')}) AS u(${arrays.map((a) => a.name).join(', ')})`;
+    await manager.query(`INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) SELECT ${select.join(', ')} FROM ${from}`, params);
   },
 
   async updateRowsById(manager, entity, columns, rows, keepWhenNull = []) {
+    if (rows.length === 0) return;
     const table = manager.connection.getMetadata(entity).tableName;
-    const casts = columnTypes(manager, entity, ['id', ...columns]);
+    const all = ['id', ...columns];
+    const types = columnTypes(manager, entity, all);
     const sets = columns.map((c) => (keepWhenNull.includes(c) ? `${quote(c)} = COALESCE(v.${quote(c)}, t.${quote(c)})` : `${quote(c)} = v.${quote(c)}`));
-    const names = ['id', ...columns].map(quote).join(', ');
-    for (const batch of batches(rows, rowsPerStatement(columns.length + 1))) {
-      await manager.query(
-        `UPDATE ${quote(table)} AS t SET ${sets.join(', ')} FROM (VALUES ${valuesList(batch.length, columns.length + 1, casts)}) AS v(${names}) WHERE t."id" = v."id"`,
-        batch.flat(),
-      );
-    }
+    const from = `unnest(${types.map((t, i) => `$${i + 1}::${t}[]`).join(', ')}) AS v(${all.map(quote).join(', ')})`;
+    await manager.query(`UPDATE ${quote(table)} AS t SET ${sets.join(', ')} FROM ${from} WHERE t."id" = v."id"`, byColumn(rows, all.length).map(arrayText));
   },
 
   async catalogVersions(dataSource) {

@@ -1,3 +1,4 @@
+import { isUtf8 } from 'node:buffer';
 import { AppError } from '../lib/errors';
 
 /**
@@ -61,12 +62,10 @@ function decode(buffer: Buffer): string {
   if (buffer[0] === 0xff && buffer[1] === 0xfe) return strict('utf-16le', buffer.subarray(2));
   if (buffer[0] === 0xfe && buffer[1] === 0xff) return strict('utf-16be', buffer.subarray(2));
   if (buffer[0] === 0xef && buffer[1] === 0xbb && buffer[2] === 0xbf) return strict('utf-8', buffer.subarray(3));
-  try {
-    return new TextDecoder('utf-8', { fatal: true }).decode(buffer);
-  } catch {
-    // Windows-1252 (older spreadsheet exports): every byte is a character, so the control share decides below.
-    return windows1252.decode(buffer);
-  }
+  // isUtf8 validates without building a string (SIMD in Node); a valid buffer then decodes the same either way.
+  if (isUtf8(buffer)) return buffer.toString('utf8');
+  // Windows-1252 (older spreadsheet exports): every byte is a character, so the control share decides below.
+  return windows1252.decode(buffer);
 }
 
 /** Windows-1252's letters at 0x80–0x9F (WHATWG Encoding index); Node's small ICU decodes that range as Latin-1 controls. */

@@ -1,9 +1,9 @@
 import type { EntityManager } from 'typeorm';
 import type { CatalogKind } from '../../shared/schemas/equipment';
-import { normalizeModel } from '../../shared/schemas/fields';
 import { KINDS } from '../catalog/catalog-kinds';
 import { PriceEntry } from '../catalog/price-entry.entity';
 import { ImportChange } from './import-change.entity';
+import { normalizedModelOfPriceKey } from './import-parse';
 import type { ImportPlan } from './import-plan';
 import { dialectOf } from '../db/dialect';
 
@@ -11,14 +11,6 @@ const BATCH = 500;
 /** Rows written between two yields to the event loop (a few ms), so checks are answered during a large commit. */
 const ROWS_PER_SLICE = 2000;
 const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
-
-/** Writes rows a slice at a time, letting other requests in between slices. */
-async function inSlices(rows: unknown[][], write: (slice: unknown[][]) => Promise<void>): Promise<void> {
-  for (let i = 0; i < rows.length; i += ROWS_PER_SLICE) {
-    if (i > 0) await nextTurn();
-    await write(rows.slice(i, i + ROWS_PER_SLICE));
-  }
-}
 
 function chunks<T>(items: T[], size = BATCH): T[][] {
   const out: T[][] = [];
@@ -44,42 +36,57 @@ export async function applyCatalogPlan(manager: EntityManager, kind: CatalogKind
   for (const batch of chunks(changes)) await manager.insert(ImportChange, batch);
 }
 
+const PRICE_INSERT_COLUMNS: (keyof PriceEntry & string)[] = ['distributorId', 'model', 'normalizedModel', 'priceCents', 'currency', 'effectiveFrom', 'description', 'importId'];
+const PRICE_UPDATE_COLUMNS: (keyof PriceEntry & string)[] = ['model', 'priceCents', 'currency', 'description', 'importId'];
+const CHANGE_COLUMNS: (keyof ImportChange & string)[] = ['importId', 'entity', 'rowId', 'before', 'beforeImportId'];
+
 /**
  * Writes a price plan for one distributor through the database's bulk path (prepared statements on
- * SQLite, multi-row statements on PostgreSQL), yielding to the event loop every ROWS_PER_SLICE rows.
+ * SQLite, array-parameter statements on PostgreSQL), yielding to the event loop every ROWS_PER_SLICE
+ * rows. Each slice's parameters are built just before it is written (no copy of the whole file).
  * The caller holds the write lock and the transaction throughout, so other writers wait and a crash
  * still leaves all or nothing.
  */
 export async function applyPricePlan(manager: EntityManager, distributorId: number, plan: ImportPlan, importId: number): Promise<void> {
-  const entry = (v: Record<string, unknown>) => ({
-    distributorId,
-    model: String(v.model),
-    normalizedModel: normalizeModel(String(v.model)),
-    priceCents: v.price as number,
-    currency: String(v.currency),
-    effectiveFrom: String(v.effectiveFrom),
-    description: (v.description as string | undefined) ?? null,
-    importId,
-  });
-  const changes = plan.updates.map(({ existing }) => {
-    const { id, ...before } = existing;
-    return { importId, entity: 'price_entries', rowId: id, before: JSON.stringify(before), beforeImportId: existing.importId };
-  });
   const dialect = dialectOf(manager);
-  const insertColumns = ['distributorId', 'model', 'normalizedModel', 'priceCents', 'currency', 'effectiveFrom', 'description', 'importId'] as const;
-  await inSlices(plan.inserts.map((r) => {
-    const e = entry(r.values);
-    return insertColumns.map((c) => e[c]);
-  }), (rows) => dialect.insertRows(manager, PriceEntry, [...insertColumns], rows));
-  await inSlices(
-    plan.updates.map(({ row, existing }) => {
-      const e = entry(row.values);
-      return [existing.id, e.model, e.priceCents, e.currency, e.description, importId];
-    }),
-    (rows) => dialect.updateRowsById(manager, PriceEntry, ['model', 'priceCents', 'currency', 'description', 'importId'], rows, ['description']),
-  );
-  await inSlices(
-    changes.map((c) => [c.importId, c.entity, c.rowId, c.before, c.beforeImportId]),
-    (rows) => dialect.insertRows(manager, ImportChange, ['importId', 'entity', 'rowId', 'before', 'beforeImportId'], rows),
-  );
+  await inSlicesOf(plan.inserts, (row) => {
+    const v = row.values;
+    const description = v.description as string | undefined;
+    return [distributorId, v.model, normalizedModelOfPriceKey(row.key), v.price, v.currency, v.effectiveFrom, description ?? null, importId];
+  }, (rows) => dialect.insertRows(manager, PriceEntry, PRICE_INSERT_COLUMNS, rows));
+  await inSlicesOf(plan.updates, ({ row, existing }) => {
+    const v = row.values;
+    return [existing.id, v.model, v.price, v.currency, (v.description as string | undefined) ?? null, importId];
+  }, (rows) => dialect.updateRowsById(manager, PriceEntry, PRICE_UPDATE_COLUMNS, rows, ['description']));
+  await inSlicesOf(plan.updates, ({ existing }) => {
+    const { id, ...before } = existing;
+    return [importId, 'price_entries', id, JSON.stringify(before), existing.importId];
+  }, (rows) => dialect.insertRows(manager, ImportChange, CHANGE_COLUMNS, rows));
+}
+
+/**
+ * Writes items a slice at a time as parameter rows, letting other requests in between slices. A slice
+ * is built while the one before it is still being written (PostgreSQL works on its own process then;
+ * SQLite's writes are done by the time write returns), and at most one write is in flight.
+ */
+async function inSlicesOf<T>(items: T[], toRow: (item: T) => unknown[], write: (rows: unknown[][]) => Promise<void>): Promise<void> {
+  const inFlight: Promise<void>[] = [];
+  try {
+    for (let i = 0; i < items.length; i += ROWS_PER_SLICE) {
+      if (i > 0) await nextTurn();
+      const end = Math.min(items.length, i + ROWS_PER_SLICE);
+      const rows: unknown[][] = new Array(end - i);
+      for (let j = i; j < end; j++) rows[j - i] = toRow(items[j]);
+      const written = write(rows);
+      // Observed at once so a failure is not reported as unhandled while the write before it is awaited.
+      written.catch(() => undefined);
+      inFlight.push(written);
+      if (inFlight.length > 1) await inFlight.shift();
+    }
+    if (inFlight.length > 0) await inFlight.shift();
+  } catch (err) {
+    // The transaction fails as a whole: let the write still queued settle before the caller rolls back.
+    await Promise.allSettled(inFlight);
+    throw err;
+  }
 }

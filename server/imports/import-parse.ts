@@ -7,8 +7,8 @@ import { AppError } from '../lib/errors';
 import { decodeCsv, readCsv } from './csv-file';
 import { fieldsOf, matchHeaders, toSnake, type HeaderMatch } from './header-map';
 import type { ImportRowError } from './import.entity';
-import { detectConvention } from './price-number';
-import { priceRowSchema, quickPriceRow, type PriceRow } from './price-row';
+import { PriceColumn } from './price-number';
+import { priceRowSchema, quickPriceFields, quickPriceRow, type PriceRow } from './price-row';
 import { todayIso } from '../catalog/dates';
 
 /** A valid row: its line in the file, its key and the values of the fields the file has columns for. */
@@ -39,6 +39,36 @@ export interface ParsedFile {
 function keyOf(kind: ImportKind, values: Record<string, unknown>): string {
   if (kind === 'prices') return `${normalizeModel(String(values.model))}|${values.effectiveFrom}`;
   return Object.values(KINDS[kind].keyColumns(values)).join('|');
+}
+
+/** The normalised model of a price row, from its key (`${normalizedModel}|${YYYY-MM-DD}`). */
+export const normalizedModelOfPriceKey = (key: string) => key.slice(0, -11);
+
+/**
+ * The quick path for price rows, straight from the cells (no input object): a row whose every field
+ * is plainly valid and whose key is new goes to `accept` (which says whether it took it); anything
+ * else (a blank or odd cell, extra cells, a nameless model) returns false for the general path,
+ * which gives the same values or the row's errors.
+ */
+function quickPriceRowAt(
+  header: HeaderMatch,
+  column: PriceColumn,
+  convention: DecimalConvention | null,
+  today: string,
+  accept: (i: number, key: string, values: Record<string, unknown>) => boolean,
+): (i: number, cells: string[]) => boolean {
+  const at = (field: string) => header.columns.indexOf(field);
+  const [model, effectiveFrom, description, currency] = [at('model'), at('effectiveFrom'), at('description'), at('currency')];
+  const width = header.columns.length;
+  const cell = (cells: string[], index: number) => (index < 0 ? undefined : cells[index]);
+  return (i, cells) => {
+    if (cells.length > width) return false;
+    const cents = column.centsAt(i, convention);
+    if (cents === undefined) return false;
+    const values = quickPriceFields(cell(cells, model), cents, cell(cells, effectiveFrom), cell(cells, description), cell(cells, currency), today);
+    if (!values || !hasModelCharacters(values.model)) return false;
+    return accept(i, `${normalizeModel(values.model)}|${values.effectiveFrom}`, values);
+  };
 }
 
 /** The admin's choice of decimal mark for a price file, and the one remembered for its distributor. */
@@ -167,7 +197,10 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
     if (rowErrors.length > 0) report(rowErrors);
   };
 
-  const pending: { cells: string[]; line: number; problem?: string }[] = [];
+  // Rows as read, in parallel arrays (no object per row: a 100k-row file is mostly garbage-collector work).
+  const pendingCells: string[][] = [];
+  const pendingLines: number[] = [];
+  const problems = new Map<number, string>();
   let priceColumn = -1;
   // Rows are read whole first (a price file's decimal mark comes from its whole column), then validated in slices.
   const { rows: rowCount } = readCsv(text, {
@@ -179,7 +212,9 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
       priceColumn = kind === 'prices' ? header.columns.indexOf('price') : -1;
     },
     row(cells, line, problem) {
-      pending.push({ cells, line, problem });
+      if (problem) problems.set(pendingCells.length, problem);
+      pendingCells.push(cells);
+      pendingLines.push(line);
     },
   });
   yield;
@@ -188,17 +223,27 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
 
   let decimalConvention: DecimalConvention | null = null;
   let decimalSource: DecimalSource | null = null;
+  // Price files: the common row taken straight from its cells (true), else the general path below.
+  let quickPriceCells: ((i: number, cells: string[]) => boolean) | null = null;
   if (kind === 'prices') {
-    const detected = detectConvention(pending.map((p) => p.cells[priceColumn] ?? ''));
+    const column = new PriceColumn(pendingCells.length, (i) => pendingCells[i][priceColumn] ?? '');
+    const detected = column.detected;
     if (decimal.chosen) [decimalConvention, decimalSource] = [decimal.chosen, 'chosen'];
     else if (detected.convention) [decimalConvention, decimalSource] = [detected.convention, 'file'];
     else if (decimal.saved) [decimalConvention, decimalSource] = [decimal.saved, 'saved'];
     schema = asRowSchema(priceRowSchema(today, decimalConvention));
     const day = today ?? todayIso();
     quickRow = (input) => quickPriceRow(input, day, decimalConvention);
+    quickPriceCells = quickPriceRowAt(header, column, decimalConvention, day, (i, key, values) => {
+      if (firstLineOfKey.has(key)) return false;
+      firstLineOfKey.set(key, pendingLines[i]);
+      rows.push({ line: pendingLines[i], key, values });
+      return true;
+    });
   }
-  for (let i = 0; i < pending.length; i++) {
-    validate(pending[i].cells, pending[i].line, pending[i].problem);
+  for (let i = 0; i < pendingCells.length; i++) {
+    const problem = problems.size > 0 ? problems.get(i) : undefined;
+    if (problem !== undefined || quickPriceCells === null || !quickPriceCells(i, pendingCells[i])) validate(pendingCells[i], pendingLines[i], problem);
     if (i % ROWS_PER_SLICE === ROWS_PER_SLICE - 1) yield;
   }
   return { kind, rows, errors, errorsTotal, decimalConvention, decimalSource, rowCount, rejected, presentFields, header };

@@ -1,10 +1,8 @@
 import type { EntityManager } from 'typeorm';
 import type { CatalogKind, ImportKind } from '../../shared/schemas/equipment';
-import { normalizeModel } from '../../shared/schemas/fields';
 import { EQUIPMENT_KINDS, KINDS } from '../catalog/catalog-kinds';
-import { PriceEntry } from '../catalog/price-entry.entity';
 import { sqliteHandle } from '../db/sqlite-handle';
-import type { ParsedRow } from './import-parse';
+import { normalizedModelOfPriceKey, type ParsedRow } from './import-parse';
 
 type Row = Record<string, unknown> & { id: number; importId: number | null };
 
@@ -36,59 +34,61 @@ export async function planCatalog(manager: EntityManager, kind: CatalogKind, row
 
 /** Rows looked up between two yields to the event loop while a price file is planned (a few ms of work). */
 const LOOKUPS_PER_SLICE = 1000;
+/** Keys per PostgreSQL lookup statement: one round trip for many rows, bounded in size. */
+const KEYS_PER_QUERY = 5000;
 const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
 
-const PRICE_COLUMNS = 'id, normalizedModel, effectiveFrom, priceCents, currency, description, model, importId';
+const PRICE_COLUMNS = ['id', 'normalizedModel', 'effectiveFrom', 'priceCents', 'currency', 'description', 'model', 'importId'] as const;
+const PRICE_SELECT = PRICE_COLUMNS.map((c) => `"${c}"`).join(', ');
+
+/** A distributor's stored entry under a price row's key, or undefined. */
+type StoredPrice = (row: ParsedRow) => Row | undefined;
+const nothingStored: StoredPrice = () => undefined;
 
 /**
- * Lookups for planning a price file: the distributor's stored entry under a row's key (a point
- * lookup on the unique index for each of the file's rows, rather than reading the distributor's
- * whole price history, which only grows: read whole, it held the event loop longer with every
- * commit, issue 8 fault 6) and whether a model is in the catalog (its models read once per file).
+ * Lookups for planning a price file, by the file's own keys only: never the distributor's whole
+ * price history, which only grows (read whole, it held the event loop longer with every commit,
+ * issue 8 fault 6). A distributor with nothing stored yet (its first file) needs no lookup at all.
+ * SQLite: a point lookup on the unique index per row, synchronous (no promise per row).
+ * PostgreSQL: the keys go in batches as two arrays joined to the unique index, one round trip each.
  */
-interface PriceLookups {
-  existing(normalizedModel: string, effectiveFrom: string): Row | undefined | Promise<Row | undefined>;
-  inCatalog(normalizedModel: string): boolean | Promise<boolean>;
-}
-
-async function priceLookups(manager: EntityManager, distributorId: number | null): Promise<PriceLookups> {
+async function storedPrices(manager: EntityManager, distributorId: number | null, rows: ParsedRow[]): Promise<StoredPrice> {
+  if (distributorId === null || rows.length === 0) return nothingStored;
   const raw = sqliteHandle(manager);
   if (raw) {
-    const entry = raw.prepare(`SELECT ${PRICE_COLUMNS} FROM price_entries WHERE distributorId = ? AND normalizedModel = ? AND effectiveFrom = ?`);
-    // The catalog's models, read once per file (bounded by the catalog, unlike the price history).
-    const models = new Set<string>();
-    for (const kind of EQUIPMENT_KINDS) {
-      for (const model of raw.prepare(`SELECT normalizedModel FROM ${KINDS[kind].table}`).pluck().all()) models.add(model as string);
-    }
-    // Synchronous on SQLite: no promise per row for a 100,000-row file.
-    return {
-      existing: (model, from) => (distributorId === null ? undefined : (entry.get(distributorId, model, from) as Row | undefined)),
-      inCatalog: (model) => models.has(model),
-    };
+    if (raw.prepare('SELECT 1 FROM "price_entries" WHERE "distributorId" = ? LIMIT 1').get(distributorId) === undefined) return nothingStored;
+    const entry = raw.prepare(`SELECT ${PRICE_SELECT} FROM "price_entries" WHERE "distributorId" = ? AND "normalizedModel" = ? AND "effectiveFrom" = ?`);
+    return (row) => entry.get(distributorId, normalizedModelOfPriceKey(row.key), String(row.values.effectiveFrom)) as Row | undefined;
   }
-  // PostgreSQL: a round trip per row would dominate, so the distributor's entries and the catalog's
-  // models are read once per file through the query builder (it quotes the camelCase aliases).
-  const existing: Row[] =
-    distributorId === null
-      ? []
-      : await PRICE_PLAN_COLUMNS.reduce((qb, c) => qb.addSelect(`p.${c}`, c), manager.getRepository(PriceEntry).createQueryBuilder('p').select('p.id', 'id'))
-          .where('p.distributorId = :distributorId', { distributorId })
-          .getRawMany();
-  const byKey = new Map(existing.map((e) => [`${String(e.normalizedModel)}|${String(e.effectiveFrom)}`, e]));
-  const models = new Set<string>();
-  for (const kind of EQUIPMENT_KINDS) {
-    const rows: { normalizedModel: string }[] = await manager
-      .getRepository(KINDS[kind].entity)
-      .createQueryBuilder('e')
-      .select('e.normalizedModel', 'normalizedModel')
-      .getRawMany();
-    for (const r of rows) models.add(r.normalizedModel);
+  const any = (await manager.query('SELECT 1 FROM "price_entries" WHERE "distributorId" = $1 LIMIT 1', [distributorId])) as unknown[];
+  if (any.length === 0) return nothingStored;
+  const byKey = new Map<string, Row>();
+  for (let i = 0; i < rows.length; i += KEYS_PER_QUERY) {
+    const batch = rows.slice(i, i + KEYS_PER_QUERY);
+    const found = (await manager.query(
+      `SELECT ${PRICE_COLUMNS.map((c) => `p."${c}"`).join(', ')} FROM "price_entries" p ` +
+        'JOIN unnest($2::text[], $3::text[]) AS k("normalizedModel", "effectiveFrom") ' +
+        'ON p."normalizedModel" = k."normalizedModel" AND p."effectiveFrom" = k."effectiveFrom" WHERE p."distributorId" = $1',
+      [distributorId, batch.map((r) => normalizedModelOfPriceKey(r.key)), batch.map((r) => String(r.values.effectiveFrom))],
+    )) as Row[];
+    for (const e of found) byKey.set(`${String(e.normalizedModel)}|${String(e.effectiveFrom)}`, e);
   }
-  return { existing: (model, from) => byKey.get(`${model}|${from}`), inCatalog: (model) => models.has(model) };
+  return (row) => byKey.get(row.key);
 }
 
-// Selected by property name so the raw rows keep camelCase keys on PostgreSQL too (TypeORM quotes them).
-const PRICE_PLAN_COLUMNS = ['normalizedModel', 'effectiveFrom', 'priceCents', 'currency', 'description', 'model', 'importId'] as const;
+/** The catalog's models (every equipment kind), read once per file: bounded by the catalog, unlike the price history. */
+async function catalogModels(manager: EntityManager): Promise<Set<string>> {
+  const models = new Set<string>();
+  const raw = sqliteHandle(manager);
+  for (const kind of EQUIPMENT_KINDS) {
+    const table = KINDS[kind].table;
+    const found = raw
+      ? (raw.prepare(`SELECT "normalizedModel" FROM "${table}"`).pluck().all() as string[])
+      : ((await manager.query(`SELECT "normalizedModel" FROM "${table}"`)) as { normalizedModel: string }[]).map((r) => r.normalizedModel);
+    for (const model of found) models.add(model);
+  }
+  return models;
+}
 
 /**
  * Plans a price import for one distributor (null: not yet created, so nothing exists). A blank
@@ -96,17 +96,15 @@ const PRICE_PLAN_COLUMNS = ['normalizedModel', 'effectiveFrom', 'priceCents', 'c
  * LOOKUPS_PER_SLICE rows so checks keep being answered while a large file is planned.
  */
 export async function planPrices(manager: EntityManager, distributorId: number | null, rows: ParsedRow[]): Promise<ImportPlan> {
-  const lookups = await priceLookups(manager, distributorId);
+  const stored = await storedPrices(manager, distributorId, rows);
+  const models = await catalogModels(manager);
   const plan: ImportPlan = { kind: 'prices', inserts: [], updates: [], unchanged: 0, unmatched: 0 };
   for (let i = 0; i < rows.length; i++) {
     if (i > 0 && i % LOOKUPS_PER_SLICE === 0) await nextTurn();
     const row = rows[i];
     const v = row.values;
-    const model = normalizeModel(String(v.model));
-    const listed = lookups.inCatalog(model);
-    if (!(listed instanceof Promise ? await listed : listed)) plan.unmatched++;
-    const stored = lookups.existing(model, String(v.effectiveFrom));
-    const found = stored instanceof Promise ? await stored : stored;
+    if (!models.has(normalizedModelOfPriceKey(row.key))) plan.unmatched++;
+    const found = stored(row);
     if (!found) plan.inserts.push(row);
     else if (found.priceCents === v.price && found.currency === v.currency && (v.description === undefined || same(found.description, v.description)))
       plan.unchanged++;

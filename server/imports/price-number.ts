@@ -98,8 +98,59 @@ export function detectConvention(cells: Iterable<string>): ColumnConvention {
     const reading = readPriceCell(cell);
     if (reading.kind === 'decides') votes[reading.convention]++;
   }
-  const convention = votes.point > votes.comma ? 'point' : votes.comma > votes.point ? 'comma' : null;
-  return { convention, votes };
+  return { convention: winner(votes), votes };
+}
+
+const winner = (votes: Record<DecimalConvention, number>): DecimalConvention | null =>
+  votes.point > votes.comma ? 'point' : votes.comma > votes.point ? 'comma' : null;
+
+// How a PriceColumn keeps each cell's reading: one byte a cell, no object per cell (100k-row files).
+const PLAIN = 1; // reads the same in both conventions
+const POINT = 2; // decides the point convention
+const COMMA = 3; // decides the comma convention
+// 0: blank, ambiguous or unreadable; read again through priceCents for its reason.
+
+/**
+ * A whole price column read once: the convention it shows (as detectConvention) and each cell's
+ * cents kept for the rows, so a cell is not parsed a second time when its row is validated.
+ */
+export class PriceColumn {
+  readonly detected: ColumnConvention;
+  private readonly kinds: Uint8Array;
+  private readonly cents: Float64Array;
+
+  /** `cellAt(i)` is row i's price cell ('' when the row has none). */
+  constructor(count: number, cellAt: (i: number) => string) {
+    this.kinds = new Uint8Array(count);
+    this.cents = new Float64Array(count);
+    const votes: Record<DecimalConvention, number> = { point: 0, comma: 0 };
+    for (let i = 0; i < count; i++) {
+      const cell = cellAt(i);
+      if (cell.trim() === '') continue;
+      const reading = readPriceCell(cell);
+      if (reading.kind === 'same') {
+        this.kinds[i] = PLAIN;
+        this.cents[i] = reading.cents;
+      } else if (reading.kind === 'decides') {
+        votes[reading.convention]++;
+        this.kinds[i] = reading.convention === 'point' ? POINT : COMMA;
+        this.cents[i] = reading.cents;
+      }
+    }
+    this.detected = { convention: winner(votes), votes };
+  }
+
+  /**
+   * Row i's cents when its cell plainly reads so under `convention` (what priceCents gives then);
+   * undefined when the cell needs priceCents itself: blank, ambiguous, unreadable, or the other convention.
+   */
+  centsAt(i: number, convention: DecimalConvention | null): number | undefined {
+    const kind = this.kinds[i];
+    if (kind === PLAIN) return this.cents[i];
+    if (kind === POINT && convention !== 'comma') return this.cents[i];
+    if (kind === COMMA && convention !== 'point') return this.cents[i];
+    return undefined;
+  }
 }
 
 const EXAMPLE: Record<DecimalConvention, string> = { point: '1,234.50', comma: '1.234,50' };

@@ -55,7 +55,11 @@ export function priceRowSchema(today = todayIso(), convention: DecimalConvention
 }
 export type PriceRow = z.infer<ReturnType<typeof priceRowSchema>>;
 
-const trimmed = (v: string | undefined) => (v === undefined ? undefined : v.trim() === '' ? undefined : v.trim());
+function trimmed(v: string | undefined): string | undefined {
+  if (v === undefined) return undefined;
+  const t = v.trim();
+  return t === '' ? undefined : t;
+}
 
 /**
  * The common case of a price row without zod: a row every field of which is plainly valid gives the
@@ -63,16 +67,48 @@ const trimmed = (v: string | undefined) => (v === undefined ? undefined : v.trim
  * reasons. Zod costs most of a 100k-row import (a property test keeps the two in step).
  */
 export function quickPriceRow(input: Record<string, string>, today: string, convention: DecimalConvention | null): PriceRow | null {
-  const model = trimmed(input.model);
-  if (model === undefined || model.length > 80) return null;
   if (input.price === undefined) return null;
   const read = priceCents(input.price, convention);
-  if ('error' in read || !Number.isInteger(read.cents) || read.cents <= 0 || read.cents > MAX_PRICE_CENTS) return null;
-  const effectiveFrom = trimmed(input.effectiveFrom) ?? today;
-  if (!isRealIsoDate(effectiveFrom)) return null;
-  const description = trimmed(input.description);
+  if ('error' in read) return null;
+  return quickPriceFields(input.model, read.cents, input.effectiveFrom, input.description, input.currency, today);
+}
+
+// A file repeats a few effective dates many times: each is checked once, and every row shares one
+// string for it (100k copies of "2025-01-01" are a lot of garbage-collector work). Bounded: cleared when full.
+const KNOWN_DATES = new Map<string, string>();
+const MAX_KNOWN_DATES = 4096;
+
+/** The date itself (a shared copy) when it is a real ISO calendar date, else undefined. */
+function realDate(value: string): string | undefined {
+  const known = KNOWN_DATES.get(value);
+  if (known !== undefined) return known;
+  if (!isRealIsoDate(value)) return undefined;
+  if (KNOWN_DATES.size >= MAX_KNOWN_DATES) KNOWN_DATES.clear();
+  KNOWN_DATES.set(value, value);
+  return value;
+}
+
+/**
+ * quickPriceRow for a price already read to cents (PriceColumn reads the column once): the row's
+ * cells as written (undefined when blank), or null when any of them needs the schema.
+ */
+export function quickPriceFields(
+  modelCell: string | undefined,
+  cents: number,
+  effectiveCell: string | undefined,
+  descriptionCell: string | undefined,
+  currencyCell: string | undefined,
+  today: string,
+): PriceRow | null {
+  const model = trimmed(modelCell);
+  if (model === undefined || model.length > 80) return null;
+  if (!Number.isInteger(cents) || cents <= 0 || cents > MAX_PRICE_CENTS) return null;
+  const effectiveFrom = realDate(trimmed(effectiveCell) ?? today);
+  if (effectiveFrom === undefined) return null;
+  const description = trimmed(descriptionCell);
   if (description !== undefined && description.length > 300) return null;
-  const currency = trimmed(input.currency)?.toUpperCase() ?? 'USD';
-  if (!/^[A-Z]{3}$/.test(currency)) return null;
-  return { model, price: read.cents, effectiveFrom, ...(description !== undefined ? { description } : {}), currency };
+  const currency = trimmed(currencyCell)?.toUpperCase() ?? 'USD';
+  if (currency !== 'USD' && !/^[A-Z]{3}$/.test(currency)) return null;
+  // The same keys, in the same order, as the schema's output (a row with no description has no key for it).
+  return description !== undefined ? { model, price: cents, effectiveFrom, description, currency } : { model, price: cents, effectiveFrom, currency };
 }

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { detectConvention, priceCents, readPriceCell } from '../../../server/imports/price-number';
+import { detectConvention, priceCents, PriceColumn, readPriceCell } from '../../../server/imports/price-number';
 import { priceRowSchema, quickPriceRow } from '../../../server/imports/price-row';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 
@@ -58,6 +58,22 @@ describe('price number properties', () => {
           const other = reading.convention === 'point' ? 'comma' : 'point';
           expect(priceCents(cell, other)).toHaveProperty('error');
         }
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it('when a price column is read once, then it detects what detectConvention does and each quick cell is what priceCents gives', () => {
+    const cell = fc.oneof(fc.stringMatching(/^[-$0-9.,' a-z]{0,14}$/), fc.constantFrom('', ' ', '12.50', '$1,234.50', '12,50', '1.234,50', '1,234', '1234', ' 99 '));
+    fc.assert(
+      fc.property(fc.array(cell, { maxLength: 40 }), fc.constantFrom('point' as const, 'comma' as const, null), (cells, convention) => {
+        const column = new PriceColumn(cells.length, (i) => cells[i]);
+        expect(column.detected).toEqual(detectConvention(cells));
+        cells.forEach((c, i) => {
+          const quick = column.centsAt(i, convention);
+          // A cell the column does not vouch for goes through priceCents itself, so only vouched cells must agree.
+          if (quick !== undefined) expect(priceCents(c, convention)).toEqual({ cents: quick });
+        });
       }),
       { numRuns: 500 },
     );
