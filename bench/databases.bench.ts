@@ -148,7 +148,7 @@ export async function run(): Promise<Measure[]> {
       unit: 's',
       baseline: round(sqliteImport.seconds, 3),
       ratio: round(pgImport.seconds / sqliteImport.seconds, 2),
-      note: `${IMPORT_ROWS.toLocaleString('en-US')}-row price file through the import service on PostgreSQL (multi-row INSERTs); baseline the same on SQLite in this run`,
+      note: `${IMPORT_ROWS.toLocaleString('en-US')}-row price file through the import service on PostgreSQL (INSERT … SELECT FROM unnest arrays); baseline the same on SQLite in this run`,
     });
     return measures;
   } finally {

@@ -115,7 +115,7 @@ export const postgresDialect: DatabaseDialect = {
   async insertRowReturningId(manager, entity, columns, values) {
     const table = manager.connection.getMetadata(entity).tableName;
     const rows = (await manager.query(
-      `INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) VALUES ${valuesList(1, columns.length)} RETURNING "id"`,
+      `INSERT INTO ${quote(table)} (${columns.map(quote).join(', ')}) VALUES (${columns.map((_, i) => `$${i + 1}`).join(', ')}) RETURNING "id"`,
       values,
     )) as { id: number }[];
     return Number(rows[0].id);
