@@ -9,6 +9,8 @@ import type { PriceSnapshot, RecordContent, ResolvedParts } from './system-types
  */
 @Entity('system_revisions')
 @Index(['systemId', 'revision'], { unique: true })
+// The revisions list in brief reads only this index (migration 1765440000000).
+@Index('IDX_system_revisions_brief', ['systemId', 'revision', 'id', 'status', 'verdict', 'savedAt', 'savedBy', 'finalizedBy', 'finalizedAt'])
 export class SystemRevisionRow {
   @PrimaryGeneratedColumn({ type: 'integer' }) id: number;
   @Column({ type: 'integer' }) systemId: number;

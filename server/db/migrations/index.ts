@@ -8,6 +8,7 @@ import { JobOptions1765200000000 } from './1765200000000-job-options';
 import { CatalogVersions1765300000000 } from './1765300000000-catalog-versions';
 import { ChangeNotify1765400000000 } from './1765400000000-change-notify';
 import { RebateTiersOneList1765430000000 } from './1765430000000-rebate-tiers-one-list';
+import { RevisionBriefIndex1765440000000 } from './1765440000000-revision-brief-index';
 
 /** Every migration, in order. Add new ones at the end (one file per change, named by timestamp). */
 export const migrations = [
@@ -21,4 +22,5 @@ export const migrations = [
   CatalogVersions1765300000000,
   ChangeNotify1765400000000,
   RebateTiersOneList1765430000000,
+  RevisionBriefIndex1765440000000,
 ];

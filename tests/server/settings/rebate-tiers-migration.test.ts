@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { CARRIED_TIER_NOTE } from '../../../server/db/migrations/1765430000000-rebate-tiers-one-list';
+import { migrations } from '../../../server/db/migrations';
+import { CARRIED_TIER_NOTE, RebateTiersOneList1765430000000 } from '../../../server/db/migrations/1765430000000-rebate-tiers-one-list';
 import { forgetRulesSettings } from '../../../server/settings/rules-settings-cache';
 import { sql } from '../../helpers/sql';
 import { useTestApp } from '../../helpers/fixture-app';
@@ -22,7 +23,10 @@ const clear = async () => {
   await sql(t.ctx.dataSource, 'DELETE FROM "rule_settings"');
   await sql(t.ctx.dataSource, 'DELETE FROM "shop_settings"');
 };
-const undo = () => t.ctx.dataSource.undoLastMigration({ transaction: 'all' });
+// Undo the later migrations too, then this one (redo runs them all again).
+const undo = async () => {
+  for (let i = migrations.indexOf(RebateTiersOneList1765430000000); i < migrations.length; i++) await t.ctx.dataSource.undoLastMigration({ transaction: 'all' });
+};
 const redo = () => t.ctx.dataSource.runMigrations({ transaction: 'all' });
 
 // Tier figures are invented shop thresholds (no source).
