@@ -1,8 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { KindIndex } from '../catalog/catalog-index';
 import { catalogVersions } from '../catalog/catalog-version';
-import { PriceEntry } from '../catalog/price-entry.entity';
-import type { CurrentPrice } from '../catalog/prices.service';
+import { readCurrentPrices } from '../catalog/prices.service';
 import type { CoilBestPrice } from '../../shared/schemas/coils';
 import { pickBestPrice } from './best-price';
 
@@ -37,33 +36,8 @@ export async function priceBook(dataSource: DataSource, coils: KindIndex, today:
 }
 
 async function readPriceBook(dataSource: DataSource, today: string): Promise<PriceBook> {
-  const rows = await dataSource
-    .getRepository(PriceEntry)
-    .createQueryBuilder('p')
-    .innerJoin('distributors', 'd', 'd.id = p.distributorId')
-    // Aliases through select(column, alias), which quotes them: PostgreSQL folds a bare alias to lower case.
-    .select('p.normalizedModel', 'normalizedModel')
-    .addSelect('p.distributorId', 'distributorId')
-    .addSelect('d.name', 'distributor')
-    .addSelect('p.priceCents', 'priceCents')
-    .addSelect('p.currency', 'currency')
-    .addSelect('p.effectiveFrom', 'effectiveFrom')
-    .where('p.effectiveFrom <= :today', { today })
-    .orderBy('p.effectiveFrom', 'DESC')
-    .getRawMany<{ normalizedModel: string; distributorId: number; distributor: string; priceCents: number; currency: string; effectiveFrom: string }>();
-  const current = new Map<string, CurrentPrice[]>();
-  const seen = new Set<string>();
-  for (const r of rows) {
-    const key = `${r.normalizedModel}|${r.distributorId}`;
-    if (seen.has(key)) continue; // rows come latest first: the first per distributor is current
-    seen.add(key);
-    const list = current.get(r.normalizedModel);
-    const price = { distributor: r.distributor, priceCents: Number(r.priceCents), currency: r.currency, effectiveFrom: r.effectiveFrom };
-    if (list) list.push(price);
-    else current.set(r.normalizedModel, [price]);
-  }
   const book: PriceBook = new Map();
-  for (const [model, list] of current) {
+  for (const [model, list] of await readCurrentPrices(dataSource, today)) {
     const best = pickBestPrice(list);
     if (best) book.set(model, best);
   }
