@@ -36,13 +36,20 @@ export interface EntityByKind {
 
 const BOOKKEEPING = new Set(['id', 'importId', 'normalizedModel', 'normalizedOutdoorModel', 'normalizedIndoorModel', 'normalizedAirHandlerModel']);
 
-/** The plain spec of a catalog row: its spec fields without id, import bookkeeping or nulls. */
+// Each row's spec, worked out once: the catalog index's rows are never changed in place (a catalog change
+// builds a new index), and a check resolves the same few rows on every request. Frozen, as callers share it.
+const specOfRow = new WeakMap<object, object>();
+
+/** The plain spec of a catalog row: its spec fields without id, import bookkeeping or nulls (frozen, shared). */
 export function toSpec<K extends CatalogKind>(kind: K, entity: EntityByKind[K]): SpecByKind[K] {
+  const known = specOfRow.get(entity);
+  if (known) return known as SpecByKind[K];
   const spec: Record<string, unknown> = {};
   for (const field of KINDS[kind].fields) {
     const value = (entity as unknown as Record<string, unknown>)[field];
     if (value !== null && value !== undefined && !BOOKKEEPING.has(field)) spec[field] = value;
   }
+  specOfRow.set(entity, Object.freeze(spec));
   return spec as SpecByKind[K];
 }
 
@@ -72,14 +79,22 @@ export async function findCatalogItem<K extends CatalogKind>(ctx: AppContext, ki
 
 /** Rows whose outdoor model is a family pattern (`*`, `?`), found once per catalog index. */
 const familyRows = new WeakMap<object, RatedCombination[]>();
+/** Each outdoor model's rated combinations, per catalog index (a check asks for the same few models). */
+const byModel = new WeakMap<object, Map<string, readonly RatedCombinationSpec[]>>();
+const MODELS_KEPT = 5000;
 
 /**
  * Rated combinations whose outdoor model matches (normalised), as specs: rows for the exact model
  * plus rows whose outdoor model is a family pattern that matches it (the engine picks the most specific).
+ * The list is shared between callers: read it, do not change it.
  */
-export async function findRatedCombinations(ctx: AppContext, outdoorModel: string): Promise<RatedCombinationSpec[]> {
+export async function findRatedCombinations(ctx: AppContext, outdoorModel: string): Promise<readonly RatedCombinationSpec[]> {
   const key = normalizeModel(outdoorModel);
   const index = await kindIndex(ctx.dataSource, 'rated-combinations');
+  let models = byModel.get(index);
+  if (!models) byModel.set(index, (models = new Map()));
+  const known = models.get(key);
+  if (known) return known;
   const rows = (index.byOutdoorModel.get(key) ?? []) as unknown as RatedCombination[];
   let families = familyRows.get(index);
   if (!families) {
@@ -87,5 +102,8 @@ export async function findRatedCombinations(ctx: AppContext, outdoorModel: strin
     familyRows.set(index, families);
   }
   const matched = families.filter((row) => modelMatches(row.outdoorModel, key));
-  return [...rows, ...matched].map((row) => toSpec('rated-combinations', row));
+  const specs = Object.freeze([...rows, ...matched].map((row) => toSpec('rated-combinations', row)));
+  if (models.size >= MODELS_KEPT) models.clear();
+  models.set(key, specs);
+  return specs;
 }

@@ -6,9 +6,18 @@ import { findRatedCombinations } from '../catalog/catalog-specs';
 import { loadRuleContext } from '../settings/settings.service';
 import { resolvePart } from './resolve-parts';
 
-/** Today's date (server clock) as YYYY-MM-DD, the install date when the request gives none. */
-export function today(now = new Date()): string {
-  return now.toISOString().slice(0, 10);
+let todayCached = { date: '', untilMs: 0 };
+
+/** Today's date (server clock, UTC) as YYYY-MM-DD, the install date when the request gives none. */
+export function today(now?: Date): string {
+  if (now) return now.toISOString().slice(0, 10);
+  // Every check asks: work the string out once per UTC day rather than formatting a Date each time.
+  const ms = Date.now();
+  if (ms >= todayCached.untilMs) {
+    const date = new Date(ms).toISOString().slice(0, 10);
+    todayCached = { date, untilMs: Date.parse(`${date}T00:00:00.000Z`) + 86_400_000 };
+  }
+  return todayCached.date;
 }
 
 /** Resolves every part of a validated check request into the pairing the engine takes. */

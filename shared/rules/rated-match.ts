@@ -27,7 +27,7 @@ export function findRatedCombination(pairing: Pairing): RatedCombinationSpec | u
 
 const last: {
   pairing?: Pairing;
-  list?: RatedCombinationSpec[];
+  list?: readonly RatedCombinationSpec[];
   outdoor?: Pairing['outdoor'];
   coil?: Pairing['indoorCoil'];
   airHandler?: Pairing['airHandler'];

@@ -50,7 +50,7 @@ export interface Pairing {
    * Rated combinations that name this outdoor model (and indoor / air handler), looked up by the caller.
    * `undefined` means the lookup could not be made (offline): the rating rules then say so.
    */
-  ratedCombinations?: RatedCombinationSpec[];
+  ratedCombinations?: readonly RatedCombinationSpec[];
 }
 
 /** A rebate tier's minimum ratings (at least one given). */

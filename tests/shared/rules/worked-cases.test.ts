@@ -131,7 +131,7 @@ const cases: WorkedCase[] = [
       edit((p) => {
         p.site!.state = 'TX';
         Object.assign(p.outdoor.spec, { seer2: 13.4, eer2: 11.2 });
-        p.ratedCombinations![0] = { ...p.ratedCombinations![0], seer2: 13.4, eer2: 11.2 };
+        p.ratedCombinations = [{ ...p.ratedCombinations![0], seer2: 13.4, eer2: 11.2 }, ...p.ratedCombinations!.slice(1)];
       }),
     verdict: 'incompatible',
     findings: ['blocker:efficiency.regional-minimum'],
