@@ -6,16 +6,17 @@ import { findRatedCombinations } from '../catalog/catalog-specs';
 import { loadRuleContext } from '../settings/settings.service';
 import { resolvePart } from './resolve-parts';
 
-let todayCached = { date: '', untilMs: 0 };
+let todayCached = { date: '', fromMs: 0, untilMs: 0 };
 
 /** Today's date (server clock, UTC) as YYYY-MM-DD, the install date when the request gives none. */
 export function today(now?: Date): string {
   if (now) return now.toISOString().slice(0, 10);
   // Every check asks: work the string out once per UTC day rather than formatting a Date each time.
   const ms = Date.now();
-  if (ms >= todayCached.untilMs) {
+  if (ms >= todayCached.untilMs || ms < todayCached.fromMs) {
     const date = new Date(ms).toISOString().slice(0, 10);
-    todayCached = { date, untilMs: Date.parse(`${date}T00:00:00.000Z`) + 86_400_000 };
+    const fromMs = Date.parse(`${date}T00:00:00.000Z`);
+    todayCached = { date, fromMs, untilMs: fromMs + 86_400_000 };
   }
   return todayCached.date;
 }
