@@ -17,7 +17,8 @@ import { SystemRevisionRow } from './system-revision.entity';
 import { takeSnapshot, type Snapshot } from './system-snapshot';
 import type { RecordContent } from './system-types';
 import { parseSystemCreate } from './system-validation';
-import { checklistOf, systemView, type RevisionBrief, type SystemView } from './system-view';
+import type { SavedRevision, StoredJson } from './saved-revision';
+import { checklistOf, revisionView, systemView, type RevisionBrief, type SystemView } from './system-view';
 
 /*
  * Revisions: every save is a new revision (n+1) that keeps the one before, so no save is ever lost.
@@ -79,52 +80,44 @@ export async function createSystem(ctx: AppContext, jobId: number, body: SystemC
 }
 
 /** PATCH /api/systems/:id: a new draft revision from the one the edit started from. */
-export async function patchSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SystemView> {
+export async function patchSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SavedRevision> {
   return saveRevision(ctx, id, patch, author, 'patch');
 }
 
 /** POST /api/systems/:id/revisions: a change to a record (final or draft) as draft revision n+1. */
-export async function reviseSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SystemView> {
+export async function reviseSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SavedRevision> {
   return saveRevision(ctx, id, patch, author, 'revise');
 }
 
 /**
- * Reads the record once and refuses early (no check run) when the edit can not land; then the check,
- * prices and names run before the lock. Under the lock only the record row is read again: when it is
- * still the row read before, the revision named is current and the answer is the state read before
- * plus the revision written; when another writer changed it meanwhile (a finalize), 409 as before or
- * the answer is read back after the commit.
+ * Reads the record and, of its latest revision, only the content and parts (the check, prices and the
+ * lists are not read), and refuses early (no check run) when the edit can not land; then the check,
+ * prices and names run before the lock. Under the lock only the record row is read again: still at the
+ * revision the edit started from, that revision (and so the content merged) is current, and the two
+ * writes follow. The answer is the revision written (system-view.ts `revisionView`), with the JSON
+ * text just stored.
  */
-async function saveRevision(ctx: AppContext, id: number, patch: SystemPatch, author: Author, how: 'patch' | 'revise'): Promise<SystemView> {
+async function saveRevision(ctx: AppContext, id: number, patch: SystemPatch, author: Author, how: 'patch' | 'revise'): Promise<SavedRevision> {
   const userId = authorId(author);
-  const before = await loadViewRows(ctx.dataSource.manager, id);
+  const before = await loadEditRows(ctx.dataSource.manager, id);
   await assertEditable(ctx, before.record, patch.revision, how);
-  const current = before.current;
-  const content = parseSystemCreate(mergeContent(current.content, patch));
+  const content = parseSystemCreate(mergeContent(before.current.content, patch));
   const [snapshot, names, options] = await Promise.all([
-    takeSnapshot(ctx, content, current.parts.installDate),
-    namesWith(ctx, author, namedIn(before)),
+    takeSnapshot(ctx, content, before.current.parts.installDate),
+    namesWith(ctx, author, [before.record.createdBy]),
     checklistOptions(ctx),
   ]);
   const draft = revisionDraft(content, snapshot, userId);
-  const written = await withBatchedWrite(ctx, async (manager) => {
+  const { record, revision } = await withBatchedWrite(ctx, async (manager) => {
     const record = await recordById(manager, id);
     await assertEditable(ctx, record, patch.revision, how);
     const at = nowIso();
     const next = record.revision + 1;
     const revision = await insertRevision(manager, draft, id, next, at);
     await dialectOf(manager).updateRowsById(manager, SystemRecordRow, ['revision', 'status', 'updatedAt'], [[id, next, 'draft', at]]);
-    const unchanged = record.status === before.record.status && record.updatedAt === before.record.updatedAt;
-    return { record: { ...record, revision: next, status: 'draft' as const, updatedAt: at }, revision, unchanged };
+    return { record: { ...record, revision: next, status: 'draft' as const, updatedAt: at }, revision };
   });
-  if (!written.unchanged) return loadView(ctx, id);
-  return systemView(written.record, written.revision, {
-    readings: before.readings,
-    attachments: before.attachments,
-    revisions: [...before.revisions, written.revision],
-    names,
-    checklistOptions: options,
-  });
+  return { view: revisionView(record, revision, names, options), stored: draft.json };
 }
 
 /** POST /api/systems/:id/finalize: the current revision becomes final (who, when); open items need a reason. */
@@ -234,6 +227,20 @@ async function rowsOf<T extends ObjectLiteral>(
   return raw.map((row) => hydrateRow(manager, entity, row));
 }
 
+/**
+ * What a save starts from: the record row and the content and parts of its latest revision (the two
+ * reads run in one turn, so on SQLite they see one state; a save landing between them elsewhere is
+ * caught by the check under the lock, which compares the record's revision again).
+ */
+async function loadEditRows(manager: EntityManager, id: number) {
+  const [records, [current]] = await Promise.all([
+    rowsOf(manager, SystemRecordRow, { where: ['id', id] }),
+    rowsOf(manager, SystemRevisionRow, { columns: ['content', 'parts'], where: ['systemId', id], orderBy: [['revision', 'DESC']], limit: 1 }),
+  ]);
+  if (!records[0] || !current) throw notFound('System record');
+  return { record: records[0], current };
+}
+
 /** The record row; 404 when there is no such record. */
 async function recordById(manager: EntityManager, id: number): Promise<SystemRecordRow> {
   const [record] = await rowsOf(manager, SystemRecordRow, { where: ['id', id] });
@@ -338,8 +345,8 @@ interface RevisionDraft {
   content: RecordContent;
   snapshot: Snapshot;
   userId: number;
-  /** content, check, parts, ratedCombination, prices as their simple-json text. */
-  json: [string, string, string, string | null, string];
+  /** The JSON columns as their simple-json text. */
+  json: StoredJson;
 }
 
 function revisionDraft(content: RecordContent, snapshot: Snapshot, userId: number): RevisionDraft {
@@ -348,13 +355,13 @@ function revisionDraft(content: RecordContent, snapshot: Snapshot, userId: numbe
     content,
     snapshot,
     userId,
-    json: [
-      JSON.stringify(content),
-      JSON.stringify(check),
-      JSON.stringify(parts),
-      ratedCombination === null ? null : JSON.stringify(ratedCombination),
-      JSON.stringify(prices),
-    ],
+    json: {
+      content: JSON.stringify(content),
+      check: JSON.stringify(check),
+      parts: JSON.stringify(parts),
+      ratedCombination: ratedCombination === null ? null : JSON.stringify(ratedCombination),
+      prices: JSON.stringify(prices),
+    },
   };
 }
 
@@ -371,7 +378,6 @@ async function insertRevision(
   at: string,
 ): Promise<SystemRevisionRow> {
   const { content, snapshot, userId, json } = draft;
-  const [contentJson, checkJson, partsJson, comboJson, pricesJson] = json;
   const { rulesVersion, verdict } = snapshot.check;
   await dialectOf(manager).insertRows(
     manager,
@@ -382,13 +388,13 @@ async function insertRevision(
         systemId,
         revision,
         'draft',
-        contentJson,
-        checkJson,
+        json.content,
+        json.check,
         rulesVersion,
         verdict,
-        partsJson,
-        comboJson,
-        pricesJson,
+        json.parts,
+        json.ratedCombination,
+        json.prices,
         userId,
         at,
         null,
