@@ -350,18 +350,11 @@ interface RevisionDraft {
 }
 
 function revisionDraft(content: RecordContent, snapshot: Snapshot, userId: number): RevisionDraft {
-  const { check, parts, ratedCombination, prices } = snapshot;
   return {
     content,
     snapshot,
     userId,
-    json: {
-      content: JSON.stringify(content),
-      check: JSON.stringify(check),
-      parts: JSON.stringify(parts),
-      ratedCombination: ratedCombination === null ? null : JSON.stringify(ratedCombination),
-      prices: JSON.stringify(prices),
-    },
+    json: { ...snapshot.json, content: JSON.stringify(content), prices: JSON.stringify(snapshot.prices) },
   };
 }
 
