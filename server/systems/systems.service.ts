@@ -3,6 +3,7 @@ import type { SystemCreate, SystemFinalize, SystemPatch } from '../../shared/sch
 import { AttachmentRow } from '../attachments/attachment.entity';
 import type { AppContext } from '../context';
 import { dialectOf } from '../db/dialect';
+import { holdsWriteLock } from '../db/write-transaction';
 import { hydrateRow, type RowQuery } from '../db/row-query';
 import { assertJobExists, requireJob } from '../jobs/jobs.service';
 import { AppError, notFound } from '../lib/errors';
@@ -16,7 +17,8 @@ import { SystemRecordRow } from './system-record.entity';
 import { SystemRevisionRow } from './system-revision.entity';
 import { takeSnapshot, type Snapshot } from './system-snapshot';
 import type { RecordContent } from './system-types';
-import { parseSystemCreate } from './system-validation';
+import { parseEditedContent } from './system-validation';
+import { rememberWritten, writtenBase, type EditBase } from './written-revisions';
 import type { SavedRevision, StoredJson } from './saved-revision';
 import { checklistOf, revisionView, systemView, type RevisionBrief, type SystemView } from './system-view';
 
@@ -58,6 +60,7 @@ export async function createSystem(ctx: AppContext, jobId: number, body: SystemC
     checklistOptions(ctx),
   ]);
   const draft = revisionDraft(body, snapshot, userId);
+  const committed = !holdsWriteLock(ctx.dataSource); // else the caller's transaction may still roll back
   const { record, revision } = await withBatchedWrite(ctx, async (manager) => {
     const at = nowIso();
     const row = Object.assign(new SystemRecordRow(), {
@@ -76,6 +79,7 @@ export async function createSystem(ctx: AppContext, jobId: number, body: SystemC
     );
     return { record: row, revision: await insertRevision(manager, draft, row.id, 1, at) };
   });
+  if (committed) rememberWritten(ctx.dataSource, record, 1, { content: body, installDate: snapshot.parts.installDate });
   return systemView(record, revision, { readings: [], attachments: [], revisions: [revision], names, checklistOptions: options });
 }
 
@@ -99,15 +103,16 @@ export async function reviseSystem(ctx: AppContext, id: number, patch: SystemPat
  */
 async function saveRevision(ctx: AppContext, id: number, patch: SystemPatch, author: Author, how: 'patch' | 'revise'): Promise<SavedRevision> {
   const userId = authorId(author);
-  const before = await loadEditRows(ctx.dataSource.manager, id);
+  const before = await loadEditBase(ctx, id);
   await assertEditable(ctx, before.record, patch.revision, how);
-  const content = parseSystemCreate(mergeContent(before.current.content, patch));
+  const content = parseEditedContent(mergeContent(before.base.content, patch));
   const [snapshot, names, options] = await Promise.all([
-    takeSnapshot(ctx, content, before.current.parts.installDate),
+    takeSnapshot(ctx, content, before.base.installDate),
     namesWith(ctx, author, [before.record.createdBy]),
     checklistOptions(ctx),
   ]);
   const draft = revisionDraft(content, snapshot, userId);
+  const committed = !holdsWriteLock(ctx.dataSource); // else the caller's transaction may still roll back
   const { record, revision } = await withBatchedWrite(ctx, async (manager) => {
     const record = await recordById(manager, id);
     await assertEditable(ctx, record, patch.revision, how);
@@ -117,6 +122,7 @@ async function saveRevision(ctx: AppContext, id: number, patch: SystemPatch, aut
     await dialectOf(manager).updateRowsById(manager, SystemRecordRow, ['revision', 'status', 'updatedAt'], [[id, next, 'draft', at]]);
     return { record: { ...record, revision: next, status: 'draft' as const, updatedAt: at }, revision };
   });
+  if (committed) rememberWritten(ctx.dataSource, record, revision.revision, { content, installDate: snapshot.parts.installDate });
   return { view: revisionView(record, revision, names, options), stored: draft.json };
 }
 
@@ -228,17 +234,22 @@ async function rowsOf<T extends ObjectLiteral>(
 }
 
 /**
- * What a save starts from: the record row and the content and parts of its latest revision (the two
- * reads run in one turn, so on SQLite they see one state; a save landing between them elsewhere is
- * caught by the check under the lock, which compares the record's revision again).
+ * What an edit starts from: the record row and its latest revision's content and install date, from
+ * memory when this process wrote that revision (written-revisions.ts), else read (content and parts
+ * only). The two reads run in one turn, so on SQLite they see one state; a save landing between them
+ * elsewhere is caught by the check under the lock, which compares the record's revision again.
  */
-async function loadEditRows(manager: EntityManager, id: number) {
+async function loadEditBase(ctx: AppContext, id: number): Promise<{ record: SystemRecordRow; base: EditBase }> {
+  const manager = ctx.dataSource.manager;
+  const record = await recordById(manager, id);
+  const known = writtenBase(ctx.dataSource, record, record.revision);
+  if (known) return { record, base: known };
   const [records, [current]] = await Promise.all([
     rowsOf(manager, SystemRecordRow, { where: ['id', id] }),
     rowsOf(manager, SystemRevisionRow, { columns: ['content', 'parts'], where: ['systemId', id], orderBy: [['revision', 'DESC']], limit: 1 }),
   ]);
   if (!records[0] || !current) throw notFound('System record');
-  return { record: records[0], current };
+  return { record: records[0], base: { content: current.content, installDate: current.parts.installDate } };
 }
 
 /** The record row; 404 when there is no such record. */

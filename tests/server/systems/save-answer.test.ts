@@ -67,6 +67,17 @@ describe('the answer of a save', () => {
     expect(revised.body).toEqual(await readBack(t, made.id, 'tech'));
     expect(revised.body).toMatchObject({ revision: 2, status: 'draft', serials: { outdoor: 'QX2611A04471', indoorCoil: 'QC2610B00999' } });
   });
+
+  it('when a tech edits serials, then a checklist item, then the label in a row, then each revision keeps the edits before it', async () => {
+    const made = (await create(t, f)).body;
+    const a = authFor(t, 'tech');
+    await request(t.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 1, serials: { outdoor: 'QX2611A09001' } }).expect(200);
+    await request(t.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 2, checklist: { 'filter-drier': { state: 'done' } } }).expect(200);
+    const third = (await request(t.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 3, label: 'Hall closet' }).expect(200)).body;
+    expect(third).toMatchObject({ revision: 4, label: 'Hall closet', serials: { outdoor: 'QX2611A09001', indoorCoil: 'QC2610B00913' } });
+    expect(third.checklist.find((c: { id: string }) => c.id === 'filter-drier')).toMatchObject({ state: 'done' });
+    expect(third.request).toEqual((await request(t.app).get(`/api/systems/${made.id}/revisions/1`).set(a).expect(200)).body.request);
+  });
 });
 
 describe('the check of a save', () => {
