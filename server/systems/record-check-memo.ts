@@ -33,7 +33,10 @@ const MAX_MEMO_ENTRIES = 500;
 
 /** The check of `content` (its install date `installDate` when it gives none) under the current catalog and settings. */
 export async function checkContent(ctx: AppContext, content: RecordContent, installDate: string): Promise<CheckedContent> {
-  const [indexes, ruleContext] = await Promise.all([Promise.all(CATALOG_KINDS.map((kind) => kindIndex(ctx.dataSource, kind))), loadRuleContext(ctx)]);
+  const [indexes, ruleContext] = await Promise.all([
+    Promise.all(CATALOG_KINDS.map((kind) => kindIndex(ctx.dataSource, kind))),
+    loadRuleContext(ctx),
+  ]);
   const sources = [...indexes, ruleContext.settings, ruleContext.transitionRules];
   let memo = memos.get(ctx.dataSource);
   if (!memo || memo.byInput.size >= MAX_MEMO_ENTRIES || sources.some((source, i) => source !== memo!.sources[i])) {

@@ -59,14 +59,22 @@ export interface RevisionSummary {
 }
 
 /** The stored facts of a revision that the list of revisions shows. */
-export type RevisionBrief = Pick<SystemRevisionRow, 'revision' | 'status' | 'verdict' | 'savedAt' | 'savedBy' | 'finalizedBy' | 'finalizedAt'>;
+export type RevisionBrief = Pick<
+  SystemRevisionRow,
+  'revision' | 'status' | 'verdict' | 'savedAt' | 'savedBy' | 'finalizedBy' | 'finalizedAt'
+>;
 
 /**
  * One revision of a record without its lists (readings, photos, revisions): what a save answers
  * (PATCH /api/systems/:id, POST …/revisions). The app reloads the whole record after a save, and the
  * outbox reads only `latestRevision`, so a save reads and sends none of the lists.
  */
-export function revisionView(record: SystemRecordRow, rev: SystemRevisionRow, names: Map<number, string>, checklistOptions: ChecklistOptions) {
+export function revisionView(
+  record: SystemRecordRow,
+  rev: SystemRevisionRow,
+  names: Map<number, string>,
+  checklistOptions: ChecklistOptions,
+) {
   const { serials, checklist: _states, label, ...request } = rev.content;
   const checklist = checklistOf(rev, checklistOptions);
   return {

@@ -3,8 +3,8 @@ import type { SystemCreate, SystemFinalize, SystemPatch } from '../../shared/sch
 import { AttachmentRow } from '../attachments/attachment.entity';
 import type { AppContext } from '../context';
 import { dialectOf } from '../db/dialect';
-import { holdsWriteLock } from '../db/write-transaction';
 import { hydrateRow, type RowQuery } from '../db/row-query';
+import { holdsWriteLock } from '../db/write-transaction';
 import { assertJobExists, requireJob } from '../jobs/jobs.service';
 import { AppError, notFound } from '../lib/errors';
 import { userNames } from '../lib/user-names';
@@ -12,15 +12,15 @@ import { loadRuleContext } from '../settings/settings.service';
 import { CommissioningReadingRow } from './commissioning-reading.entity';
 import { compareWithToday } from './current-check';
 import { withBatchedWrite } from './record-write-batch';
+import type { SavedRevision, StoredJson } from './saved-revision';
 import { mergeContent } from './system-content';
 import { SystemRecordRow } from './system-record.entity';
 import { SystemRevisionRow } from './system-revision.entity';
 import { takeSnapshot, type Snapshot } from './system-snapshot';
 import type { RecordContent } from './system-types';
 import { parseEditedContent } from './system-validation';
-import { rememberWritten, writtenBase, type EditBase } from './written-revisions';
-import type { SavedRevision, StoredJson } from './saved-revision';
 import { checklistOf, revisionView, systemView, type RevisionBrief, type SystemView } from './system-view';
+import { rememberWritten, writtenBase, type EditBase } from './written-revisions';
 
 /*
  * Revisions: every save is a new revision (n+1) that keeps the one before, so no save is ever lost.
@@ -101,7 +101,13 @@ export async function reviseSystem(ctx: AppContext, id: number, patch: SystemPat
  * writes follow. The answer is the revision written (system-view.ts `revisionView`), with the JSON
  * text just stored.
  */
-async function saveRevision(ctx: AppContext, id: number, patch: SystemPatch, author: Author, how: 'patch' | 'revise'): Promise<SavedRevision> {
+async function saveRevision(
+  ctx: AppContext,
+  id: number,
+  patch: SystemPatch,
+  author: Author,
+  how: 'patch' | 'revise',
+): Promise<SavedRevision> {
   const userId = authorId(author);
   const before = await loadEditBase(ctx, id);
   await assertEditable(ctx, before.record, patch.revision, how);
@@ -246,7 +252,12 @@ async function loadEditBase(ctx: AppContext, id: number): Promise<{ record: Syst
   if (known) return { record, base: known };
   const [records, [current]] = await Promise.all([
     rowsOf(manager, SystemRecordRow, { where: ['id', id] }),
-    rowsOf(manager, SystemRevisionRow, { columns: ['content', 'parts'], where: ['systemId', id], orderBy: [['revision', 'DESC']], limit: 1 }),
+    rowsOf(manager, SystemRevisionRow, {
+      columns: ['content', 'parts'],
+      where: ['systemId', id],
+      orderBy: [['revision', 'DESC']],
+      limit: 1,
+    }),
   ]);
   if (!records[0] || !current) throw notFound('System record');
   return { record: records[0], base: { content: current.content, installDate: current.parts.installDate } };

@@ -20,9 +20,13 @@ const create = (app: TestApp, fx: Fixture) =>
 
 /** GET of a record as `role` reads it, without what a save does not answer. */
 async function readBack(app: TestApp, id: number, role: Role) {
-  const { currentCheck: _today, readings: _r, attachments: _a, revisions: _v, ...rest } = (
-    await request(app.app).get(`/api/systems/${id}`).set(authFor(app, role)).expect(200)
-  ).body;
+  const {
+    currentCheck: _today,
+    readings: _r,
+    attachments: _a,
+    revisions: _v,
+    ...rest
+  } = (await request(app.app).get(`/api/systems/${id}`).set(authFor(app, role)).expect(200)).body;
   return rest;
 }
 
@@ -71,9 +75,18 @@ describe('the answer of a save', () => {
   it('when a tech edits serials, then a checklist item, then the label in a row, then each revision keeps the edits before it', async () => {
     const made = (await create(t, f)).body;
     const a = authFor(t, 'tech');
-    await request(t.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 1, serials: { outdoor: 'QX2611A09001' } }).expect(200);
-    await request(t.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 2, checklist: { 'filter-drier': { state: 'done' } } }).expect(200);
-    const third = (await request(t.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 3, label: 'Hall closet' }).expect(200)).body;
+    await request(t.app)
+      .patch(`/api/systems/${made.id}`)
+      .set(a)
+      .send({ revision: 1, serials: { outdoor: 'QX2611A09001' } })
+      .expect(200);
+    await request(t.app)
+      .patch(`/api/systems/${made.id}`)
+      .set(a)
+      .send({ revision: 2, checklist: { 'filter-drier': { state: 'done' } } })
+      .expect(200);
+    const third = (await request(t.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 3, label: 'Hall closet' }).expect(200))
+      .body;
     expect(third).toMatchObject({ revision: 4, label: 'Hall closet', serials: { outdoor: 'QX2611A09001', indoorCoil: 'QC2610B00913' } });
     expect(third.checklist.find((c: { id: string }) => c.id === 'filter-drier')).toMatchObject({ state: 'done' });
     expect(third.request).toEqual((await request(t.app).get(`/api/systems/${made.id}/revisions/1`).set(a).expect(200)).body.request);
@@ -87,8 +100,15 @@ describe('the check of a save', () => {
       const fx = await buildFixture(app);
       const a = authFor(app, 'tech');
       const made = (await create(app, fx)).body;
-      const airflow = (body: { check: { findings: { ruleId: string }[] } }) => body.check.findings.filter((x) => x.ruleId === 'airflow.per-ton');
-      const first = (await request(app.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 1, serials: { outdoor: 'QX2611A06001' } }).expect(200)).body;
+      const airflow = (body: { check: { findings: { ruleId: string }[] } }) =>
+        body.check.findings.filter((x) => x.ruleId === 'airflow.per-ton');
+      const first = (
+        await request(app.app)
+          .patch(`/api/systems/${made.id}`)
+          .set(a)
+          .send({ revision: 1, serials: { outdoor: 'QX2611A06001' } })
+          .expect(200)
+      ).body;
       // 400 CFM/ton sits inside the default 350–450 band (common practice, no source)
       expect(airflow(first)).toHaveLength(0);
 
@@ -100,7 +120,13 @@ describe('the check of a save', () => {
         .send({ settings: { ...current.body.settings, cfmPerTonMin: 410 }, transitionRules: current.body.transitionRules })
         .expect(200);
 
-      const second = (await request(app.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 2, serials: { outdoor: 'QX2611A06002' } }).expect(200)).body;
+      const second = (
+        await request(app.app)
+          .patch(`/api/systems/${made.id}`)
+          .set(a)
+          .send({ revision: 2, serials: { outdoor: 'QX2611A06002' } })
+          .expect(200)
+      ).body;
       expect(airflow(second)).toHaveLength(1);
       expect((await request(app.app).get(`/api/systems/${made.id}`).set(a).expect(200)).body.check).toEqual(second.check);
     } finally {
@@ -114,7 +140,13 @@ describe('the check of a save', () => {
       const fx = await buildFixture(app);
       const a = authFor(app, 'tech');
       const made = (await create(app, fx)).body;
-      const first = (await request(app.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 1, serials: { outdoor: 'QX2611A07001' } }).expect(200)).body;
+      const first = (
+        await request(app.app)
+          .patch(`/api/systems/${made.id}`)
+          .set(a)
+          .send({ revision: 1, serials: { outdoor: 'QX2611A07001' } })
+          .expect(200)
+      ).body;
       expect(first.parts.outdoor.spec.mcaAmps).toBe(21.2);
 
       // 23.4 A: an invented corrected nameplate figure (no source), still within the 30 A circuit of the fixture
@@ -126,9 +158,17 @@ describe('the check of a save', () => {
         userId: app.users.admin.id,
       });
 
-      const second = (await request(app.app).patch(`/api/systems/${made.id}`).set(a).send({ revision: 2, serials: { outdoor: 'QX2611A07002' } }).expect(200)).body;
+      const second = (
+        await request(app.app)
+          .patch(`/api/systems/${made.id}`)
+          .set(a)
+          .send({ revision: 2, serials: { outdoor: 'QX2611A07002' } })
+          .expect(200)
+      ).body;
       expect(second.parts.outdoor.spec.mcaAmps).toBe(23.4);
-      expect((await request(app.app).get(`/api/systems/${made.id}/revisions/2`).set(a).expect(200)).body.parts.outdoor.spec.mcaAmps).toBe(21.2);
+      expect((await request(app.app).get(`/api/systems/${made.id}/revisions/2`).set(a).expect(200)).body.parts.outdoor.spec.mcaAmps).toBe(
+        21.2,
+      );
     } finally {
       await app.close();
     }

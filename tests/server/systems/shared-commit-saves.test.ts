@@ -70,9 +70,13 @@ describe('saves that arrive together', () => {
     );
     for (const answer of answers.slice(0, 3)) {
       // A save answers the revision it wrote; the app reloads the lists (readings, photos, revisions) itself.
-      const { currentCheck: _today, readings: _r, attachments: _a, revisions: _v, ...stored } = (
-        await request(server).get(`/api/systems/${answer.body.id}`).set(auth()).expect(200)
-      ).body;
+      const {
+        currentCheck: _today,
+        readings: _r,
+        attachments: _a,
+        revisions: _v,
+        ...stored
+      } = (await request(server).get(`/api/systems/${answer.body.id}`).set(auth()).expect(200)).body;
       expect(answer.body).toEqual(stored);
     }
     for (const id of records) expect(await revisionsOf(id)).toEqual([1, 2]);
