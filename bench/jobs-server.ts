@@ -46,7 +46,7 @@ async function main() {
     (await cpuMs(5, () =>
       Promise.all(
         ownRecords.map(
-          async (r) => (r.revision = (await patchSystem(ctx, r.id, { revision: r.revision, ...edit(r.revision) }, techId)).revision),
+          async (r) => (r.revision = (await patchSystem(ctx, r.id, { revision: r.revision, ...edit(r.revision) }, techId)).view.revision),
         ),
       ),
     )) / OWN_RECORDS;

@@ -3,7 +3,7 @@ import { useEffect, useSyncExternalStore } from 'react';
 import type { ReadingCreate, SystemCreate } from '@/shared/schemas/systems';
 import { api, ApiError } from './api-client';
 import { jobKeys } from './use-jobs';
-import { systemKeys, type SystemRecord } from './use-systems';
+import { systemKeys, type SavedRecord, type SystemRecord } from './use-systems';
 import {
   dropItem,
   enqueueCreate,
@@ -119,8 +119,8 @@ async function send(item: RecordOutboxItem): Promise<SendOutcome<SystemRecord>> 
     if (item.kind === 'save') {
       const patch = { ...item.change, revision: item.baseRevision };
       const saved = item.asNewRevision
-        ? await api.post<SystemRecord>(`/systems/${item.systemId}/revisions`, patch)
-        : await api.patch<SystemRecord>(`/systems/${item.systemId}`, patch);
+        ? await api.post<SavedRecord>(`/systems/${item.systemId}/revisions`, patch)
+        : await api.patch<SavedRecord>(`/systems/${item.systemId}`, patch);
       return { ok: true, record: saved };
     }
     if (item.kind === 'reading') await api.post(`/systems/${item.systemId}/readings`, item.body);

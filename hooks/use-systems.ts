@@ -79,6 +79,12 @@ export interface SystemRecord {
   currentCheck?: { available: boolean; differs: boolean; verdict?: string; added: FindingKey[]; removed: FindingKey[]; message: string };
 }
 
+/**
+ * What a save answers (PATCH /api/systems/:id, POST …/revisions): the revision written, without the lists.
+ * The app refetches the whole record after a save; the outbox reads `latestRevision`.
+ */
+export type SavedRecord = Omit<SystemRecord, 'readings' | 'attachments' | 'revisions' | 'currentCheck'>;
+
 /** A record as a job's list shows it (GET /api/jobs/:id/systems). */
 export interface SystemSummary {
   id: number;
@@ -173,7 +179,7 @@ export function useSaveSystem(id: number) {
   const invalidate = useInvalidateRecords();
   return useMutation({
     mutationFn: ({ patch, asNewRevision }: { patch: SystemPatch; asNewRevision: boolean }) =>
-      asNewRevision ? api.post<SystemRecord>(`/systems/${id}/revisions`, patch) : api.patch<SystemRecord>(`/systems/${id}`, patch),
+      asNewRevision ? api.post<SavedRecord>(`/systems/${id}/revisions`, patch) : api.patch<SavedRecord>(`/systems/${id}`, patch),
     onSuccess: () => invalidate(),
   });
 }

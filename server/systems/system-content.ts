@@ -5,7 +5,7 @@ import type { RecordContent } from './system-types';
  * The content of the next revision: a group given in the patch replaces the stored one (null removes
  * it), serials and checklist entries merge by key. The result is validated again by the caller.
  */
-export function mergeContent(current: RecordContent, patch: SystemPatch): unknown {
+export function mergeContent(current: RecordContent, patch: SystemPatch): Record<string, unknown> {
   const { revision: _revision, serials, checklist, ...groups } = patch;
   const next: Record<string, unknown> = { ...current };
   for (const [key, value] of Object.entries(groups)) {

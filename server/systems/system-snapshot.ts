@@ -1,11 +1,10 @@
-import { runChecks } from '../../shared/rules/engine';
 import { normalizeModel } from '../../shared/schemas/fields';
 import type { CheckResult } from '../../shared/rules/types';
 import { catalogVersions } from '../catalog/catalog-version';
 import { currentPricesBatch } from '../catalog/prices.service';
-import { resolvePairing, today } from '../checks/checks.service';
+import { today } from '../checks/checks.service';
 import type { AppContext } from '../context';
-import { loadRuleContext } from '../settings/settings.service';
+import { checkContent, type CheckedContent } from './record-check-memo';
 import { PART_SLOTS, type PartSlot, type PriceSnapshot, type RecordContent, type ResolvedParts } from './system-types';
 
 /** What a save stores besides the tech's input: the check as it stood and the facts it stood on. */
@@ -14,6 +13,8 @@ export interface Snapshot {
   parts: ResolvedParts;
   ratedCombination: Record<string, unknown> | null;
   prices: PriceSnapshot;
+  /** The JSON text of the check, parts and rated combination as stored (made once per check, see record-check-memo.ts). */
+  json: CheckedContent['json'];
 }
 
 /**
@@ -21,16 +22,8 @@ export interface Snapshot {
  * price of each catalog part. `installDate` pins the date a record was first saved on when it gave none.
  */
 export async function takeSnapshot(ctx: AppContext, content: RecordContent, installDate = today()): Promise<Snapshot> {
-  const [pairing, ruleContext] = await Promise.all([resolvePairing(ctx, content, installDate), loadRuleContext(ctx)]);
-  const check = runChecks(pairing, ruleContext);
-  const { ratedCombinations: _list, ...parts } = pairing;
-  const combo = check.computed.ratedCombination;
-  return {
-    check,
-    parts,
-    ratedCombination: combo && typeof combo === 'object' ? (combo as Record<string, unknown>) : null,
-    prices: await priceSnapshot(ctx, parts),
-  };
+  const checked = await checkContent(ctx, content, installDate);
+  return { ...checked, prices: await priceSnapshot(ctx, checked.parts) };
 }
 
 /** The cheapest current price of each catalog part (typed nameplate parts have no price). */

@@ -59,22 +59,24 @@ export interface RevisionSummary {
 }
 
 /** The stored facts of a revision that the list of revisions shows. */
-export type RevisionBrief = Pick<SystemRevisionRow, 'revision' | 'status' | 'verdict' | 'savedAt' | 'savedBy' | 'finalizedBy' | 'finalizedAt'>;
+export type RevisionBrief = Pick<
+  SystemRevisionRow,
+  'revision' | 'status' | 'verdict' | 'savedAt' | 'savedBy' | 'finalizedBy' | 'finalizedAt'
+>;
 
-/** One revision of a record as the API answers it (GET /api/systems/:id and /revisions/:n). */
-export function systemView(
+/**
+ * One revision of a record without its lists (readings, photos, revisions): what a save answers
+ * (PATCH /api/systems/:id, POST …/revisions). The app reloads the whole record after a save, and the
+ * outbox reads only `latestRevision`, so a save reads and sends none of the lists.
+ */
+export function revisionView(
   record: SystemRecordRow,
   rev: SystemRevisionRow,
-  extra: {
-    readings: CommissioningReadingRow[];
-    attachments: AttachmentRow[];
-    revisions: RevisionBrief[];
-    names: Map<number, string>;
-    checklistOptions: ChecklistOptions;
-  },
+  names: Map<number, string>,
+  checklistOptions: ChecklistOptions,
 ) {
   const { serials, checklist: _states, label, ...request } = rev.content;
-  const checklist = checklistOf(rev, extra.checklistOptions);
+  const checklist = checklistOf(rev, checklistOptions);
   return {
     id: record.id,
     jobId: record.jobId,
@@ -93,9 +95,29 @@ export function systemView(
     openChecklistItems: openChecklistItems(checklist),
     openItemsReason: rev.openItemsReason,
     savedAt: rev.savedAt,
-    savedBy: who(rev.savedBy, extra.names),
+    savedBy: who(rev.savedBy, names),
     finalizedAt: rev.finalizedAt,
-    finalizedBy: who(rev.finalizedBy, extra.names),
+    finalizedBy: who(rev.finalizedBy, names),
+    createdAt: record.createdAt,
+    createdBy: who(record.createdBy, names),
+  };
+}
+export type RevisionView = ReturnType<typeof revisionView>;
+
+/** One revision of a record as the API answers it (GET /api/systems/:id and /revisions/:n). */
+export function systemView(
+  record: SystemRecordRow,
+  rev: SystemRevisionRow,
+  extra: {
+    readings: CommissioningReadingRow[];
+    attachments: AttachmentRow[];
+    revisions: RevisionBrief[];
+    names: Map<number, string>;
+    checklistOptions: ChecklistOptions;
+  },
+) {
+  return {
+    ...revisionView(record, rev, extra.names, extra.checklistOptions),
     readings: extra.readings.filter((r) => r.revision <= rev.revision).map((r) => readingView(r, extra.names)),
     attachments: extra.attachments.map(attachmentView),
     revisions: extra.revisions.map((r): RevisionSummary => ({
@@ -106,8 +128,6 @@ export function systemView(
       savedBy: who(r.savedBy, extra.names),
       finalizedAt: r.finalizedAt,
     })),
-    createdAt: record.createdAt,
-    createdBy: who(record.createdBy, extra.names),
   };
 }
 export type SystemView = ReturnType<typeof systemView>;

@@ -8,6 +8,7 @@ import { sendReport } from '../mail/send-report';
 import { ReportQuerySchema, renderSystemReport } from '../reports/system-report';
 import { addReading } from './readings.service';
 import { recordForRole } from './record-price-visibility';
+import { savedRevisionJson } from './saved-revision';
 import { finalizeSystem, getRevision, getSystem, patchSystem, reviseSystem } from './systems.service';
 
 const RevisionParamSchema = IdParamSchema.extend({ n: z.coerce.number().int().positive() });
@@ -21,11 +22,13 @@ export function systemsRouter(ctx: AppContext): Router {
   });
   router.patch('/:id', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.json(recordForRole(currentUser(req).role, await patchSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req))));
+    const saved = await patchSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req));
+    res.type('json').send(savedRevisionJson(currentUser(req).role, saved));
   });
   router.post('/:id/revisions', async (req, res) => {
     const { id } = parseParams(IdParamSchema, req.params);
-    res.status(201).json(recordForRole(currentUser(req).role, await reviseSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req))));
+    const saved = await reviseSystem(ctx, id, parseBody(SystemPatchSchema, req.body), currentUser(req));
+    res.status(201).type('json').send(savedRevisionJson(currentUser(req).role, saved));
   });
   router.get('/:id/revisions/:n', async (req, res) => {
     const { id, n } = parseParams(RevisionParamSchema, req.params);

@@ -4,6 +4,7 @@ import { AttachmentRow } from '../attachments/attachment.entity';
 import type { AppContext } from '../context';
 import { dialectOf } from '../db/dialect';
 import { hydrateRow, type RowQuery } from '../db/row-query';
+import { holdsWriteLock } from '../db/write-transaction';
 import { assertJobExists, requireJob } from '../jobs/jobs.service';
 import { AppError, notFound } from '../lib/errors';
 import { userNames } from '../lib/user-names';
@@ -11,13 +12,15 @@ import { loadRuleContext } from '../settings/settings.service';
 import { CommissioningReadingRow } from './commissioning-reading.entity';
 import { compareWithToday } from './current-check';
 import { withBatchedWrite } from './record-write-batch';
+import type { SavedRevision, StoredJson } from './saved-revision';
 import { mergeContent } from './system-content';
 import { SystemRecordRow } from './system-record.entity';
 import { SystemRevisionRow } from './system-revision.entity';
 import { takeSnapshot, type Snapshot } from './system-snapshot';
 import type { RecordContent } from './system-types';
-import { parseSystemCreate } from './system-validation';
-import { checklistOf, systemView, type RevisionBrief, type SystemView } from './system-view';
+import { parseEditedContent } from './system-validation';
+import { checklistOf, revisionView, systemView, type RevisionBrief, type SystemView } from './system-view';
+import { rememberWritten, writtenBase, type EditBase } from './written-revisions';
 
 /*
  * Revisions: every save is a new revision (n+1) that keeps the one before, so no save is ever lost.
@@ -57,6 +60,7 @@ export async function createSystem(ctx: AppContext, jobId: number, body: SystemC
     checklistOptions(ctx),
   ]);
   const draft = revisionDraft(body, snapshot, userId);
+  const committed = !holdsWriteLock(ctx.dataSource); // else the caller's transaction may still roll back
   const { record, revision } = await withBatchedWrite(ctx, async (manager) => {
     const at = nowIso();
     const row = Object.assign(new SystemRecordRow(), {
@@ -75,56 +79,57 @@ export async function createSystem(ctx: AppContext, jobId: number, body: SystemC
     );
     return { record: row, revision: await insertRevision(manager, draft, row.id, 1, at) };
   });
+  if (committed) rememberWritten(ctx.dataSource, record, 1, { content: body, installDate: snapshot.parts.installDate });
   return systemView(record, revision, { readings: [], attachments: [], revisions: [revision], names, checklistOptions: options });
 }
 
 /** PATCH /api/systems/:id: a new draft revision from the one the edit started from. */
-export async function patchSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SystemView> {
+export async function patchSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SavedRevision> {
   return saveRevision(ctx, id, patch, author, 'patch');
 }
 
 /** POST /api/systems/:id/revisions: a change to a record (final or draft) as draft revision n+1. */
-export async function reviseSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SystemView> {
+export async function reviseSystem(ctx: AppContext, id: number, patch: SystemPatch, author: Author): Promise<SavedRevision> {
   return saveRevision(ctx, id, patch, author, 'revise');
 }
 
 /**
- * Reads the record once and refuses early (no check run) when the edit can not land; then the check,
- * prices and names run before the lock. Under the lock only the record row is read again: when it is
- * still the row read before, the revision named is current and the answer is the state read before
- * plus the revision written; when another writer changed it meanwhile (a finalize), 409 as before or
- * the answer is read back after the commit.
+ * Reads the record and, of its latest revision, only the content and parts (the check, prices and the
+ * lists are not read), and refuses early (no check run) when the edit can not land; then the check,
+ * prices and names run before the lock. Under the lock only the record row is read again: still at the
+ * revision the edit started from, that revision (and so the content merged) is current, and the two
+ * writes follow. The answer is the revision written (system-view.ts `revisionView`), with the JSON
+ * text just stored.
  */
-async function saveRevision(ctx: AppContext, id: number, patch: SystemPatch, author: Author, how: 'patch' | 'revise'): Promise<SystemView> {
+async function saveRevision(
+  ctx: AppContext,
+  id: number,
+  patch: SystemPatch,
+  author: Author,
+  how: 'patch' | 'revise',
+): Promise<SavedRevision> {
   const userId = authorId(author);
-  const before = await loadViewRows(ctx.dataSource.manager, id);
+  const before = await loadEditBase(ctx, id);
   await assertEditable(ctx, before.record, patch.revision, how);
-  const current = before.current;
-  const content = parseSystemCreate(mergeContent(current.content, patch));
+  const content = parseEditedContent(mergeContent(before.base.content, patch));
   const [snapshot, names, options] = await Promise.all([
-    takeSnapshot(ctx, content, current.parts.installDate),
-    namesWith(ctx, author, namedIn(before)),
+    takeSnapshot(ctx, content, before.base.installDate),
+    namesWith(ctx, author, [before.record.createdBy]),
     checklistOptions(ctx),
   ]);
   const draft = revisionDraft(content, snapshot, userId);
-  const written = await withBatchedWrite(ctx, async (manager) => {
+  const committed = !holdsWriteLock(ctx.dataSource); // else the caller's transaction may still roll back
+  const { record, revision } = await withBatchedWrite(ctx, async (manager) => {
     const record = await recordById(manager, id);
     await assertEditable(ctx, record, patch.revision, how);
     const at = nowIso();
     const next = record.revision + 1;
     const revision = await insertRevision(manager, draft, id, next, at);
     await dialectOf(manager).updateRowsById(manager, SystemRecordRow, ['revision', 'status', 'updatedAt'], [[id, next, 'draft', at]]);
-    const unchanged = record.status === before.record.status && record.updatedAt === before.record.updatedAt;
-    return { record: { ...record, revision: next, status: 'draft' as const, updatedAt: at }, revision, unchanged };
+    return { record: { ...record, revision: next, status: 'draft' as const, updatedAt: at }, revision };
   });
-  if (!written.unchanged) return loadView(ctx, id);
-  return systemView(written.record, written.revision, {
-    readings: before.readings,
-    attachments: before.attachments,
-    revisions: [...before.revisions, written.revision],
-    names,
-    checklistOptions: options,
-  });
+  if (committed) rememberWritten(ctx.dataSource, record, revision.revision, { content, installDate: snapshot.parts.installDate });
+  return { view: revisionView(record, revision, names, options), stored: draft.json };
 }
 
 /** POST /api/systems/:id/finalize: the current revision becomes final (who, when); open items need a reason. */
@@ -234,6 +239,30 @@ async function rowsOf<T extends ObjectLiteral>(
   return raw.map((row) => hydrateRow(manager, entity, row));
 }
 
+/**
+ * What an edit starts from: the record row and its latest revision's content and install date, from
+ * memory when this process wrote that revision (written-revisions.ts), else read (content and parts
+ * only). The two reads run in one turn, so on SQLite they see one state; a save landing between them
+ * elsewhere is caught by the check under the lock, which compares the record's revision again.
+ */
+async function loadEditBase(ctx: AppContext, id: number): Promise<{ record: SystemRecordRow; base: EditBase }> {
+  const manager = ctx.dataSource.manager;
+  const record = await recordById(manager, id);
+  const known = writtenBase(ctx.dataSource, record, record.revision);
+  if (known) return { record, base: known };
+  const [records, [current]] = await Promise.all([
+    rowsOf(manager, SystemRecordRow, { where: ['id', id] }),
+    rowsOf(manager, SystemRevisionRow, {
+      columns: ['content', 'parts'],
+      where: ['systemId', id],
+      orderBy: [['revision', 'DESC']],
+      limit: 1,
+    }),
+  ]);
+  if (!records[0] || !current) throw notFound('System record');
+  return { record: records[0], base: { content: current.content, installDate: current.parts.installDate } };
+}
+
 /** The record row; 404 when there is no such record. */
 async function recordById(manager: EntityManager, id: number): Promise<SystemRecordRow> {
   const [record] = await rowsOf(manager, SystemRecordRow, { where: ['id', id] });
@@ -338,23 +367,16 @@ interface RevisionDraft {
   content: RecordContent;
   snapshot: Snapshot;
   userId: number;
-  /** content, check, parts, ratedCombination, prices as their simple-json text. */
-  json: [string, string, string, string | null, string];
+  /** The JSON columns as their simple-json text. */
+  json: StoredJson;
 }
 
 function revisionDraft(content: RecordContent, snapshot: Snapshot, userId: number): RevisionDraft {
-  const { check, parts, ratedCombination, prices } = snapshot;
   return {
     content,
     snapshot,
     userId,
-    json: [
-      JSON.stringify(content),
-      JSON.stringify(check),
-      JSON.stringify(parts),
-      ratedCombination === null ? null : JSON.stringify(ratedCombination),
-      JSON.stringify(prices),
-    ],
+    json: { ...snapshot.json, content: JSON.stringify(content), prices: JSON.stringify(snapshot.prices) },
   };
 }
 
@@ -371,7 +393,6 @@ async function insertRevision(
   at: string,
 ): Promise<SystemRevisionRow> {
   const { content, snapshot, userId, json } = draft;
-  const [contentJson, checkJson, partsJson, comboJson, pricesJson] = json;
   const { rulesVersion, verdict } = snapshot.check;
   await dialectOf(manager).insertRows(
     manager,
@@ -382,13 +403,13 @@ async function insertRevision(
         systemId,
         revision,
         'draft',
-        contentJson,
-        checkJson,
+        json.content,
+        json.check,
         rulesVersion,
         verdict,
-        partsJson,
-        comboJson,
-        pricesJson,
+        json.parts,
+        json.ratedCombination,
+        json.prices,
         userId,
         at,
         null,

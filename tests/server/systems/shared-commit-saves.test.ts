@@ -54,7 +54,7 @@ describe('saves that arrive together', () => {
     for (const id of ids) expect(await revisionsOf(id)).toEqual([1]);
   });
 
-  it('when 20 techs each save their own record at the same moment, then each save is revision 2, answered as it reads back', async () => {
+  it('when 20 techs each save their own record at the same moment, then each save is revision 2, answered as it reads back (without the lists)', async () => {
     const records = (await Promise.all(Array.from({ length: TECHS }, () => create().expect(201)))).map((r) => r.body.id as number);
     const answers = await Promise.all(
       records.map((id, i) =>
@@ -69,8 +69,14 @@ describe('saves that arrive together', () => {
       expect(a.body).toMatchObject({ revision: 2, latestRevision: 2, serials: { outdoor: `QX2611A1${String(i).padStart(4, '0')}` } }),
     );
     for (const answer of answers.slice(0, 3)) {
-      const { currentCheck: _today, ...stored } = (await request(server).get(`/api/systems/${answer.body.id}`).set(auth()).expect(200))
-        .body;
+      // A save answers the revision it wrote; the app reloads the lists (readings, photos, revisions) itself.
+      const {
+        currentCheck: _today,
+        readings: _r,
+        attachments: _a,
+        revisions: _v,
+        ...stored
+      } = (await request(server).get(`/api/systems/${answer.body.id}`).set(auth()).expect(200)).body;
       expect(answer.body).toEqual(stored);
     }
     for (const id of records) expect(await revisionsOf(id)).toEqual([1, 2]);
