@@ -12,6 +12,7 @@ import { postgresBinDir, startCluster } from '../scripts/postgres-cluster.mjs';
 import { startBenchServer } from './bench-server';
 import { priceCsv, realImport } from './import.bench';
 import { round, type Measure } from './measure';
+import { coresDuring, describeCores, machineCpuS, postmasterPid, processCpuS, selfCpuS, treeCpuS, type CpuReaders } from './process-cpu';
 
 /**
  * Issue 13: the same API on SQLite and on PostgreSQL in one run — checks/s and catalog searches/s on
@@ -25,6 +26,8 @@ const DURATION_S = 10;
 const IMPORT_ROWS = 100_000;
 
 interface ServerInfo {
+  /** The server process's pid (set by the bench, not printed by the server). */
+  pid?: number;
   port: number;
   token: string;
   body: unknown;
@@ -41,6 +44,34 @@ const LOADS: Load[] = [
   // A catalog search as the Check screen's part picker sends it (fuse.js over the in-memory index).
   { name: 'search', path: '/api/catalog/outdoor-units?q=BX-HP&pageSize=20', method: 'GET' },
 ];
+
+interface LoadResult {
+  rps: number;
+  failed: number;
+  /** Cores each process kept busy during the measured run (see cpuReaders). */
+  cores: Record<string, number>;
+}
+
+/**
+ * Who used the machine's two cores during a run: each server, the PostgreSQL cluster (postmaster and
+ * backends), this process (autocannon, the load generator) and everything else on the machine. Shown
+ * beside the rates so a reader can tell a server-bound run from one the load generator or a neighbour capped.
+ */
+function cpuReaders(servers: ServerInfo[], postgresPid: number | null): CpuReaders {
+  const readers: CpuReaders = {};
+  servers.forEach((s, i) => (readers[servers.length > 1 ? `server ${i + 1}` : 'server'] = () => processCpuS(s.pid!)));
+  if (postgresPid !== null) readers.postgres = () => treeCpuS(postgresPid);
+  readers['load generator'] = selfCpuS;
+  readers.machine = machineCpuS;
+  return readers;
+}
+
+/** The machine's total minus the processes named: what other work on the box took. */
+function withRest(cores: Record<string, number>): Record<string, number> {
+  const { machine, ...named } = cores;
+  const rest = machine - Object.values(named).reduce((sum, v) => sum + v, 0);
+  return { ...named, 'rest of machine': Math.max(0, rest) };
+}
 
 /** Requests per second of one load spread over the servers (the connections split between them). */
 async function rps(servers: ServerInfo[], load: Load, durationS = DURATION_S): Promise<{ rps: number; failed: number }> {
@@ -59,12 +90,13 @@ async function rps(servers: ServerInfo[], load: Load, durationS = DURATION_S): P
   return { rps: results.reduce((sum, r) => sum + r.requests.average, 0), failed: results.reduce((sum, r) => sum + r.non2xx + r.errors, 0) };
 }
 
-/** Every load against these servers, each after a short warm-up. */
-async function measureAll(servers: ServerInfo[]): Promise<Record<Load['name'], { rps: number; failed: number }>> {
-  const out = {} as Record<Load['name'], { rps: number; failed: number }>;
+/** Every load against these servers, each after a short warm-up, with each process's CPU during the measured run. */
+async function measureAll(servers: ServerInfo[], postgresPid: number | null = null): Promise<Record<Load['name'], LoadResult>> {
+  const out = {} as Record<Load['name'], LoadResult>;
   for (const load of LOADS) {
     await rps(servers, load, 3);
-    out[load.name] = await rps(servers, load);
+    const { result, cores } = await coresDuring(cpuReaders(servers, postgresPid), () => rps(servers, load));
+    out[load.name] = { ...result, cores: withRest(cores) };
   }
   return out;
 }
@@ -91,12 +123,13 @@ export async function run(): Promise<Measure[]> {
   const start = async (env: Record<string, string> = {}) => {
     const { child, info } = await startBenchServer<ServerInfo>('checks-server.ts', env);
     children.push(child);
-    return info;
+    return { ...info, pid: child.pid };
   };
   const stopAll = () => {
     for (const child of children.splice(0)) child.kill('SIGTERM');
   };
-  const cluster = (await startCluster({ durable: true })) as { url: string; stop(): Promise<void> };
+  const cluster = (await startCluster({ durable: true })) as { url: string; dir: string; stop(): Promise<void> };
+  const postgresPid = postmasterPid(path.join(cluster.dir, 'data'));
   const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-bench-databases-'));
   try {
     const sqlite = await measureAll([await start()]);
@@ -104,33 +137,38 @@ export async function run(): Promise<Measure[]> {
 
     const apiUrl = await createDatabase(cluster.url, 'bench_api');
     const first = await start({ BENCH_DATABASE_URL: apiUrl });
-    const onePg = await measureAll([first]);
+    const onePg = await measureAll([first], postgresPid);
     const second = await start({ BENCH_DATABASE_URL: apiUrl, BENCH_JOIN: '1', BENCH_JWT_SECRET: first.jwtSecret });
-    const twoPg = await measureAll([first, second]);
+    const twoPg = await measureAll([first, second], postgresPid);
     stopAll();
 
     const file = path.join(dir, 'prices.csv');
     writeFileSync(file, priceCsv(IMPORT_ROWS));
     const sqliteImport = await realImport(dir, file);
-    const pgImport = await realImport(dir, file, await createDatabase(cluster.url, 'bench_import'));
+    const importUrl = await createDatabase(cluster.url, 'bench_import');
+    const postgresBefore = treeCpuS(postgresPid);
+    const pgImport = await realImport(dir, file, importUrl);
+    // Includes the migrations import-run applies to the empty database before its clock starts.
+    const postgresImportCpuS = treeCpuS(postgresPid) - postgresBefore;
     if (pgImport.rows !== IMPORT_ROWS) throw new Error(`PostgreSQL import inserted ${pgImport.rows} of ${IMPORT_ROWS} rows`);
 
     const note = `${CONNECTIONS} connections × ${DURATION_S} s on loopback after a 3 s warm-up; servers in their own processes, PostgreSQL 15 on the same machine (default durability)`;
     const failures = (r: { failed: number }) => (r.failed ? `; ${r.failed} failed requests` : '');
+    const cpu = (r: LoadResult) => `; CPU during the run: ${describeCores(r.cores)}`;
     const measures: Measure[] = [];
     for (const load of LOADS) {
       const s = sqlite[load.name];
       const p1 = onePg[load.name];
       const p2 = twoPg[load.name];
       measures.push(
-        { id: `api.${load.name}.rps.sqlite`, value: round(s.rps, 0), unit: 'req/s', note: `${note}; one server on SQLite${failures(s)}` },
+        { id: `api.${load.name}.rps.sqlite`, value: round(s.rps, 0), unit: 'req/s', note: `${note}; one server on SQLite${failures(s)}${cpu(s)}` },
         {
           id: `api.${load.name}.rps.postgres`,
           value: round(p1.rps, 0),
           unit: 'req/s',
           baseline: round(s.rps, 0),
           ratio: round(p1.rps / s.rps, 3),
-          note: `${note}; one server on PostgreSQL; baseline api.${load.name}.rps.sqlite; target ratio ≥ 0.67 (within 1.5×)${failures(p1)}`,
+          note: `${note}; one server on PostgreSQL; baseline api.${load.name}.rps.sqlite; target ratio ≥ 0.67 (within 1.5×)${failures(p1)}${cpu(p1)}`,
         },
         {
           id: `api.${load.name}.rps.postgres-2`,
@@ -138,7 +176,7 @@ export async function run(): Promise<Measure[]> {
           unit: 'req/s',
           baseline: round(p1.rps, 0),
           ratio: round(p2.rps / p1.rps, 3),
-          note: `${note}; two server processes on one PostgreSQL, connections split between them; baseline one server; target ratio ≥ 1.6 (needs a core per server)${failures(p2)}`,
+          note: `${note}; two server processes on one PostgreSQL, connections split between them; baseline one server; target ratio ≥ 1.6 (needs a core per server)${failures(p2)}${cpu(p2)}`,
         },
       );
     }
@@ -148,7 +186,9 @@ export async function run(): Promise<Measure[]> {
       unit: 's',
       baseline: round(sqliteImport.seconds, 3),
       ratio: round(pgImport.seconds / sqliteImport.seconds, 2),
-      note: `${IMPORT_ROWS.toLocaleString('en-US')}-row price file through the import service on PostgreSQL (INSERT … SELECT FROM unnest arrays); baseline the same on SQLite in this run`,
+      note:
+        `${IMPORT_ROWS.toLocaleString('en-US')}-row price file through the import service on PostgreSQL (INSERT … SELECT FROM unnest arrays); baseline the same on SQLite in this run; ` +
+        `CPU: import process ${round(pgImport.cpuSeconds, 2)} s on PostgreSQL, ${round(sqliteImport.cpuSeconds, 2)} s on SQLite; PostgreSQL ${round(postgresImportCpuS, 2)} s (with its migrations)`,
     });
     return measures;
   } finally {

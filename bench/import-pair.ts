@@ -1,26 +1,11 @@
-import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
 // @ts-expect-error -- a plain .mjs script shared with the PostgreSQL benches
 import { startCluster } from '../scripts/postgres-cluster.mjs';
 import { priceCsv, realImport } from './import.bench';
-
-/** CPU seconds (user + system) of a process tree: the PostgreSQL postmaster and its backends. */
-function treeCpuS(rootPid: number): number {
-  const ticks = 100; // USER_HZ on Linux
-  const stats = readdirSync('/proc').filter((d) => /^\d+$/.test(d)).map((pid) => {
-    try {
-      const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').replace(/^.*\) /, '').split(' ');
-      // utime + stime, and for the postmaster also cutime + cstime (backends that have exited).
-      const own = Number(fields[11]) + Number(fields[12]);
-      return { pid: Number(pid), ppid: Number(fields[1]), cpu: (Number(pid) === rootPid ? own + Number(fields[13]) + Number(fields[14]) : own) / ticks };
-    } catch {
-      return null;
-    }
-  }).filter((s) => s !== null);
-  return stats.filter((s) => s.pid === rootPid || s.ppid === rootPid).reduce((sum, s) => sum + s.cpu, 0);
-}
+import { postmasterPid, treeCpuS } from './process-cpu';
 
 /**
  * A local aid, not a bench: the 100k-row price import on SQLite and PostgreSQL, n times, with the
@@ -31,7 +16,7 @@ async function main() {
   const n = Number(process.argv[2] ?? 2);
   const which = process.argv[3] ?? 'both';
   const cluster = (await startCluster({ durable: true })) as { url: string; dir: string; stop(): Promise<void> };
-  const postmaster = Number(readFileSync(path.join(cluster.dir, 'data', 'postmaster.pid'), 'utf8').split('\n')[0]);
+  const postmaster = postmasterPid(path.join(cluster.dir, 'data'));
   const dir = mkdtempSync(path.join(os.tmpdir(), 'import-pair-'));
   try {
     const file = path.join(dir, 'prices.csv');

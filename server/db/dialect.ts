@@ -18,6 +18,11 @@ export interface UserRow {
  */
 export interface DatabaseDialect {
   readonly name: 'sqlite' | 'postgres';
+  /**
+   * Whether statements run in the database's own process (PostgreSQL), so this one can validate the rest
+   * of a file while the part before it is written; SQLite writes on this thread, nothing to overlap.
+   */
+  readonly writesInOwnProcess: boolean;
   /** One user by id: read on every authenticated request, so no query builder. */
   userById(dataSource: DataSource, id: number): Promise<UserRow | null>;
   /** Many rows into one table inside the manager's transaction (a prepared statement / one unnest INSERT). */

@@ -61,6 +61,7 @@ function isConstant(values: unknown[]): boolean {
  */
 export const postgresDialect: DatabaseDialect = {
   name: 'postgres',
+  writesInOwnProcess: true,
 
   async userById(dataSource, id) {
     const rows = (await dataSource.query('SELECT "id", "email", "name", "role", "active" FROM "users" WHERE "id" = $1', [id])) as UserRow[];

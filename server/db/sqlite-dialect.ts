@@ -31,6 +31,7 @@ const quote = (name: string) => `"${name}"`;
  */
 export const sqliteDialect: DatabaseDialect = {
   name: 'sqlite',
+  writesInOwnProcess: false,
 
   async userById(dataSource: DataSource, id: number): Promise<UserRow | null> {
     const raw = handleOf(dataSource.manager);

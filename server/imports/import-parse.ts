@@ -129,7 +129,24 @@ export async function parseImportFileInSlices(
   }
 }
 
-function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, string>, today: string | undefined, decimal: DecimalChoice): Generator<void, ParsedFile> {
+/** Where a parse in steps has got to: the valid rows so far (the list keeps growing) and the rows rejected so far. */
+export interface ParseProgress {
+  rows: ParsedRow[];
+  rejected: number;
+}
+
+/**
+ * parseImportFile as a generator: one step reads the whole file (and settles a price file's decimal mark),
+ * then each step validates ROWS_PER_SLICE rows. Valid rows never leave the list once in it: a row that
+ * repeats an earlier key is the one rejected.
+ */
+export function* parseSteps(
+  buffer: Buffer,
+  kind: ImportKind,
+  mapping: Record<string, string>,
+  today: string | undefined,
+  decimal: DecimalChoice,
+): Generator<ParseProgress, ParsedFile> {
   const text = decodeCsv(buffer);
   const rows: ParsedRow[] = [];
   const errors: ImportRowError[] = [];
@@ -217,7 +234,7 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
       pendingLines.push(line);
     },
   });
-  yield;
+  yield { rows, rejected };
   if (!header) throw new AppError('empty-file', 'The file holds no header row.', 422);
   if (rowCount === 0) throw new AppError('empty-file', 'The file has a header but no rows.', 422, { foundColumns: header.foundColumns });
 
@@ -244,7 +261,7 @@ function* parseSteps(buffer: Buffer, kind: ImportKind, mapping: Record<string, s
   for (let i = 0; i < pendingCells.length; i++) {
     const problem = problems.size > 0 ? problems.get(i) : undefined;
     if (problem !== undefined || quickPriceCells === null || !quickPriceCells(i, pendingCells[i])) validate(pendingCells[i], pendingLines[i], problem);
-    if (i % ROWS_PER_SLICE === ROWS_PER_SLICE - 1) yield;
+    if (i % ROWS_PER_SLICE === ROWS_PER_SLICE - 1) yield { rows, rejected };
   }
   return { kind, rows, errors, errorsTotal, decimalConvention, decimalSource, rowCount, rejected, presentFields, header };
 }

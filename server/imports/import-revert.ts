@@ -33,7 +33,8 @@ export async function revertImportRows(manager: EntityManager, record: ImportRec
   for (const change of changes) {
     await manager.update(entity, change.rowId, JSON.parse(change.before) as Record<string, unknown>);
   }
-  await manager.delete(entity, { importId: record.id });
+  // A price file's rows are found through price_entries' (distributorId, importId) index.
+  await manager.delete(entity, record.kind === 'prices' ? { distributorId: record.distributorId!, importId: record.id } : { importId: record.id });
   // Those changes are spent; a later revert check must not see them as live.
   await manager.delete(ImportChange, { importId: record.id });
 }

@@ -10,8 +10,10 @@ import { AppError, conflict, notFound } from '../lib/errors';
 import { User } from '../users/user.entity';
 import { ColumnMapping } from './column-mapping.entity';
 import { applyCatalogPlan, applyPricePlan } from './import-apply';
-import { parseImportFileInSlices, type ParsedFile, type ParsedRow } from './import-parse';
-import { planCatalog, planPrices, type ImportPlan } from './import-plan';
+import { dialectOf } from '../db/dialect';
+import { parseImportFileInSlices, parseSteps, type DecimalChoice, type ParsedFile, type ParsedRow } from './import-parse';
+import { planCatalog, planPrices, pricePlanner, type ImportPlan } from './import-plan';
+import { finishParse, RowsRejected, writePricesWhileParsing } from './price-commit-stream';
 import { revertImportRows } from './import-revert';
 import { toImportDetail, toImportView, type ImportDetail, type ImportView } from './import-view';
 import { ImportRecord, type ImportRowError } from './import.entity';
@@ -48,16 +50,12 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
   const known = distributorName ? await ctx.dataSource.getRepository(Distributor).findOneBy({ name: distributorName }) : null;
   const saved = known ? await ctx.dataSource.manager.findOneBy(ColumnMapping, { distributorId: known.id, kind: input.kind }) : null;
   const mapping = { ...(saved?.mapping ?? {}), ...(input.mapping ?? {}) };
-  const parsed = await parseImportFileInSlices(input.buffer, input.kind, mapping, input.today, { chosen: input.decimalConvention, saved: saved?.decimalConvention });
-
-  if (!input.dryRun && parsed.rejected > 0) {
-    throw new AppError('rows-rejected', `${parsed.rejected} of ${parsed.rowCount} rows are not valid; nothing was imported. Fix them, or upload as a preview and commit the valid rows.`, 422, {
-      counts: { rows: parsed.rowCount, rejected: parsed.rejected },
-      errorsTotal: parsed.errorsTotal,
-      ...(input.kind === 'prices' ? { decimalConvention: parsed.decimalConvention } : {}),
-      errors: parsed.errors,
-    });
+  const decimal: DecimalChoice = { chosen: input.decimalConvention, saved: saved?.decimalConvention };
+  if (!input.dryRun && input.kind === 'prices' && distributorName && dialectOf(ctx.dataSource).writesInOwnProcess) {
+    return commitPricesWhileParsing(ctx, input, distributorName, mapping, decimal);
   }
+  const parsed = await parseImportFileInSlices(input.buffer, input.kind, mapping, input.today, decimal);
+  if (!input.dryRun && parsed.rejected > 0) throw rowsRejected(parsed);
 
   const view = await writeCatalog(ctx, async (manager) => {
     const distributor = distributorName ? await ensureDistributor(manager, distributorName) : null;
@@ -90,6 +88,66 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
     }
     return toImportDetail(record, distributor?.name);
   });
+  invalidateCatalogIndex(ctx.dataSource);
+  return view;
+}
+
+/** The refusal of a file to commit with invalid rows: nothing of it was kept. */
+function rowsRejected(parsed: ParsedFile): AppError {
+  return new AppError('rows-rejected', `${parsed.rejected} of ${parsed.rowCount} rows are not valid; nothing was imported. Fix them, or upload as a preview and commit the valid rows.`, 422, {
+    counts: { rows: parsed.rowCount, rejected: parsed.rejected },
+    errorsTotal: parsed.errorsTotal,
+    ...(parsed.kind === 'prices' ? { decimalConvention: parsed.decimalConvention } : {}),
+    errors: parsed.errors,
+  });
+}
+
+/**
+ * uploadImport's commit of a price file where the database works in its own process (PostgreSQL): the
+ * file is read whole first (a malformed file or header fails before any lock), then its rows are written
+ * while the rest is still being validated (price-commit-stream.ts), so the two use a core each. At the
+ * first invalid row the transaction rolls back and the lock is let go; the rest of the file is then read
+ * outside it for the error report, the same refusal as when the file is checked whole first.
+ */
+async function commitPricesWhileParsing(
+  ctx: AppContext,
+  input: UploadInput,
+  distributorName: string,
+  mapping: Record<string, string>,
+  decimal: DecimalChoice,
+): Promise<ImportDetail> {
+  const steps = parseSteps(input.buffer, 'prices', mapping, input.today, decimal);
+  steps.next();
+  let view: ImportDetail;
+  try {
+    view = await writeCatalog(ctx, async (manager) => {
+      const distributor = await ensureDistributor(manager, distributorName);
+      const plan = await pricePlanner(manager, distributor.id);
+      const record = await manager.save(
+        manager.create(ImportRecord, { kind: 'prices', fileName: input.fileName.slice(0, 255), distributorId: distributor.id, uploadedById: input.userId, status: 'preview', errors: [], payload: null }),
+      );
+      const { parsed, totals } = await writePricesWhileParsing(manager, steps, plan, distributor.id, record.id);
+      const newMapping = input.mapping && Object.keys(input.mapping).length > 0;
+      const newDecimal = parsed.decimalSource === 'file' || parsed.decimalSource === 'chosen' ? parsed.decimalConvention : null;
+      if (newMapping || newDecimal) await rememberMapping(manager, distributor.id, 'prices', newMapping ? mapping : null, newDecimal);
+      await bumpCatalogVersion(manager, 'prices');
+      Object.assign(record, totals, {
+        rows: parsed.rowCount,
+        rejected: parsed.rejected,
+        errors: parsed.errors,
+        errorsTotal: parsed.errorsTotal,
+        decimalConvention: parsed.decimalConvention,
+        decimalSource: parsed.decimalSource,
+        status: 'committed',
+        committedAt: new Date(),
+      });
+      await manager.save(record);
+      return toImportDetail(record, distributor.name);
+    });
+  } catch (err) {
+    if (err instanceof RowsRejected) throw rowsRejected(err.parsed ?? (await finishParse(steps)));
+    throw err;
+  }
   invalidateCatalogIndex(ctx.dataSource);
   return view;
 }

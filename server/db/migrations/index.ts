@@ -9,6 +9,7 @@ import { CatalogVersions1765300000000 } from './1765300000000-catalog-versions';
 import { ChangeNotify1765400000000 } from './1765400000000-change-notify';
 import { RebateTiersOneList1765430000000 } from './1765430000000-rebate-tiers-one-list';
 import { RevisionBriefIndex1765440000000 } from './1765440000000-revision-brief-index';
+import { PriceIndexByModel1765460000000 } from './1765460000000-price-index-by-model';
 
 /** Every migration, in order. Add new ones at the end (one file per change, named by timestamp). */
 export const migrations = [
@@ -23,4 +24,5 @@ export const migrations = [
   ChangeNotify1765400000000,
   RebateTiersOneList1765430000000,
   RevisionBriefIndex1765440000000,
+  PriceIndexByModel1765460000000,
 ];
