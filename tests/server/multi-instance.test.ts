@@ -1,34 +1,20 @@
 import type { Express } from 'express';
 import pg from 'pg';
-import pino from 'pino';
 import request from 'supertest';
-import type { DataSource } from 'typeorm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
+import { describe, expect, it } from 'vitest';
 import { openDatabase } from '../../server/db/data-source';
 import { migrations } from '../../server/db/migrations';
-import { databaseTarget } from '../../server/env';
-import { createTestApp, TEST_PASSWORD, type TestApp } from '../helpers/test-app';
+import { TEST_PASSWORD } from '../helpers/test-app';
 import { sql } from '../helpers/sql';
 import { databaseUrl, onPostgres, testPostgresUrl } from '../helpers/test-database';
+import { twoInstances } from '../helpers/two-instances';
 
 // Two server instances on one PostgreSQL database (issue 13): A is a test app, B a second app with its
 // own connection pool, in-memory catalog index and rate limits, sharing only the database and the
 // JWT secret, as two processes behind a load balancer would.
 // PostgreSQL only: SQLite serves one instance per file by design, so this is skipped there.
 describe.skipIf(!onPostgres)('two instances on one PostgreSQL', () => {
-  let a: TestApp;
-  let bSource: DataSource;
-  let b: Express;
-  beforeAll(async () => {
-    a = await createTestApp();
-    bSource = await openDatabase(databaseTarget(a.ctx.config));
-    b = createApp({ dataSource: bSource, config: a.ctx.config, logger: pino({ level: 'silent' }) });
-  });
-  afterAll(async () => {
-    await bSource?.destroy();
-    await a?.close();
-  });
+  const two = twoInstances();
 
   const OUTDOOR = ['model,brand,system_type,refrigerant,nominal_tons,seer2,mca_amps,mocp_amps', 'MI-30-X,Twinfield,ac,R-454B,2.5,15.2,16,25'].join('\n');
   const search = (app: Express, token: string) =>
@@ -36,33 +22,33 @@ describe.skipIf(!onPostgres)('two instances on one PostgreSQL', () => {
   const models = (res: request.Response) => (res.body.items as { model: string }[]).map((i) => i.model);
 
   it('when a user signs in on A, then the token works on B', async () => {
-    const signIn = await request(a.app).post('/api/auth/sign-in').send({ email: 'tech@test.invalid', password: TEST_PASSWORD }).expect(200);
-    const me = await request(b).get('/api/auth/me').set('Authorization', `Bearer ${signIn.body.token}`).expect(200);
+    const signIn = await request(two.a.app).post('/api/auth/sign-in').send({ email: 'tech@test.invalid', password: TEST_PASSWORD }).expect(200);
+    const me = await request(two.b).get('/api/auth/me').set('Authorization', `Bearer ${signIn.body.token}`).expect(200);
     expect(me.body.user ?? me.body).toMatchObject({ email: 'tech@test.invalid', role: 'tech' });
   });
 
   it('when an import commits on A, then a search on B sees it at once, and when B reverts it, A sees that at once', async () => {
-    const admin = a.tokenFor('admin');
+    const admin = two.a.tokenFor('admin');
     // Both instances build their index first, so a stale one would answer from memory.
-    expect(models(await search(a.app, admin))).toEqual([]);
-    expect(models(await search(b, admin))).toEqual([]);
+    expect(models(await search(two.a.app, admin))).toEqual([]);
+    expect(models(await search(two.b, admin))).toEqual([]);
 
-    const imported = await request(a.app)
+    const imported = await request(two.a.app)
       .post('/api/imports')
       .set('Authorization', `Bearer ${admin}`)
       .field('kind', 'outdoor-units')
       .field('dryRun', 'false')
       .attach('file', Buffer.from(OUTDOOR), { filename: 'outdoor.csv', contentType: 'text/csv' })
       .expect(201);
-    expect(models(await search(b, admin))).toEqual(['MI-30-X']);
+    expect(models(await search(two.b, admin))).toEqual(['MI-30-X']);
 
-    await request(b).post(`/api/imports/${imported.body.import.id}/revert`).set('Authorization', `Bearer ${admin}`).expect(200);
-    expect(models(await search(a.app, admin))).toEqual([]);
-    expect(models(await search(b, admin))).toEqual([]);
+    await request(two.b).post(`/api/imports/${imported.body.import.id}/revert`).set('Authorization', `Bearer ${admin}`).expect(200);
+    expect(models(await search(two.a.app, admin))).toEqual([]);
+    expect(models(await search(two.b, admin))).toEqual([]);
   });
 
   it('when A and B commit previews at the same moment, then both land whole and neither is lost', async () => {
-    const admin = a.tokenFor('admin');
+    const admin = two.a.tokenFor('admin');
     const preview = (app: Express, model: string) =>
       request(app)
         .post('/api/imports')
@@ -71,15 +57,15 @@ describe.skipIf(!onPostgres)('two instances on one PostgreSQL', () => {
         .field('dryRun', 'true')
         .attach('file', Buffer.from(OUTDOOR.replace('MI-30-X', model)), { filename: 'outdoor.csv', contentType: 'text/csv' })
         .expect(201);
-    const [pa, pb] = await Promise.all([preview(a.app, 'MI-A-1'), preview(b, 'MI-B-1')]);
+    const [pa, pb] = await Promise.all([preview(two.a.app, 'MI-A-1'), preview(two.b, 'MI-B-1')]);
     const commit = (app: Express, id: number) => request(app).post(`/api/imports/${id}/commit`).set('Authorization', `Bearer ${admin}`);
-    const [ca, cb] = await Promise.all([commit(a.app, pa.body.import.id), commit(b, pb.body.import.id)]);
+    const [ca, cb] = await Promise.all([commit(two.a.app, pa.body.import.id), commit(two.b, pb.body.import.id)]);
     expect([ca.status, cb.status]).toEqual([200, 200]);
     // One preview committed from both instances at once: exactly one wins (the write lock spans instances).
-    const pc = await preview(a.app, 'MI-C-1');
-    const both = await Promise.all([commit(a.app, pc.body.import.id), commit(b, pc.body.import.id)]);
+    const pc = await preview(two.a.app, 'MI-C-1');
+    const both = await Promise.all([commit(two.a.app, pc.body.import.id), commit(two.b, pc.body.import.id)]);
     expect(both.map((r) => r.status).sort()).toEqual([200, 409]);
-    const list = await request(b).get('/api/catalog/outdoor-units').query({ q: 'MI-', pageSize: 100 }).set('Authorization', `Bearer ${admin}`).expect(200);
+    const list = await request(two.b).get('/api/catalog/outdoor-units').query({ q: 'MI-', pageSize: 100 }).set('Authorization', `Bearer ${admin}`).expect(200);
     expect(models(list).sort()).toEqual(['MI-A-1', 'MI-B-1', 'MI-C-1']);
   });
 
