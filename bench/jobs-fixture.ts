@@ -20,6 +20,7 @@ import { addReading } from '../server/systems/readings.service';
 import { createSystem } from '../server/systems/systems.service';
 import { User } from '../server/users/user.entity';
 import type { SystemCreate } from '../shared/schemas/systems';
+import { DEMO_CHARGE_READING } from '../seed/demo-jobs';
 
 export interface JobsFixture {
   ctx: AppContext;
@@ -129,17 +130,7 @@ export async function openJobsFixture(): Promise<JobsFixture> {
   };
   const job = await createJob(ctx, { customerName: 'Bench Customer', siteAddress: '1 Bench Way', state: 'TX' }, tech.id);
   const record = await createSystem(ctx, job.id, body, tech.id);
-  const charge = {
-    refrigerant: 'R-454B' as const,
-    meteringType: 'txv' as const,
-    suctionPsig: 128,
-    suctionLineF: 59,
-    liquidPsig: 330,
-    liquidLineF: 95,
-    indoorWbF: 63,
-    indoorDbF: 75,
-    outdoorDbF: 90,
-  };
+  const charge = DEMO_CHARGE_READING;
   await addReading(
     ctx,
     record.id,

@@ -10,6 +10,19 @@ import { User } from '../server/users/user.entity';
  * Two demo jobs (invented customers and addresses): an open one with a draft record of a demo
  * R-454B heat pump and cased coil (on the kept furnace), serials and a first set of readings; and a closed one.
  */
+/** An invented R-454B TXV start-up on a 90 °F day (demo and bench data, not a reference value). */
+export const DEMO_CHARGE_READING = {
+  refrigerant: 'R-454B',
+  meteringType: 'txv',
+  suctionPsig: 128,
+  suctionLineF: 59,
+  liquidPsig: 330,
+  liquidLineF: 95,
+  indoorWbF: 63,
+  indoorDbF: 75,
+  outdoorDbF: 90,
+} as const;
+
 export async function seedDemoJobs(ctx: AppContext): Promise<void> {
   const tech = await ctx.dataSource.getRepository(User).findOneByOrFail({ role: 'tech' });
   const idOf = async (entity: typeof OutdoorUnit | typeof IndoorCoil, model: string) =>
@@ -49,17 +62,7 @@ export async function seedDemoJobs(ctx: AppContext): Promise<void> {
     record.id,
     {
       label: 'First start',
-      charge: {
-        refrigerant: 'R-454B',
-        meteringType: 'txv',
-        suctionPsig: 128,
-        suctionLineF: 59,
-        liquidPsig: 330,
-        liquidLineF: 95,
-        indoorWbF: 63,
-        indoorDbF: 75,
-        outdoorDbF: 90,
-      },
+      charge: DEMO_CHARGE_READING,
     },
     tech.id,
   );
