@@ -1,4 +1,4 @@
-// Metro for the web export: Expo's defaults plus three aliases that keep the main bundle small.
+// Metro for the web export: Expo's defaults plus four aliases that keep the main bundle small.
 // Each one is a footgun entry in DEVELOPERS.md ("Bundle aliases").
 const fs = require('node:fs');
 const path = require('node:path');
@@ -15,6 +15,9 @@ const MCI_GLYPHS = 'glyphmaps/MaterialCommunityIcons.json';
  * npm keeps three copies of TanStack's query-core (react-query's 5.108, the persister's 5.104.x) and two of
  * the persist-client core: one of each is enough, and one QueryClient class is what the providers expect.
  */
+/** Paper's barrel evaluates every component it re-exports; the shim loads each on first use (scripts/paper-lazy-barrel.mjs). */
+const PAPER_BARREL = 'react-native-paper';
+const PAPER_LAZY = here('metro-shims/react-native-paper-lazy.js');
 const SINGLE_COPY = {
   '@tanstack/query-core': here('node_modules/@tanstack/react-query/package.json'),
   '@tanstack/query-persist-client-core': here('node_modules/@tanstack/react-query-persist-client/package.json'),
@@ -27,6 +30,7 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
   if (moduleName.endsWith(MCI_GLYPHS)) {
     return { type: 'sourceFile', filePath: here('assets/fonts/material-community-glyphs.json') };
   }
+  if (moduleName === PAPER_BARREL) return { type: 'sourceFile', filePath: PAPER_LAZY };
   const singleFrom = SINGLE_COPY[moduleName];
   if (singleFrom) return context.resolveRequest({ ...context, originModulePath: singleFrom }, moduleName, platform);
   return context.resolveRequest(context, moduleName, platform);
