@@ -2,7 +2,8 @@
  * Not a benchmark: a diagnostic. One cold /sign-in load in Chromium with 4× CPU throttling (as
  * bench/web-offline.bench.ts measures it) under DevTools' sampling profiler, then the top self-time
  * functions grouped by script and by function. Run: `node --import tsx bench/web-profile.ts [out.cpuprofile]`
- * after `node scripts/build-web.mjs`; it starts the bench server itself.
+ * after `node scripts/build-web.mjs`; it starts the bench server itself
+ * (WEB_DIR=<dir> serves another export, for an A/B against an older build).
  */
 import { spawn } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
@@ -28,19 +29,30 @@ interface Profile {
 /** `--runs N`: no profiler, N cold loads, each stamp printed (quick before/after checks). */
 async function timedLoads(browser: import('playwright-core').Browser, base: string, runs: number) {
   const times: number[] = [];
+  const cpu: number[] = [];
+  const script: number[] = [];
   for (let i = 0; i < runs; i++) {
     const context = await browser.newContext({ viewport: { width: 390, height: 844 }, baseURL: base, serviceWorkers: 'block' });
     const page = await context.newPage();
     const cdp = await context.newCDPSession(page);
     await cdp.send('Emulation.setCPUThrottlingRate', { rate: 4 });
+    await cdp.send('Performance.enable', { timeDomain: 'threadTicks' });
     await page.addInitScript(shownAtScript('[data-testid="sign-in-email"]'));
     await page.goto('/sign-in');
     await page.waitForSelector('[data-testid="sign-in-email"]', { state: 'attached', timeout: 60_000 });
+    // CPU time of the page's process so far (the stamp plus the moment the wait takes to notice): unlike the
+    // wall-clock stamp, it barely moves with the machine's load, so it compares builds on a busy machine.
+    const { metrics } = (await cdp.send('Performance.getMetrics')) as { metrics: { name: string; value: number }[] };
+    const metric = (name: string) => Math.round((metrics.find((m) => m.name === name)?.value ?? 0) * 1000);
+    cpu.push(metric('ProcessTime'));
+    script.push(metric('ScriptDuration'));
     await page.waitForTimeout(100);
     times.push(Math.round(await page.evaluate<number>('window.__shownAt')));
     await context.close();
   }
   const sorted = [...times].sort((a, b) => a - b);
+  const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+  console.log(`process CPU ${cpu.join(', ')} (median ${median(cpu)} ms); script ${script.join(', ')} (median ${median(script)} ms)`);
   console.log(`stamps ${times.join(', ')}; median ${sorted[Math.floor(sorted.length / 2)]} ms; load ${(await import('node:os')).loadavg()[0].toFixed(1)}`);
 }
 
@@ -50,7 +62,7 @@ async function main() {
   const out = runs ? undefined : process.argv[2];
   const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'checks-server.ts')], {
     cwd: root,
-    env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json'), TANDEM_WEB_DIR: path.join(root, 'dist') },
+    env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json'), TANDEM_WEB_DIR: process.env.WEB_DIR ?? path.join(root, 'dist') },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
   const line = await new Promise<string>((resolve) => createInterface({ input: child.stdout! }).once('line', resolve));

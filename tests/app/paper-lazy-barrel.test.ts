@@ -1,7 +1,7 @@
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { PAPER_DIR, paperExports, ROOT, SHIM_FILE, shimSource } from '../../scripts/paper-lazy-barrel.mjs';
+import { BARRELS, PAPER_DIR, paperExports, ROOT, shimSource } from '../../scripts/paper-lazy-barrel.mjs';
 
 // metro.config.js resolves 'react-native-paper' to this shim on the web; it must stay in step with Paper's index.
 const PAPER_CJS = path.join(ROOT, 'node_modules/react-native-paper/lib/commonjs');
@@ -17,9 +17,15 @@ function cjsNames(file: string): string[] {
 }
 
 describe('Paper lazy barrel (metro-shims/react-native-paper-lazy.js)', () => {
-  it('when the committed shim is compared with what the script writes for the installed Paper, then they are the same', () => {
+  it('when the committed shims are compared with what the script writes for the installed Paper and react-native-web, then they are the same', () => {
     // Fix: node scripts/paper-lazy-barrel.mjs
-    expect(readFileSync(path.join(ROOT, SHIM_FILE), 'utf8')).toBe(shimSource());
+    for (const barrel of BARRELS) expect(readFileSync(path.join(ROOT, barrel.shim), 'utf8')).toBe(shimSource(ROOT, barrel));
+  });
+
+  it("when react-native-web's CommonJS build of its index is read, then the web shim exports the same names", () => {
+    // Source: react-native-web's dist/cjs/index.js (its own Babel output of the same index).
+    const expected = cjsNames(path.join(ROOT, 'node_modules/react-native-web/dist/cjs/index.js')).sort();
+    expect(paperExports(ROOT, BARRELS[1].dir).map(([name]) => name).sort()).toEqual(expected);
   });
 
   it("when compared with Paper's own CommonJS build of its index, then the shim exports the same names, each once", () => {
