@@ -9,11 +9,9 @@ import { ConnectionBanner } from '@/components/ui/connection-banner';
 import { darkTheme, lightTheme } from '@/constants/theme';
 import { createQueryClient } from '@/hooks/query-client';
 import { persistOptions } from '@/hooks/query-persistence';
-import { preloadRoutes } from '@/hooks/preload-routes';
 import { registerServiceWorker } from '@/hooks/register-service-worker';
 import { SessionProvider } from '@/hooks/use-session';
 import { useTextFonts } from '@/hooks/use-text-fonts';
-import { whenIdle } from '@/hooks/when-idle';
 import { PAPER_SETTINGS } from '@/components/ui/paper-icon';
 
 /**
@@ -29,8 +27,6 @@ export default function RootLayout() {
   const theme = scheme === 'dark' ? darkTheme : lightTheme;
   // Web production builds only: the next visit opens with no signal.
   useEffect(registerServiceWorker, []);
-  // Web: every screen's chunk once the first screen is up, so a screen opened later with no signal has its code.
-  useEffect(() => whenIdle(() => preloadRoutes()), []);
 
   if (!fontsLoaded) {
     return (

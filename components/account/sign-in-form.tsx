@@ -6,6 +6,7 @@ import { SignInSchema } from '@/shared/schemas/auth';
 import { errorText } from '@/hooks/error-text';
 import { useSession } from '@/hooks/use-session';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { preloadRoutes } from '@/hooks/preload-routes';
 import { useZodForm } from '@/hooks/use-zod-form';
 import { whenIdle } from '@/hooks/when-idle';
 import { FormField } from '@/components/ui/form-field';
@@ -13,7 +14,8 @@ import { MessageBanner } from '@/components/ui/message-banner';
 
 /**
  * The schema, behind a function: zod is the largest module the first screen would evaluate, and the form
- * needs it only to validate. It is loaded once the form is on screen and the browser is idle.
+ * needs it only to validate. It is loaded once the form is on screen and the browser is idle, and so are the
+ * other screens' chunks (hooks/preload-routes.web.ts), so that opening them later works with no signal.
  */
 const signInSchema = () => SignInSchema;
 
@@ -21,7 +23,14 @@ export function SignInForm() {
   const theme = useTandemTheme();
   const { signIn } = useSession();
   const form = useZodForm(signInSchema, { email: '', password: '' });
-  useEffect(() => whenIdle(signInSchema), []);
+  useEffect(
+    () =>
+      whenIdle(() => {
+        signInSchema();
+        preloadRoutes();
+      }),
+    [],
+  );
   const [failure, setFailure] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
 
