@@ -1,4 +1,4 @@
-// Metro for the web export: Expo's defaults plus three aliases that keep the main bundle small.
+// Metro for the web export: Expo's defaults plus five aliases that keep the main bundle small.
 // Each one is a footgun entry in DEVELOPERS.md ("Bundle aliases").
 const fs = require('node:fs');
 const path = require('node:path');
@@ -15,6 +15,12 @@ const MCI_GLYPHS = 'glyphmaps/MaterialCommunityIcons.json';
  * npm keeps three copies of TanStack's query-core (react-query's 5.108, the persister's 5.104.x) and two of
  * the persist-client core: one of each is enough, and one QueryClient class is what the providers expect.
  */
+/** Paper's barrel evaluates every component it re-exports; the shim loads each on first use (scripts/paper-lazy-barrel.mjs). */
+const PAPER_BARREL = 'react-native-paper';
+const PAPER_LAZY = here('metro-shims/react-native-paper-lazy.js');
+/** react-native-web's index (what `react-native` is on the web) has the same problem: the same kind of shim. */
+const RNW_BARRELS = new Set(['react-native', 'react-native-web']);
+const RNW_LAZY = here('metro-shims/react-native-web-lazy.js');
 const SINGLE_COPY = {
   '@tanstack/query-core': here('node_modules/@tanstack/react-query/package.json'),
   '@tanstack/query-persist-client-core': here('node_modules/@tanstack/react-query-persist-client/package.json'),
@@ -27,6 +33,8 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
   if (moduleName.endsWith(MCI_GLYPHS)) {
     return { type: 'sourceFile', filePath: here('assets/fonts/material-community-glyphs.json') };
   }
+  if (moduleName === PAPER_BARREL) return { type: 'sourceFile', filePath: PAPER_LAZY };
+  if (platform === 'web' && RNW_BARRELS.has(moduleName)) return { type: 'sourceFile', filePath: RNW_LAZY };
   const singleFrom = SINGLE_COPY[moduleName];
   if (singleFrom) return context.resolveRequest({ ...context, originModulePath: singleFrom }, moduleName, platform);
   return context.resolveRequest(context, moduleName, platform);

@@ -3,9 +3,10 @@ import type { z } from 'zod';
 
 /**
  * Minimal form state validated by a shared zod schema (the same one the server uses).
- * Returns per-field messages keyed by the first path segment.
+ * Returns per-field messages keyed by the first path segment. `schema` may be a function returning it: the
+ * schema (and zod) is then loaded on the first validation, not on the first render (the sign-in screen).
  */
-export function useZodForm<S extends z.ZodType<unknown, Record<string, unknown>>>(schema: S, initial: z.input<S>) {
+export function useZodForm<S extends z.ZodType<unknown, Record<string, unknown>>>(schema: S | (() => S), initial: z.input<S>) {
   const [values, setValues] = useState<z.input<S>>(initial);
   const [errors, setErrors] = useState<Record<string, string>>({});
 
@@ -21,7 +22,7 @@ export function useZodForm<S extends z.ZodType<unknown, Record<string, unknown>>
 
   /** Validates; on success returns the parsed value, else sets the messages and returns null. */
   const validate = useCallback((): z.output<S> | null => {
-    const result = schema.safeParse(values);
+    const result = (typeof schema === 'function' ? schema() : schema).safeParse(values);
     if (result.success) {
       setErrors({});
       return result.data;

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { KeyboardAvoidingView, ScrollView, StyleSheet, View } from 'react-native';
 import { Button, Text } from 'react-native-paper';
 import { spacing, TOUCH_TARGET } from '@/constants/theme';
@@ -6,14 +6,31 @@ import { SignInSchema } from '@/shared/schemas/auth';
 import { errorText } from '@/hooks/error-text';
 import { useSession } from '@/hooks/use-session';
 import { useTandemTheme } from '@/hooks/use-tandem-theme';
+import { preloadRoutes } from '@/hooks/preload-routes';
 import { useZodForm } from '@/hooks/use-zod-form';
+import { whenIdle } from '@/hooks/when-idle';
 import { FormField } from '@/components/ui/form-field';
 import { MessageBanner } from '@/components/ui/message-banner';
+
+/**
+ * The schema, behind a function: zod is the largest module the first screen would evaluate, and the form
+ * needs it only to validate. It is loaded once the form is on screen and the browser is idle, and so are the
+ * other screens' chunks (hooks/preload-routes.web.ts), so that opening them later works with no signal.
+ */
+const signInSchema = () => SignInSchema;
 
 export function SignInForm() {
   const theme = useTandemTheme();
   const { signIn } = useSession();
-  const form = useZodForm(SignInSchema, { email: '', password: '' });
+  const form = useZodForm(signInSchema, { email: '', password: '' });
+  useEffect(
+    () =>
+      whenIdle(() => {
+        signInSchema();
+        preloadRoutes();
+      }),
+    [],
+  );
   const [failure, setFailure] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
 
