@@ -10,7 +10,7 @@ import autocannon from 'autocannon';
 // @ts-expect-error -- a plain .mjs script shared with scripts/with-postgres.mjs and the api-pg tests
 import { postgresBinDir, startCluster } from '../scripts/postgres-cluster.mjs';
 import { startBenchServer } from './bench-server';
-import { priceCsv, realImport } from './import.bench';
+import { clearRealImport, IMPORT_ROUNDS, median, priceCsv, realImport } from './import.bench';
 import { round, type Measure } from './measure';
 import { coresDuring, describeCores, machineCpuS, postmasterPid, processCpuS, selfCpuS, treeCpuS, type CpuReaders } from './process-cpu';
 
@@ -144,13 +144,25 @@ export async function run(): Promise<Measure[]> {
 
     const file = path.join(dir, 'prices.csv');
     writeFileSync(file, priceCsv(IMPORT_ROWS));
-    const sqliteImport = await realImport(dir, file);
-    const importUrl = await createDatabase(cluster.url, 'bench_import');
-    const postgresBefore = treeCpuS(postgresPid);
-    const pgImport = await realImport(dir, file, importUrl);
-    // Includes the migrations import-run applies to the empty database before its clock starts.
-    const postgresImportCpuS = treeCpuS(postgresPid) - postgresBefore;
-    if (pgImport.rows !== IMPORT_ROWS) throw new Error(`PostgreSQL import inserted ${pgImport.rows} of ${IMPORT_ROWS} rows`);
+    // Alternating rounds on fresh databases, medians reported (one run alone swings by a third here).
+    const sqliteRuns: Awaited<ReturnType<typeof realImport>>[] = [];
+    const pgRuns: Awaited<ReturnType<typeof realImport>>[] = [];
+    let postgresImportCpuS = 0;
+    for (let i = 0; i < IMPORT_ROUNDS; i++) {
+      clearRealImport(dir);
+      sqliteRuns.push(await realImport(dir, file));
+      const importUrl = await createDatabase(cluster.url, `bench_import_${i}`);
+      const postgresBefore = treeCpuS(postgresPid);
+      const run = await realImport(dir, file, importUrl);
+      // Includes the migrations import-run applies to the empty database before its clock starts.
+      postgresImportCpuS += (treeCpuS(postgresPid) - postgresBefore) / IMPORT_ROUNDS;
+      if (run.rows !== IMPORT_ROWS) throw new Error(`PostgreSQL import inserted ${run.rows} of ${IMPORT_ROWS} rows`);
+      pgRuns.push(run);
+    }
+    const middle = (runs: typeof pgRuns) => runs.find((r) => r.seconds === median(runs.map((x) => x.seconds)))!;
+    const sqliteImport = middle(sqliteRuns);
+    const pgImport = middle(pgRuns);
+    const seconds = (runs: typeof pgRuns) => runs.map((r) => round(r.seconds, 2)).join(', ');
 
     const note = `${CONNECTIONS} connections × ${DURATION_S} s on loopback after a 3 s warm-up; servers in their own processes, PostgreSQL 15 on the same machine (default durability)`;
     const failures = (r: { failed: number }) => (r.failed ? `; ${r.failed} failed requests` : '');
@@ -188,7 +200,8 @@ export async function run(): Promise<Measure[]> {
       ratio: round(pgImport.seconds / sqliteImport.seconds, 2),
       note:
         `${IMPORT_ROWS.toLocaleString('en-US')}-row price file through the import service on PostgreSQL (INSERT … SELECT FROM unnest arrays); baseline the same on SQLite in this run; ` +
-        `CPU: import process ${round(pgImport.cpuSeconds, 2)} s on PostgreSQL, ${round(sqliteImport.cpuSeconds, 2)} s on SQLite; PostgreSQL ${round(postgresImportCpuS, 2)} s (with its migrations)`,
+        `medians of ${IMPORT_ROUNDS} alternating rounds (PostgreSQL ${seconds(pgRuns)} s; SQLite ${seconds(sqliteRuns)} s); ` +
+        `CPU: import process ${round(pgImport.cpuSeconds, 2)} s on PostgreSQL, ${round(sqliteImport.cpuSeconds, 2)} s on SQLite; PostgreSQL ${round(postgresImportCpuS, 2)} s a round (with its migrations)`,
     });
     return measures;
   } finally {
