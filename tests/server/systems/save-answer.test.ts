@@ -4,7 +4,7 @@ import type { Role } from '../../../shared/schemas/auth';
 import { uploadImport } from '../../../server/imports/imports.service';
 import { useFixtureApp } from '../../helpers/fixture-app';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
-import { authFor, buildFixture, OUTDOOR_CSV, recordBody, type Fixture } from './system-fixtures';
+import { authFor, buildFixture, narrowAirflowBand, OUTDOOR_CSV, recordBody, type Fixture } from './system-fixtures';
 
 /*
  * What a save answers (PATCH /api/systems/:id, POST …/revisions): the revision written, as GET reads it back
@@ -112,13 +112,7 @@ describe('the check of a save', () => {
       // 400 CFM/ton sits inside the default 350–450 band (common practice, no source)
       expect(airflow(first)).toHaveLength(0);
 
-      const current = await request(app.app).get('/api/settings/rules').set(a).expect(200);
-      // 410–450 CFM/ton: an invented shop band that puts 400 outside it (no source)
-      await request(app.app)
-        .put('/api/settings/rules')
-        .set(authFor(app, 'admin'))
-        .send({ settings: { ...current.body.settings, cfmPerTonMin: 410 }, transitionRules: current.body.transitionRules })
-        .expect(200);
+      await narrowAirflowBand(app);
 
       const second = (
         await request(app.app)

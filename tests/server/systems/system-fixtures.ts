@@ -61,3 +61,17 @@ export function recordBody(f: Fixture, over: object = {}) {
     ...over,
   };
 }
+
+/**
+ * The admin narrows the shop's airflow band to 410–450 CFM/ton, an invented band that puts the fixture's
+ * 400 CFM/ton outside it (the default 350–450 holds it: common practice, no source).
+ */
+export async function narrowAirflowBand(t: TestApp): Promise<void> {
+  const admin = authFor(t, 'admin');
+  const current = await request(t.app).get('/api/settings/rules').set(admin).expect(200);
+  await request(t.app)
+    .put('/api/settings/rules')
+    .set(admin)
+    .send({ settings: { ...current.body.settings, cfmPerTonMin: 410 }, transitionRules: current.body.transitionRules })
+    .expect(200);
+}

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import type { Finding } from '../../../shared/rules/types';
 import { useFixtureApp } from '../../helpers/fixture-app';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
-import { authFor, buildFixture, recordBody, type Fixture } from './system-fixtures';
+import { authFor, buildFixture, narrowAirflowBand, recordBody, type Fixture } from './system-fixtures';
 
 let t: TestApp, f: Fixture;
 useFixtureApp((app, fixture) => ([t, f] = [app, fixture]));
@@ -197,13 +197,7 @@ describe('the check as it stood', () => {
       // 400 CFM/ton sits inside the default 350–450 band (common practice, no source)
       expect(airflow(made.check.findings)).toHaveLength(0);
 
-      const current = await request(app.app).get('/api/settings/rules').set(a).expect(200);
-      // 410–450 CFM/ton: an invented shop band that puts 400 outside it (no source)
-      await request(app.app)
-        .put('/api/settings/rules')
-        .set(authFor(app, 'admin'))
-        .send({ settings: { ...current.body.settings, cfmPerTonMin: 410 }, transitionRules: current.body.transitionRules })
-        .expect(200);
+      await narrowAirflowBand(app);
 
       const read = await request(app.app).get(`/api/systems/${made.id}`).set(a).expect(200);
       expect(read.body.check).toEqual(made.check);
