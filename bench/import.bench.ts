@@ -2,6 +2,7 @@ import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { pathToFileURL } from 'node:url';
 import Papa from 'papaparse';
 import { openDatabase } from '../server/db/data-source';
 import { sqliteHandle } from '../server/db/sqlite-handle';
@@ -56,15 +57,22 @@ export function median(values: number[]): number {
   return sorted[Math.floor(sorted.length / 2)];
 }
 
-/** The real import in a process of its own, so its peak RSS is the import's alone (bench/import-run.ts). */
-export function realImport(dir: string, file: string, databaseUrl?: string): Promise<{ seconds: number; cpuSeconds: number; peakRssMb: number; rows: number }> {
+// bench/import-run.ts bundled once per bench process, the way `npm start` runs the server (scripts/bundle-server.mjs):
+// under tsx every cross-module call goes through a getter, which would bill the import for a cost it does not ship with.
+let importRunBundle: Promise<string> | undefined;
+function bundledImportRun(root: string): Promise<string> {
+  importRunBundle ??= import(pathToFileURL(path.join(root, 'scripts/bundle-server.mjs')).href).then(
+    (m: { bundleServer(entry: string, outfile: string): Promise<string> }) => m.bundleServer('bench/import-run.ts', 'build/bench/import-run.cjs'),
+  );
+  return importRunBundle;
+}
+
+/** The real import in a process of its own, so its peak RSS is the import's alone (bench/import-run.ts, bundled). */
+export async function realImport(dir: string, file: string, databaseUrl?: string): Promise<{ seconds: number; cpuSeconds: number; peakRssMb: number; rows: number }> {
   const root = path.resolve(__dirname, '..');
+  const bundle = await bundledImportRun(root);
   return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'import-run.ts'), dir, file, ...(databaseUrl ? [databaseUrl] : [])], {
-      cwd: root,
-      env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json') },
-      stdio: ['ignore', 'pipe', 'inherit'],
-    });
+    const child = spawn(process.execPath, [bundle, dir, file, ...(databaseUrl ? [databaseUrl] : [])], { cwd: root, stdio: ['ignore', 'pipe', 'inherit'] });
     let out = '';
     child.stdout.on('data', (chunk) => (out += chunk));
     child.on('exit', (code) => (code === 0 ? resolve(JSON.parse(out.trim().split('\n').pop()!)) : reject(new Error(`import run exited with ${code}`))));
