@@ -59,10 +59,7 @@ export async function uploadImport(ctx: AppContext, input: UploadInput): Promise
 
   const view = await writeCatalog(ctx, async (manager) => {
     const distributor = distributorName ? await ensureDistributor(manager, distributorName) : null;
-    const newMapping = input.mapping && Object.keys(input.mapping).length > 0;
-    // A convention the file showed or the admin chose is remembered for this distributor's next file.
-    const newDecimal = parsed.decimalSource === 'file' || parsed.decimalSource === 'chosen' ? parsed.decimalConvention : null;
-    if (distributor && (newMapping || newDecimal)) await rememberMapping(manager, distributor.id, input.kind, newMapping ? mapping : null, newDecimal);
+    if (distributor) await rememberFileChoices(manager, distributor.id, input, mapping, parsed);
     const plan = await planFor(manager, input.kind, distributor?.id ?? null, parsed.rows);
     const record = await manager.save(
       manager.create(ImportRecord, {
@@ -127,9 +124,7 @@ async function commitPricesWhileParsing(
         manager.create(ImportRecord, { kind: 'prices', fileName: input.fileName.slice(0, 255), distributorId: distributor.id, uploadedById: input.userId, status: 'preview', errors: [], payload: null }),
       );
       const { parsed, totals } = await writePricesWhileParsing(manager, steps, plan, distributor.id, record.id);
-      const newMapping = input.mapping && Object.keys(input.mapping).length > 0;
-      const newDecimal = parsed.decimalSource === 'file' || parsed.decimalSource === 'chosen' ? parsed.decimalConvention : null;
-      if (newMapping || newDecimal) await rememberMapping(manager, distributor.id, 'prices', newMapping ? mapping : null, newDecimal);
+      await rememberFileChoices(manager, distributor.id, input, mapping, parsed);
       await bumpCatalogVersion(manager, 'prices');
       Object.assign(record, totals, {
         rows: parsed.rowCount,
@@ -269,6 +264,16 @@ async function distributorName(manager: EntityManager, id: number | null): Promi
 }
 
 /** Remembers a distributor's mapping and/or decimal mark (null: keep what is stored). */
+/**
+ * Keeps for this distributor's next file what this upload settled: a column mapping the admin gave, and a
+ * decimal convention the file showed or the admin chose.
+ */
+async function rememberFileChoices(manager: EntityManager, distributorId: number, input: UploadInput, mapping: Record<string, string>, parsed: ParsedFile) {
+  const newMapping = Boolean(input.mapping && Object.keys(input.mapping).length > 0);
+  const newDecimal = parsed.decimalSource === 'file' || parsed.decimalSource === 'chosen' ? parsed.decimalConvention : null;
+  if (newMapping || newDecimal) await rememberMapping(manager, distributorId, input.kind, newMapping ? mapping : null, newDecimal);
+}
+
 async function rememberMapping(manager: EntityManager, distributorId: number, kind: ImportKind, mapping: Record<string, string> | null, decimal: DecimalConvention | null) {
   const found = await manager.findOneBy(ColumnMapping, { distributorId, kind });
   const row = found ?? manager.create(ColumnMapping, { distributorId, kind, mapping: {}, decimalConvention: null });
