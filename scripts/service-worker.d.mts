@@ -1,4 +1,6 @@
 export function fontPreloadTags(outDir: string): string[];
-export function linkManifest(outDir: string): void;
+export function textFontFamilies(themeSource?: string): [family: string, stem: string][];
+export function fontFaceStyle(outDir: string, families?: [family: string, stem: string][]): string[];
+export function linkManifest(outDir: string, families?: [family: string, stem: string][]): void;
 export function writeServiceWorker(outDir: string): Promise<{ count: number; size: number }>;
 export function finishWebExport(outDir: string): Promise<void>;
