@@ -1,4 +1,4 @@
-// Metro for the web export: Expo's defaults plus six aliases that keep the main bundle small.
+// Metro for the web export: Expo's defaults plus seven aliases that keep the main bundle small.
 // Each one is a footgun entry in DEVELOPERS.md ("Bundle aliases").
 const fs = require('node:fs');
 const path = require('node:path');
@@ -30,6 +30,13 @@ const RNW_LAZY = here('metro-shims/react-native-web-lazy.js');
 const RNW_ANIMATED = '../../vendor/react-native/Animated/Animated';
 const RNW_ANIMATED_FROM = `react-native-web${path.sep}dist${path.sep}exports${path.sep}Animated${path.sep}`;
 const RNW_ANIMATED_LAZY = here('metro-shims/react-native-web-animated-lazy.js');
+/**
+ * expo-router's ExpoRoot sets react-native-screens' feature flags (native-only experiments) through the package's
+ * index, which evaluates Screen, ScreenStack, SearchBar… and Animated on the web at boot: on the web it gets the
+ * flags module alone (the same singleton the index re-exports).
+ */
+const SCREENS_FLAGS_FROM = `expo-router${path.sep}build${path.sep}screensFeatureFlags.js`;
+const SCREENS_FLAGS = here('node_modules/react-native-screens/lib/module/flags.js');
 const SINGLE_COPY = {
   '@tanstack/query-core': here('node_modules/@tanstack/react-query/package.json'),
   '@tanstack/query-persist-client-core': here('node_modules/@tanstack/react-query-persist-client/package.json'),
@@ -44,6 +51,9 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
   }
   if (moduleName === PAPER_BARREL) return { type: 'sourceFile', filePath: PAPER_LAZY };
   if (platform === 'web' && RNW_BARRELS.has(moduleName)) return { type: 'sourceFile', filePath: RNW_LAZY };
+  if (platform === 'web' && moduleName === 'react-native-screens' && context.originModulePath.endsWith(SCREENS_FLAGS_FROM)) {
+    return { type: 'sourceFile', filePath: SCREENS_FLAGS };
+  }
   if (moduleName === RNW_ANIMATED && context.originModulePath.includes(RNW_ANIMATED_FROM)) {
     return { type: 'sourceFile', filePath: RNW_ANIMATED_LAZY };
   }
