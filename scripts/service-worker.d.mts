@@ -1,4 +1,5 @@
-export function fontPreloadTags(outDir: string): string[];
+export const FIRST_SCREEN_FACES: string[];
+export function fontPreloadTags(outDir: string, faces?: string[]): string[];
 export function textFontFamilies(themeSource?: string): [family: string, stem: string][];
 export function fontFaceStyle(outDir: string, families?: [family: string, stem: string][]): string[];
 export function linkManifest(outDir: string, families?: [family: string, stem: string][]): void;

@@ -2,7 +2,7 @@ import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { linkManifest, textFontFamilies } from '../../scripts/service-worker.mjs';
+import { FIRST_SCREEN_FACES, linkManifest, textFontFamilies } from '../../scripts/service-worker.mjs';
 
 /** An export folder shaped like expo's: index.html, our text faces and the icon font elsewhere. */
 function fakeExport(): string {
@@ -16,12 +16,17 @@ function fakeExport(): string {
 }
 
 describe('index.html after the web export', () => {
-  it('when the export holds text faces, then index.html preloads each one in CORS mode, and not the icon font', () => {
+  it('when the export holds text faces, then index.html preloads the first screen\'s faces in CORS mode, not the others, and not the icon font', () => {
     const dir = fakeExport();
+    writeFileSync(path.join(dir, 'assets/assets/fonts/Inter_700Bold.89ab.ttf'), '');
     linkManifest(dir);
     const html = readFileSync(path.join(dir, 'index.html'), 'utf8');
     // crossorigin: fonts are fetched in CORS mode, so a preload without it is not reused (HTML spec, "preload" + fonts).
+    expect(FIRST_SCREEN_FACES).toContain('Inter_400Regular');
     expect(html).toContain('<link rel="preload" href="/assets/assets/fonts/Inter_400Regular.0123.ttf" as="font" type="font/ttf" crossorigin />');
+    // Bold is declared (@font-face) but not preloaded: a preloaded face is decoded before the bundle runs.
+    expect(html).not.toContain('rel="preload" href="/assets/assets/fonts/Inter_700Bold');
+    expect(html).toContain('Inter_700Bold.89ab.ttf');
     expect(html).not.toContain('MaterialCommunityIcons');
   });
 
