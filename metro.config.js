@@ -1,4 +1,4 @@
-// Metro for the web export: Expo's defaults plus five aliases that keep the main bundle small.
+// Metro for the web export: Expo's defaults plus seven aliases that keep the main bundle small.
 // Each one is a footgun entry in DEVELOPERS.md ("Bundle aliases").
 const fs = require('node:fs');
 const path = require('node:path');
@@ -18,9 +18,25 @@ const MCI_GLYPHS = 'glyphmaps/MaterialCommunityIcons.json';
 /** Paper's barrel evaluates every component it re-exports; the shim loads each on first use (scripts/paper-lazy-barrel.mjs). */
 const PAPER_BARREL = 'react-native-paper';
 const PAPER_LAZY = here('metro-shims/react-native-paper-lazy.js');
-/** react-native-web's index (what `react-native` is on the web) has the same problem: the same kind of shim. */
-const RNW_BARRELS = new Set(['react-native', 'react-native-web']);
+/**
+ * react-native-web's index (what `react-native` is on the web) has the same problem: the same kind of shim.
+ * babel-preset-expo's web plugin (babel-plugin-react-native-web) rewrites a bare `require('react-native')`,
+ * in node_modules too (expo-router's build is CommonJS), to `react-native-web/dist/index` before Metro
+ * resolves it: without that name here expo-router kept the whole index (Animated, FlatList…) on the boot path.
+ */
+const RNW_BARRELS = new Set(['react-native', 'react-native-web', 'react-native-web/dist/index', 'react-native-web/dist/index.js']);
 const RNW_LAZY = here('metro-shims/react-native-web-lazy.js');
+/** react-native-web's Animated loads its FlatList/SectionList/ScrollView/Image wrappers up front: the same kind of shim. */
+const RNW_ANIMATED = '../../vendor/react-native/Animated/Animated';
+const RNW_ANIMATED_FROM = `react-native-web${path.sep}dist${path.sep}exports${path.sep}Animated${path.sep}`;
+const RNW_ANIMATED_LAZY = here('metro-shims/react-native-web-animated-lazy.js');
+/**
+ * expo-router's ExpoRoot sets react-native-screens' feature flags (native-only experiments) through the package's
+ * index, which evaluates Screen, ScreenStack, SearchBar… and Animated on the web at boot: on the web it gets the
+ * flags module alone (the same singleton the index re-exports).
+ */
+const SCREENS_FLAGS_FROM = `expo-router${path.sep}build${path.sep}screensFeatureFlags.js`;
+const SCREENS_FLAGS = here('node_modules/react-native-screens/lib/module/flags.js');
 const SINGLE_COPY = {
   '@tanstack/query-core': here('node_modules/@tanstack/react-query/package.json'),
   '@tanstack/query-persist-client-core': here('node_modules/@tanstack/react-query-persist-client/package.json'),
@@ -35,6 +51,12 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
   }
   if (moduleName === PAPER_BARREL) return { type: 'sourceFile', filePath: PAPER_LAZY };
   if (platform === 'web' && RNW_BARRELS.has(moduleName)) return { type: 'sourceFile', filePath: RNW_LAZY };
+  if (platform === 'web' && moduleName === 'react-native-screens' && context.originModulePath.endsWith(SCREENS_FLAGS_FROM)) {
+    return { type: 'sourceFile', filePath: SCREENS_FLAGS };
+  }
+  if (moduleName === RNW_ANIMATED && context.originModulePath.includes(RNW_ANIMATED_FROM)) {
+    return { type: 'sourceFile', filePath: RNW_ANIMATED_LAZY };
+  }
   const singleFrom = SINGLE_COPY[moduleName];
   if (singleFrom) return context.resolveRequest({ ...context, originModulePath: singleFrom }, moduleName, platform);
   return context.resolveRequest(context, moduleName, platform);

@@ -1,5 +1,4 @@
 import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
-import { Stack } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
 import { useEffect, useState } from 'react';
 import { ActivityIndicator, useColorScheme, View } from 'react-native';
@@ -13,6 +12,7 @@ import { registerServiceWorker } from '@/hooks/register-service-worker';
 import { SessionProvider } from '@/hooks/use-session';
 import { useTextFonts } from '@/hooks/use-text-fonts';
 import { PAPER_SETTINGS } from '@/components/ui/paper-icon';
+import { RootNavigator } from '@/components/root/root-navigator';
 
 /**
  * Root: the text fonts first (no flash of fallback text; on the web they are declared, not awaited — see
@@ -43,7 +43,7 @@ export default function RootLayout() {
             <StatusBar style={scheme === 'dark' ? 'light' : 'dark'} />
             <View style={{ flex: 1 }}>
               <ConnectionBanner />
-              <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: theme.colors.background } }} />
+              <RootNavigator background={theme.colors.background} />
             </View>
           </SessionProvider>
         </PaperProvider>

@@ -20,26 +20,58 @@ const HEAD_TAGS = [
 const TEXT_FONTS_DIR = 'assets/assets/fonts';
 
 /**
- * Preload tags for the text faces, so they download while the bundle runs: the web app declares them with
- * font-display: block and does not wait for them (hooks/use-text-fonts.web.ts). `crossorigin` because the
- * browser fetches fonts in CORS mode; a preload without it is fetched twice.
+ * The faces the sign-in screen (the first screen of a signed-out cold start, what the bench measures) sets text in: Regular (body, fields) and SemiBold
+ * (the title, the button). Only these are preloaded. A preloaded face is decoded on the main thread as soon as
+ * index.html's @font-face rule meets it, before the bundle runs: preloading all four cost ~200 ms of a 4×-throttled
+ * first load, the two unused ones included. The others load when a screen first uses them (the service worker
+ * precaches every face). tests/e2e/web-boot.test.ts fails if the sign-in screen starts using a face not listed here.
  */
-export function fontPreloadTags(outDir) {
+export const FIRST_SCREEN_FACES = ['Inter_400Regular', 'Inter_600SemiBold'];
+
+/**
+ * Preload tags for the first screen's text faces, so they download while the bundle runs: index.html declares
+ * every face with font-display: block (fontFaceStyle) and the app does not wait for them
+ * (hooks/use-text-fonts.web.ts). `crossorigin` because the browser fetches fonts in CORS mode; a preload without
+ * it is fetched twice.
+ */
+export function fontPreloadTags(outDir, faces = FIRST_SCREEN_FACES) {
   const dir = path.join(outDir, TEXT_FONTS_DIR);
   if (!existsSync(dir)) return [];
   return readdirSync(dir)
-    .filter((name) => name.endsWith('.ttf'))
+    .filter((name) => name.endsWith('.ttf') && faces.some((stem) => name.startsWith(`${stem}.`)))
     .sort()
     .map((name) => `<link rel="preload" href="/${TEXT_FONTS_DIR}/${name}" as="font" type="font/ttf" crossorigin />`);
 }
 
+/** constants/theme.ts's FONT_FILES as [family, file stem] pairs ('Inter-Regular' → 'Inter_400Regular'). */
+const THEME_FILE = path.join(path.dirname(fileURLToPath(import.meta.url)), '../constants/theme.ts');
+export function textFontFamilies(themeSource = readFileSync(THEME_FILE, 'utf8')) {
+  return [...themeSource.matchAll(/'([\w-]+)':\s*require\('[^']*\/fonts\/([\w-]+)\.ttf'\)/g)].map((m) => [m[1], m[2]]);
+}
+
+/**
+ * The text faces as CSS `@font-face` rules (font-display: block), so the web app does not declare them
+ * from JavaScript during its first render (hooks/use-text-fonts.web.ts; FontFace + expo-asset cost
+ * ~200 ms of a throttled boot). Families are FONT_FILES' names, files the export's hashed copies.
+ */
+export function fontFaceStyle(outDir, families = textFontFamilies()) {
+  const dir = path.join(outDir, TEXT_FONTS_DIR);
+  if (!existsSync(dir)) return [];
+  const files = readdirSync(dir).filter((name) => name.endsWith('.ttf'));
+  const rules = families.flatMap(([family, stem]) => {
+    const file = files.find((name) => name.startsWith(`${stem}.`));
+    return file ? [`@font-face{font-family:"${family}";src:url(/${TEXT_FONTS_DIR}/${file}) format("truetype");font-display:block}`] : [];
+  });
+  return rules.length ? [`<style id="text-faces">${rules.join('')}</style>`] : [];
+}
+
 /** Adds the manifest/icon/font tags to index.html once (a rebuild over the same file does not repeat them). */
-export function linkManifest(outDir) {
+export function linkManifest(outDir, families) {
   const file = path.join(outDir, 'index.html');
   let html = readFileSync(file, 'utf8');
   // Expo writes its own theme-color from app.json; keep one.
   html = html.replace(/<meta name="theme-color"[^>]*>\s*/g, '');
-  const missing = [...HEAD_TAGS, ...fontPreloadTags(outDir)].filter((tag) => !html.includes(tag));
+  const missing = [...HEAD_TAGS, ...fontPreloadTags(outDir), ...fontFaceStyle(outDir, families)].filter((tag) => !html.includes(tag));
   if (missing.length) html = html.replace('</head>', `${missing.join('')}</head>`);
   writeFileSync(file, html);
 }

@@ -1,6 +1,7 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, openPage } from './browser';
+import { FIRST_SCREEN_FACES, textFontFamilies } from '../../scripts/service-worker.mjs';
 import { shownAtScript } from './page-timing';
 
 /**
@@ -40,6 +41,14 @@ describe('web boot on a phone', () => {
     await page.getByTestId('sign-in-email').waitFor({ timeout: 30_000 });
     let shownAt: number | undefined;
     await expect.poll(async () => (shownAt = await page.evaluate<number | undefined>('window.__shownAt'))).toBeGreaterThan(0);
+
+    // Every text face the sign-in screen sets text in was preloaded from index.html (the others are not, so that
+    // they are not decoded before the bundle runs: scripts/service-worker.mjs, FIRST_SCREEN_FACES).
+    const usedFamilies = await page.evaluate<string[]>('[...document.fonts].filter((f) => f.status !== "unloaded").map((f) => f.family)');
+    const stems = new Map(textFontFamilies());
+    const used = usedFamilies.map((family) => stems.get(family.replace(/"/g, '')));
+    expect(used.length).toBeGreaterThan(0);
+    for (const stem of used) expect(FIRST_SCREEN_FACES).toContain(stem);
 
     // Typing works and the shared schema validates on the phone: the message is SignInSchema's (shared/schemas/auth.ts).
     await page.getByTestId('sign-in-email').fill('not-an-address');
