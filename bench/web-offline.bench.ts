@@ -5,12 +5,14 @@ import { createInterface } from 'node:readline';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import type { Measure } from './measure';
 import { percentile, round } from './measure';
+import { buildSkeleton } from './web-skeleton';
 import { SERVICE_WORKER_ACTIVE, shownAtScript, tapToAnswerScript } from '../tests/e2e/page-timing';
 
 /**
  * The web app in Debian's Chromium with 4× CPU throttling (DevTools `Emulation.setCPUThrottlingRate`),
  * against the real server in its own process (bench/checks-server.ts, serving dist/):
- * - web.first-load.ms: cold cache (fresh context, no service worker) to the sign-in form on screen;
+ * - web.first-load.ms: cold cache (fresh context, no service worker) to the sign-in form on screen, alternated
+ *   with the same load of the bare skeleton (bench/skeleton: the stack with one sign-in screen) as its baseline;
  * - web.offline-check.ms: browser offline, tap on Check to the verdict on screen, parts picked earlier.
  */
 const CPU_SLOWDOWN = 4;
@@ -27,25 +29,43 @@ interface Server {
   stop(): void;
 }
 
-async function startServer(): Promise<Server> {
+async function startServer(webDir = path.join(root, 'dist')): Promise<Server> {
   const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'checks-server.ts')], {
     cwd: root,
-    env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json'), TANDEM_WEB_DIR: path.join(root, 'dist') },
+    env: { ...process.env, TSX_TSCONFIG_PATH: path.join(root, 'server/tsconfig.json'), TANDEM_WEB_DIR: webDir },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
   const line = await new Promise<string>((resolve, reject) => {
     createInterface({ input: child.stdout! }).once('line', resolve);
     child.once('exit', (code) => reject(new Error(`bench server exited with ${code}`)));
   });
-  const { port, token, body } = JSON.parse(line) as { port: number; token: string; body: { outdoor: { id: number }; indoorCoil: { id: number } } };
-  return { base: `http://127.0.0.1:${port}`, token, outdoorId: body.outdoor.id, coilId: body.indoorCoil.id, stop: () => child.kill('SIGTERM') };
+  const { port, token, body } = JSON.parse(line) as {
+    port: number;
+    token: string;
+    body: { outdoor: { id: number }; indoorCoil: { id: number } };
+  };
+  return {
+    base: `http://127.0.0.1:${port}`,
+    token,
+    outdoorId: body.outdoor.id,
+    coilId: body.indoorCoil.id,
+    stop: () => child.kill('SIGTERM'),
+  };
 }
 
 function launch(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
 }
 
@@ -83,17 +103,27 @@ async function catalogPart(server: Server, kind: string, id: number) {
 
 /** Tap to verdict with the browser offline, over several reloads served by the service worker. */
 async function offlineChecks(browser: Browser, server: Server): Promise<number[]> {
-  const me = (await (await fetch(`${server.base}/api/auth/me`, { headers: { Authorization: `Bearer ${server.token}` } })).json()) as { user: unknown };
-  const parts = { outdoor: await catalogPart(server, 'outdoor-units', server.outdoorId), indoorCoil: await catalogPart(server, 'indoor-coils', server.coilId) };
+  const me = (await (await fetch(`${server.base}/api/auth/me`, { headers: { Authorization: `Bearer ${server.token}` } })).json()) as {
+    user: unknown;
+  };
+  const parts = {
+    outdoor: await catalogPart(server, 'outdoor-units', server.outdoorId),
+    indoorCoil: await catalogPart(server, 'indoor-coils', server.coilId),
+  };
   // The form as the phone keeps it (components/check/check-form-storage.ts): two catalog parts picked earlier, no answer yet.
   const form = JSON.stringify({
     scope: 'new-system',
-    parts: { outdoor: { mode: 'catalog', picked: parts.outdoor, typed: {}, kept: false }, indoorCoil: { mode: 'catalog', picked: parts.indoorCoil, typed: {}, kept: false } },
+    parts: {
+      outdoor: { mode: 'catalog', picked: parts.outdoor, typed: {}, kept: false },
+      indoorCoil: { mode: 'catalog', picked: parts.indoorCoil, typed: {}, kept: false },
+    },
     outcome: null,
   });
   const context = await browser.newContext({ viewport: PHONE, baseURL: server.base });
   const session = JSON.stringify({ token: server.token, user: me.user });
-  await context.addInitScript(`localStorage.setItem('tandem.session', ${JSON.stringify(session)}); localStorage.setItem('tandem.check-form.v1', ${JSON.stringify(form)});`);
+  await context.addInitScript(
+    `localStorage.setItem('tandem.session', ${JSON.stringify(session)}); localStorage.setItem('tandem.check-form.v1', ${JSON.stringify(form)});`,
+  );
   const page = await context.newPage();
   await page.goto('/check');
   await page.evaluate(SERVICE_WORKER_ACTIVE);
@@ -117,11 +147,20 @@ export async function run(): Promise<Measure[]> {
   // @ts-expect-error plain ESM script without types
   const { buildWeb } = await import('../scripts/build-web.mjs');
   buildWeb();
+  const skeletonDist = buildSkeleton();
   const server = await startServer();
+  // The same bench server serving the skeleton's export: same static files path, same headers.
+  const skeletonServer = await startServer(skeletonDist);
   const browser = await launch();
   try {
     const loads: number[] = [];
-    for (let i = 0; i < FIRST_LOADS; i++) loads.push(await firstLoad(browser, server.base));
+    const skeletonLoads: number[] = [];
+    // Alternated, so a change in the machine's load hits both series alike.
+    for (let i = 0; i < FIRST_LOADS; i++) {
+      loads.push(await firstLoad(browser, server.base));
+      skeletonLoads.push(await firstLoad(browser, skeletonServer.base));
+    }
+    skeletonServer.stop();
     const checks = await offlineChecks(browser, server);
     // The machine's load matters as much as the throttling: other work shares the cores.
     const note = `Chromium, ${CPU_SLOWDOWN}× CPU throttling, 390×844, 1-min load average ${os.loadavg()[0].toFixed(1)} on ${os.cpus().length} cores`;
@@ -130,7 +169,9 @@ export async function run(): Promise<Measure[]> {
         id: 'web.first-load.ms',
         value: round(percentile(loads, 50), 0),
         unit: 'ms',
-        note: `${note}; median of ${FIRST_LOADS} cold loads (new context, no service worker) from navigation to the sign-in form; max ${round(Math.max(...loads), 0)}; target < 2000`,
+        baseline: round(percentile(skeletonLoads, 50), 0),
+        ratio: round(percentile(loads, 50) / percentile(skeletonLoads, 50), 2),
+        note: `${note}; median of ${FIRST_LOADS} cold loads (new context, no service worker) from navigation to the sign-in form; max ${round(Math.max(...loads), 0)}; baseline the bare skeleton's sign-in form (bench/skeleton), loaded alternately in the same run; target < 2000`,
       },
       {
         id: 'web.offline-check.ms',
@@ -142,5 +183,6 @@ export async function run(): Promise<Measure[]> {
   } finally {
     await browser.close();
     server.stop();
+    skeletonServer.stop();
   }
 }
