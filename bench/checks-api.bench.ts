@@ -1,4 +1,6 @@
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 // autocannon ships no types here; the options and result fields used are documented in its README.
 // eslint-disable-next-line @typescript-eslint/ban-ts-comment
 // @ts-ignore
@@ -58,6 +60,33 @@ async function commitLoop(base: string, adminToken: string, stop: { done: boolea
   return { commits, failed };
 }
 
+/**
+ * The same two rates on the floor server (the app's middleware, a stored answer, no work), alternating
+ * like the real rounds; its own process, started after the real server has stopped.
+ */
+async function floorRates(answer: string, headers: Record<string, string>, payload: string) {
+  const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-bench-floor-'));
+  const file = path.join(dir, 'answer.json');
+  writeFileSync(file, answer);
+  const { child, info } = await startBenchServer<{ port: number }>('checks-floor-server.ts', { BENCH_ANSWER_FILE: file });
+  try {
+    const base = `http://127.0.0.1:${info.port}`;
+    const post = { url: `${base}/api/checks`, method: 'POST', headers, body: payload };
+    await cannon({ ...post, duration: 3 });
+    const health: number[] = [];
+    const checks: number[] = [];
+    for (let i = 0; i < 2; i++) {
+      health.push(round((await cannon({ url: `${base}/api/health` })).requests.average, 0));
+      checks.push(round((await cannon(post)).requests.average, 0));
+    }
+    const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
+    return { health, checks, healthRps: mean(health), checksRps: mean(checks) };
+  } finally {
+    child.kill('SIGTERM');
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
 /** POST /api/checks and GET /api/health under autocannon on loopback, in the same run, against a server process of its own. */
 export async function run(): Promise<Measure[]> {
   const { child, info } = await startBenchServer<{ port: number; token: string; adminToken: string; body: unknown }>('checks-server.ts');
@@ -68,6 +97,7 @@ export async function run(): Promise<Measure[]> {
     const payload = JSON.stringify(body);
     const probe = await fetch(`${base}/api/checks`, { method: 'POST', headers, body: payload });
     if (probe.status !== 200) throw new Error(`POST /api/checks answered ${probe.status}: ${await probe.text()}`);
+    const answer = await probe.text();
     // Warm-up (JIT, lazily compiled modules) so the measured runs see a server in its steady state.
     await cannon({ url: `${base}/api/checks`, method: 'POST', headers, body: payload, duration: 3 });
     const health = await cannon({ url: `${base}/api/health` });
@@ -84,6 +114,8 @@ export async function run(): Promise<Measure[]> {
     stop.done = true;
     const { commits, failed } = await loop;
     const rssMb = rssMbOf(child.pid!);
+    child.kill('SIGTERM');
+    const floor = await floorRates(answer, headers, payload);
     const note = `${CONNECTIONS} connections × ${DURATION_S} s on loopback after a 3 s warm-up; server in its own process, autocannon in the bench process`;
     const failures = checks.non2xx + checks.errors + checks2.non2xx + checks2.errors;
     return [
@@ -110,6 +142,14 @@ export async function run(): Promise<Measure[]> {
         baseline: checks.latency.p99,
         ratio: round(during.latency.p99 / Math.max(checks.latency.p99, 1), 2),
         note: `${note}; while ${commits} price commits of ${COMMIT_ROWS} rows ran back to back${failed ? ` (${failed} failed)` : ''}; ${round(during.requests.average, 0)} req/s; baseline = idle api.checks.p99-ms of this run; target ratio ≤ 1.5`,
+      },
+      {
+        id: 'api.checks.rps.floor',
+        value: round(floor.checksRps, 0),
+        unit: 'req/s',
+        baseline: round(floor.healthRps, 0),
+        ratio: round(floor.checksRps / floor.healthRps, 3),
+        note: `${note}; the app's middleware answering POST /api/checks with this run's answer and no work (bench/checks-floor-server.ts): the highest checks ÷ health ratio any handler can reach here; mean of two alternating rounds (health ${floor.health.join(', ')}; checks ${floor.checks.join(', ')} req/s)`,
       },
       ...(rssMb === undefined
         ? []
