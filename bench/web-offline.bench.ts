@@ -2,7 +2,8 @@ import { spawn } from 'node:child_process';
 import os from 'node:os';
 import path from 'node:path';
 import { createInterface } from 'node:readline';
-import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { launchChromium } from '../tests/e2e/chromium';
 import type { Measure } from './measure';
 import { percentile, round } from './measure';
 import { buildSkeleton } from './web-skeleton';
@@ -53,21 +54,6 @@ async function startServer(webDir = path.join(root, 'dist')): Promise<Server> {
   };
 }
 
-function launch(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
-}
 
 async function throttle(context: BrowserContext, page: Page) {
   const cdp = await context.newCDPSession(page);
@@ -151,7 +137,7 @@ export async function run(): Promise<Measure[]> {
   const server = await startServer();
   // The same bench server serving the skeleton's export: same static files path, same headers.
   const skeletonServer = await startServer(skeletonDist);
-  const browser = await launch();
+  const browser = await launchChromium();
   try {
     const loads: number[] = [];
     const skeletonLoads: number[] = [];

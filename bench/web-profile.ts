@@ -9,7 +9,7 @@ import { spawn } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { createInterface } from 'node:readline';
-import { chromium } from 'playwright-core';
+import { launchChromium } from '../tests/e2e/chromium';
 import { shownAtScript } from '../tests/e2e/page-timing';
 
 const root = path.resolve(__dirname, '..');
@@ -67,10 +67,7 @@ async function main() {
   });
   const line = await new Promise<string>((resolve) => createInterface({ input: child.stdout! }).once('line', resolve));
   const { port } = JSON.parse(line) as { port: number };
-  const browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
+  const browser = await launchChromium();
   try {
     if (runs) return await timedLoads(browser, `http://127.0.0.1:${port}`, runs);
     const context = await browser.newContext({ viewport: { width: 390, height: 844 }, baseURL: `http://127.0.0.1:${port}`, serviceWorkers: 'block' });

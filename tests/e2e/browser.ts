@@ -1,7 +1,8 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { expect, inject } from 'vitest';
+import { launchChromium } from './chromium';
 import type { E2eAccount } from './global-setup';
 
 /** Shared browser helpers: Debian's Chromium through playwright-core, phone and wide viewports. */
@@ -14,21 +15,7 @@ export type ViewportName = keyof typeof VIEWPORTS;
 
 const SCREENSHOT_DIR = path.resolve(__dirname, 'screenshots');
 
-export function launchBrowser(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
-}
+export const launchBrowser = launchChromium;
 
 export async function openPage(browser: Browser, viewport: ViewportName): Promise<Page> {
   const context = await browser.newContext({ viewport: VIEWPORTS[viewport], baseURL: inject('baseUrl'), deviceScaleFactor: 1 });
