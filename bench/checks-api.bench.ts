@@ -1,6 +1,4 @@
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
+import { readFileSync } from 'node:fs';
 // autocannon ships no types here; the options and result fields used are documented in its README.
 // eslint-disable-next-line @typescript-eslint/ban-ts-comment
 // @ts-ignore
@@ -65,10 +63,7 @@ async function commitLoop(base: string, adminToken: string, stop: { done: boolea
  * like the real rounds; its own process, started after the real server has stopped.
  */
 async function floorRates(answer: string, headers: Record<string, string>, payload: string) {
-  const dir = mkdtempSync(path.join(os.tmpdir(), 'tandem-bench-floor-'));
-  const file = path.join(dir, 'answer.json');
-  writeFileSync(file, answer);
-  const { child, info } = await startBenchServer<{ port: number }>('checks-floor-server.ts', { BENCH_ANSWER_FILE: file });
+  const { child, info } = await startBenchServer<{ port: number }>('checks-floor-server.ts', { BENCH_ANSWER: answer });
   try {
     const base = `http://127.0.0.1:${info.port}`;
     const post = { url: `${base}/api/checks`, method: 'POST', headers, body: payload };
@@ -83,7 +78,6 @@ async function floorRates(answer: string, headers: Record<string, string>, paylo
     return { health, checks, healthRps: mean(health), checksRps: mean(checks) };
   } finally {
     child.kill('SIGTERM');
-    rmSync(dir, { recursive: true, force: true });
   }
 }
 

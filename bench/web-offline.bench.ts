@@ -54,7 +54,6 @@ async function startServer(webDir = path.join(root, 'dist')): Promise<Server> {
   };
 }
 
-
 async function throttle(context: BrowserContext, page: Page) {
   const cdp = await context.newCDPSession(page);
   await cdp.send('Emulation.setCPUThrottlingRate', { rate: CPU_SLOWDOWN });
@@ -133,7 +132,7 @@ export async function run(): Promise<Measure[]> {
   // @ts-expect-error plain ESM script without types
   const { buildWeb } = await import('../scripts/build-web.mjs');
   buildWeb();
-  const skeletonDist = buildSkeleton();
+  const skeletonDist = await buildSkeleton();
   const server = await startServer();
   // The same bench server serving the skeleton's export: same static files path, same headers.
   const skeletonServer = await startServer(skeletonDist);

@@ -28,25 +28,40 @@ const INPUTS = [
   'scripts/service-worker.mjs',
 ];
 
-function* files(entry) {
-  const full = path.join(root, entry);
+function* files(base, entry) {
+  const full = path.join(base, entry);
   if (!existsSync(full)) return;
   if (statSync(full).isFile()) {
     yield entry;
     return;
   }
-  for (const name of readdirSync(full).sort()) yield* files(path.join(entry, name));
+  for (const name of readdirSync(full).sort()) yield* files(base, path.join(entry, name));
 }
 
-export function sourceHash() {
+/** A hash of the named files and folders under `base` (paths and contents): the key a rebuild is skipped on. */
+export function inputsHash(base, inputs) {
   const hash = createHash('sha256');
-  for (const input of INPUTS) {
-    for (const file of files(input)) {
+  for (const input of inputs) {
+    for (const file of files(base, input)) {
       hash.update(file);
-      hash.update(readFileSync(path.join(root, file)));
+      hash.update(readFileSync(path.join(base, file)));
     }
   }
   return hash.digest('hex');
+}
+
+export function sourceHash() {
+  return inputsHash(root, INPUTS);
+}
+
+/** `expo export --platform web` of the project in `projectDir` into its `outDir` (offline, no telemetry). */
+export function expoExport(projectDir, outDir = 'dist', stdio = 'inherit') {
+  const result = spawnSync(process.execPath, [path.join(root, 'node_modules/expo/bin/cli'), 'export', '--platform', 'web', '--output-dir', outDir], {
+    cwd: projectDir,
+    stdio,
+    env: { ...process.env, EXPO_OFFLINE: '1', EXPO_NO_TELEMETRY: '1', CI: '1' },
+  });
+  if (result.status !== 0) throw new Error(`expo export failed with exit code ${result.status}`);
 }
 
 export function buildWeb({ force = false } = {}) {
@@ -57,12 +72,7 @@ export function buildWeb({ force = false } = {}) {
   }
   console.log('building the web app (expo export --platform web)…');
   const started = Date.now();
-  const result = spawnSync(process.execPath, [path.join(root, 'node_modules/expo/bin/cli'), 'export', '--platform', 'web', '--output-dir', 'dist'], {
-    cwd: root,
-    stdio: 'inherit',
-    env: { ...process.env, EXPO_OFFLINE: '1', EXPO_NO_TELEMETRY: '1', CI: '1' },
-  });
-  if (result.status !== 0) throw new Error(`expo export failed with exit code ${result.status}`);
+  expoExport(root);
   // Manifest links and dist/sw.js (workbox-build is async; a child process keeps buildWeb synchronous).
   const sw = spawnSync(process.execPath, [path.join(root, 'scripts/service-worker.mjs'), outDir], { cwd: root, stdio: 'inherit' });
   if (sw.status !== 0) throw new Error(`service worker generation failed with exit code ${sw.status}`);
