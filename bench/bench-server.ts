@@ -3,17 +3,31 @@ import path from 'node:path';
 import { createInterface } from 'node:readline';
 import { pathToFileURL } from 'node:url';
 
+const root = path.resolve(__dirname, '..');
+const bundles = new Map<string, Promise<string>>();
+
+/**
+ * bench/<file> bundled with esbuild into build/bench, the way `npm start` runs the server (scripts/bundle-server.mjs),
+ * once per bench process: under tsx every cross-module call goes through a getter, a cost the shipped server does not have.
+ */
+export function bundleBenchEntry(file: string): Promise<string> {
+  let bundle = bundles.get(file);
+  if (!bundle) {
+    bundle = import(pathToFileURL(path.join(root, 'scripts/bundle-server.mjs')).href).then((m: { bundleServer(entry: string, outfile: string): Promise<string> }) =>
+      m.bundleServer(`bench/${file}`, `build/bench/${file.replace(/\.ts$/, '.cjs')}`),
+    );
+    bundles.set(file, bundle);
+  }
+  return bundle;
+}
+
 /**
  * Starts a bench server script (bench/<file>) in a process of its own, bundled with esbuild the way
  * `npm start` runs the server (scripts/bundle-server.mjs), and waits for the one JSON line it prints
  * when it is ready (port, tokens, fixtures).
  */
 export async function startBenchServer<T>(file: string, env: Record<string, string> = {}): Promise<{ child: ChildProcess; info: T }> {
-  const root = path.resolve(__dirname, '..');
-  const { bundleServer } = (await import(pathToFileURL(path.join(root, 'scripts/bundle-server.mjs')).href)) as {
-    bundleServer(entry: string, outfile: string): Promise<string>;
-  };
-  const bundle = await bundleServer(`bench/${file}`, `build/bench/${file.replace(/\.ts$/, '.cjs')}`);
+  const bundle = await bundleBenchEntry(file);
   const child = spawn(process.execPath, [bundle], { cwd: root, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'inherit'] });
   try {
     const line = await new Promise<string>((resolve, reject) => {

@@ -1,11 +1,8 @@
 import { spawn } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { pathToFileURL } from 'node:url';
-import Papa from 'papaparse';
-import { openDatabase } from '../server/db/data-source';
-import { sqliteHandle } from '../server/db/sqlite-handle';
+import { bundleBenchEntry } from './bench-server';
 import { round, type Measure } from './measure';
 
 const ROWS = 100_000;
@@ -22,24 +19,12 @@ export function priceCsv(rows: number): string {
 }
 
 
-/** Baseline: papaparse alone, then better-sqlite3 prepared inserts in one transaction (same table and indexes). */
+/**
+ * Baseline: bare papaparse + prepared inserts (bench/import-baseline-run.ts), in a fresh bundled process like the
+ * import itself: run in this process its later rounds had a warm JIT the import's own process never has.
+ */
 async function baseline(dir: string, file: string, round: number): Promise<number> {
-  const ds = await openDatabase(path.join(dir, `baseline-${round}.sqlite`));
-  const db = sqliteHandle(ds.manager) as unknown as { prepare(sql: string): { run(...a: unknown[]): unknown }; transaction(fn: () => void): () => void };
-  db.prepare("INSERT INTO distributors (name) VALUES ('Baseline')").run();
-  const started = performance.now();
-  const parsed = Papa.parse<Record<string, string>>(readFileSync(file, 'utf8'), { header: true, skipEmptyLines: true });
-  const insert = db.prepare(
-    'INSERT INTO price_entries (distributorId, model, normalizedModel, priceCents, currency, effectiveFrom, description, importId) VALUES (1, ?, ?, ?, ?, ?, ?, NULL)',
-  );
-  db.transaction(() => {
-    for (const r of parsed.data) {
-      const cents = Math.round(Number(r.price.replace(/[$,]/g, '')) * 100);
-      insert.run(r.model, r.model, cents, 'USD', r.effective_from, r.description);
-    }
-  })();
-  const seconds = (performance.now() - started) / 1000;
-  await ds.destroy();
+  const { seconds } = await runBundled<{ seconds: number }>('import-baseline-run.ts', [dir, file, `baseline-${round}.sqlite`]);
   return seconds;
 }
 
@@ -57,26 +42,23 @@ export function median(values: number[]): number {
   return sorted[Math.floor(sorted.length / 2)];
 }
 
-// bench/import-run.ts bundled once per bench process, the way `npm start` runs the server (scripts/bundle-server.mjs):
-// under tsx every cross-module call goes through a getter, which would bill the import for a cost it does not ship with.
-let importRunBundle: Promise<string> | undefined;
-function bundledImportRun(root: string): Promise<string> {
-  importRunBundle ??= import(pathToFileURL(path.join(root, 'scripts/bundle-server.mjs')).href).then(
-    (m: { bundleServer(entry: string, outfile: string): Promise<string> }) => m.bundleServer('bench/import-run.ts', 'build/bench/import-run.cjs'),
+/** Runs bench/<file> (bundled) in a fresh process and returns the JSON of its last line of output. */
+function runBundled<T>(file: string, args: string[]): Promise<T> {
+  const root = path.resolve(__dirname, '..');
+  return bundleBenchEntry(file).then(
+    (bundle) =>
+      new Promise<T>((resolve, reject) => {
+        const child = spawn(process.execPath, [bundle, ...args], { cwd: root, stdio: ['ignore', 'pipe', 'inherit'] });
+        let out = '';
+        child.stdout.on('data', (chunk) => (out += chunk));
+        child.on('exit', (code) => (code === 0 ? resolve(JSON.parse(out.trim().split('\n').pop()!) as T) : reject(new Error(`${file} exited with ${code}`))));
+      }),
   );
-  return importRunBundle;
 }
 
 /** The real import in a process of its own, so its peak RSS is the import's alone (bench/import-run.ts, bundled). */
-export async function realImport(dir: string, file: string, databaseUrl?: string): Promise<{ seconds: number; cpuSeconds: number; peakRssMb: number; rows: number }> {
-  const root = path.resolve(__dirname, '..');
-  const bundle = await bundledImportRun(root);
-  return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, [bundle, dir, file, ...(databaseUrl ? [databaseUrl] : [])], { cwd: root, stdio: ['ignore', 'pipe', 'inherit'] });
-    let out = '';
-    child.stdout.on('data', (chunk) => (out += chunk));
-    child.on('exit', (code) => (code === 0 ? resolve(JSON.parse(out.trim().split('\n').pop()!)) : reject(new Error(`import run exited with ${code}`))));
-  });
+export function realImport(dir: string, file: string, databaseUrl?: string): Promise<{ seconds: number; cpuSeconds: number; peakRssMb: number; rows: number }> {
+  return runBundled('import-run.ts', [dir, file, ...(databaseUrl ? [databaseUrl] : [])]);
 }
 
 export async function run(): Promise<Measure[]> {
@@ -104,7 +86,7 @@ export async function run(): Promise<Measure[]> {
         unit: 's',
         baseline: round(base, 3),
         ratio: round(seconds / base, 2),
-        note: `median of ${IMPORT_ROUNDS} alternating rounds (import ${list(reals.map((r) => r.seconds))} s; bare papaparse + prepared inserts ${list(bases)} s); target ratio ≤ 1.5 (issue 8)`,
+        note: `median of ${IMPORT_ROUNDS} alternating rounds, each side in a fresh process (import ${list(reals.map((r) => r.seconds))} s; bare papaparse + prepared inserts ${list(bases)} s); target ratio ≤ 1.5 (issue 8)`,
       },
       { id: 'import.prices-100k.peak-rss-mb', value: round(Math.max(...reals.map((r) => r.peakRssMb)), 1), unit: 'MB', note: 'highest peak RSS of a process running only the import (sampled every 10 ms); target < 350' },
     ];
