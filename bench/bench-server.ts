@@ -21,6 +21,17 @@ export function bundleBenchEntry(file: string): Promise<string> {
   return bundle;
 }
 
+/** Runs bench/<file> (bundled) to its end in a fresh process and returns the JSON of its last line of output. */
+export async function runBenchEntry<T>(file: string, args: string[]): Promise<T> {
+  const bundle = await bundleBenchEntry(file);
+  return new Promise<T>((resolve, reject) => {
+    const child = spawn(process.execPath, [bundle, ...args], { cwd: root, stdio: ['ignore', 'pipe', 'inherit'] });
+    let out = '';
+    child.stdout!.on('data', (chunk) => (out += chunk));
+    child.on('exit', (code) => (code === 0 ? resolve(JSON.parse(out.trim().split('\n').pop()!) as T) : reject(new Error(`${file} exited with ${code}`))));
+  });
+}
+
 /**
  * Starts a bench server script (bench/<file>) in a process of its own, bundled with esbuild the way
  * `npm start` runs the server (scripts/bundle-server.mjs), and waits for the one JSON line it prints

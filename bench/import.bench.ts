@@ -1,8 +1,7 @@
-import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { bundleBenchEntry } from './bench-server';
+import { runBenchEntry } from './bench-server';
 import { round, type Measure } from './measure';
 
 const ROWS = 100_000;
@@ -24,7 +23,7 @@ export function priceCsv(rows: number): string {
  * import itself: run in this process its later rounds had a warm JIT the import's own process never has.
  */
 async function baseline(dir: string, file: string, round: number): Promise<number> {
-  const { seconds } = await runBundled<{ seconds: number }>('import-baseline-run.ts', [dir, file, `baseline-${round}.sqlite`]);
+  const { seconds } = await runBenchEntry<{ seconds: number }>('import-baseline-run.ts', [dir, file, `baseline-${round}.sqlite`]);
   return seconds;
 }
 
@@ -42,23 +41,9 @@ export function median(values: number[]): number {
   return sorted[Math.floor(sorted.length / 2)];
 }
 
-/** Runs bench/<file> (bundled) in a fresh process and returns the JSON of its last line of output. */
-function runBundled<T>(file: string, args: string[]): Promise<T> {
-  const root = path.resolve(__dirname, '..');
-  return bundleBenchEntry(file).then(
-    (bundle) =>
-      new Promise<T>((resolve, reject) => {
-        const child = spawn(process.execPath, [bundle, ...args], { cwd: root, stdio: ['ignore', 'pipe', 'inherit'] });
-        let out = '';
-        child.stdout.on('data', (chunk) => (out += chunk));
-        child.on('exit', (code) => (code === 0 ? resolve(JSON.parse(out.trim().split('\n').pop()!) as T) : reject(new Error(`${file} exited with ${code}`))));
-      }),
-  );
-}
-
 /** The real import in a process of its own, so its peak RSS is the import's alone (bench/import-run.ts, bundled). */
 export function realImport(dir: string, file: string, databaseUrl?: string): Promise<{ seconds: number; cpuSeconds: number; peakRssMb: number; rows: number }> {
-  return runBundled('import-run.ts', [dir, file, ...(databaseUrl ? [databaseUrl] : [])]);
+  return runBenchEntry('import-run.ts', [dir, file, ...(databaseUrl ? [databaseUrl] : [])]);
 }
 
 export async function run(): Promise<Measure[]> {
