@@ -7,6 +7,7 @@ import { AppError } from '../lib/errors';
 import { decodeCsv, readCsv } from './csv-file';
 import { fieldsOf, matchHeaders, toSnake, type HeaderMatch } from './header-map';
 import type { ImportRowError } from './import.entity';
+import { KeyIndex } from './key-index';
 import { PriceColumn } from './price-number';
 import { priceRowSchema, quickPriceFields, quickPriceRow, type PriceRow } from './price-row';
 import { todayIso } from '../catalog/dates';
@@ -151,7 +152,6 @@ export function* parseSteps(
   const rows: ParsedRow[] = [];
   const errors: ImportRowError[] = [];
   let errorsTotal = 0;
-  const firstLineOfKey = new Map<string, number>();
   let header: HeaderMatch | undefined;
   let headers: string[] = [];
   let presentFields: string[] = [];
@@ -199,7 +199,8 @@ export function* parseSteps(
       const values = result.data;
       const nameless = MODEL_FIELDS.find((f) => typeof values[f] === 'string' && !hasModelCharacters(values[f] as string));
       const key = nameless ? '' : keyOf(kind, values);
-      const first = firstLineOfKey.get(key);
+      // Records the key as this row's when it is new: the row is then taken (below).
+      const first = nameless ? undefined : firstLineOfKey.firstLineOr(key, line);
       if (nameless) {
         rowErrors.push({ row: line, column: columnOf(nameless), value: input[nameless] ?? '', message: 'a model needs at least one letter or digit' });
       } else if (first !== undefined) {
@@ -207,7 +208,6 @@ export function* parseSteps(
         const what = kind === 'prices' ? 'the same model and effective date as' : 'a duplicate of';
         rowErrors.push({ row: line, column: columnOf(field), value: input[field] ?? '', message: `${what} row ${first}` });
       } else {
-        firstLineOfKey.set(key, line);
         rows.push({ line, key, values: kind === 'prices' ? values : pick(values, presentFields) });
       }
     }
@@ -237,6 +237,8 @@ export function* parseSteps(
   yield { rows, rejected };
   if (!header) throw new AppError('empty-file', 'The file holds no header row.', 422);
   if (rowCount === 0) throw new AppError('empty-file', 'The file has a header but no rows.', 422, { foundColumns: header.foundColumns });
+  // The first line of each valid row's key (validate and the quick path below), sized for the file.
+  const firstLineOfKey = new KeyIndex(pendingCells.length);
 
   let decimalConvention: DecimalConvention | null = null;
   let decimalSource: DecimalSource | null = null;
@@ -252,8 +254,7 @@ export function* parseSteps(
     const day = today ?? todayIso();
     quickRow = (input) => quickPriceRow(input, day, decimalConvention);
     quickPriceCells = quickPriceRowAt(header, column, decimalConvention, day, (i, key, values) => {
-      if (firstLineOfKey.has(key)) return false;
-      firstLineOfKey.set(key, pendingLines[i]);
+      if (firstLineOfKey.firstLineOr(key, pendingLines[i]) !== undefined) return false;
       rows.push({ line: pendingLines[i], key, values });
       return true;
     });
