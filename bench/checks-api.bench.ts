@@ -4,6 +4,7 @@ import { readFileSync } from 'node:fs';
 // @ts-ignore
 import autocannon from 'autocannon';
 import { startBenchServer } from './bench-server';
+import { processCpuS } from './process-cpu';
 import { round, type Measure } from './measure';
 
 const CONNECTIONS = 50;
@@ -13,13 +14,39 @@ const RATE_ROUNDS = 3;
 
 interface CannonResult {
   latency: { p99: number };
-  requests: { average: number };
+  requests: { average: number; total: number };
   non2xx: number;
   errors: number;
 }
 
 const cannon = (opts: Record<string, unknown>) =>
   autocannon({ connections: CONNECTIONS, duration: DURATION_S, ...opts }) as Promise<CannonResult>;
+
+/** A cannon run beside the server's CPU time per request in it (µs, from /proc): steadier than a rate on a shared machine. */
+type Round = CannonResult & { cpuUs: number };
+
+async function measuredRound(pid: number, opts: Record<string, unknown>): Promise<Round> {
+  const before = processCpuS(pid);
+  const result = await cannon(opts);
+  return { ...result, cpuUs: ((processCpuS(pid) - before) * 1e6) / Math.max(result.requests.total, 1) };
+}
+
+const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
+
+/** Health and checks rounds' mean rates and CPU per request, and the two ratios (checks ÷ health). */
+function compare(health: Round[], checks: Round[]) {
+  const healthRps = mean(health.map((r) => r.requests.average));
+  const checksRps = mean(checks.map((r) => r.requests.average));
+  const healthCpuUs = mean(health.map((r) => r.cpuUs));
+  const checksCpuUs = mean(checks.map((r) => r.cpuUs));
+  const rates = (rounds: Round[]) => rounds.map((r) => round(r.requests.average, 0)).join(', ');
+  return {
+    healthRps,
+    checksRps,
+    cpu: `server CPU per request ${round(healthCpuUs, 0)} µs health, ${round(checksCpuUs, 0)} µs checks (ratio ${round(healthCpuUs / checksCpuUs, 3)})`,
+    rounds: `health ${rates(health)}; checks ${rates(checks)} req/s`,
+  };
+}
 
 /** Resident set size of a process in MB, from /proc (Linux). */
 function rssMbOf(pid: number): number | undefined {
@@ -70,14 +97,13 @@ async function floorRates(answer: string, headers: Record<string, string>, paylo
     const base = `http://127.0.0.1:${info.port}`;
     const post = { url: `${base}/api/checks`, method: 'POST', headers, body: payload };
     await cannon({ ...post, duration: 3 });
-    const health: number[] = [];
-    const checks: number[] = [];
+    const health: Round[] = [];
+    const checks: Round[] = [];
     for (let i = 0; i < RATE_ROUNDS; i++) {
-      health.push(round((await cannon({ url: `${base}/api/health` })).requests.average, 0));
-      checks.push(round((await cannon(post)).requests.average, 0));
+      health.push(await measuredRound(child.pid!, { url: `${base}/api/health` }));
+      checks.push(await measuredRound(child.pid!, post));
     }
-    const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
-    return { health, checks, healthRps: mean(health), checksRps: mean(checks) };
+    return compare(health, checks);
   } finally {
     child.kill('SIGTERM');
   }
@@ -98,16 +124,15 @@ export async function run(): Promise<Measure[]> {
     await cannon({ url: `${base}/api/checks`, method: 'POST', headers, body: payload, duration: 3 });
     // Alternating rounds of each: a burst of other work on a shared machine then weighs on both rates,
     // and on two shared cores one 10-second rate moves by 10-30 %, so the ratio is the mean of RATE_ROUNDS.
-    const healthRounds: CannonResult[] = [];
-    const checkRounds: CannonResult[] = [];
+    const healthRounds: Round[] = [];
+    const checkRounds: Round[] = [];
     for (let i = 0; i < RATE_ROUNDS; i++) {
-      healthRounds.push(await cannon({ url: `${base}/api/health` }));
-      checkRounds.push(await cannon({ url: `${base}/api/checks`, method: 'POST', headers, body: payload }));
+      healthRounds.push(await measuredRound(child.pid!, { url: `${base}/api/health` }));
+      checkRounds.push(await measuredRound(child.pid!, { url: `${base}/api/checks`, method: 'POST', headers, body: payload }));
     }
     const [health, checks] = [healthRounds[0], checkRounds[0]];
-    const meanRps = (rounds: CannonResult[]) => rounds.reduce((sum, r) => sum + r.requests.average, 0) / rounds.length;
-    const healthRps = meanRps(healthRounds);
-    const checksRps = meanRps(checkRounds);
+    const real = compare(healthRounds, checkRounds);
+    const { healthRps, checksRps } = real;
     // The same checks while an admin commits 500-row price files back to back (issue 8, fault 6).
     const stop = { done: false };
     const loop = commitLoop(base, adminToken, stop);
@@ -119,7 +144,6 @@ export async function run(): Promise<Measure[]> {
     const floor = await floorRates(answer, headers, payload);
     const note = `${CONNECTIONS} connections × ${DURATION_S} s on loopback after a 3 s warm-up; server in its own process, autocannon in the bench process`;
     const failures = checkRounds.reduce((sum, r) => sum + r.non2xx + r.errors, 0);
-    const rates = (rounds: CannonResult[]) => rounds.map((r) => round(r.requests.average, 0)).join(', ');
     return [
       {
         id: 'api.checks.p99-ms',
@@ -135,7 +159,7 @@ export async function run(): Promise<Measure[]> {
         unit: 'req/s',
         baseline: round(healthRps, 0),
         ratio: round(checksRps / healthRps, 3),
-        note: `${note}; mean of ${RATE_ROUNDS} alternating rounds (health ${rates(healthRounds)}; checks ${rates(checkRounds)} req/s); baseline GET /api/health; target ratio ≥ 0.6${failures ? `; ${failures} failed requests` : ''}`,
+        note: `${note}; mean of ${RATE_ROUNDS} alternating rounds (${real.rounds}); ${real.cpu}; baseline GET /api/health; target ratio ≥ 0.6${failures ? `; ${failures} failed requests` : ''}`,
       },
       {
         id: 'api.checks.during-commits.p99-ms',
@@ -151,7 +175,7 @@ export async function run(): Promise<Measure[]> {
         unit: 'req/s',
         baseline: round(floor.healthRps, 0),
         ratio: round(floor.checksRps / floor.healthRps, 3),
-        note: `${note}; the app's middleware answering POST /api/checks with this run's answer and no work (bench/checks-floor-server.ts): the highest checks ÷ health ratio any handler can reach here; mean of ${RATE_ROUNDS} alternating rounds (health ${floor.health.join(', ')}; checks ${floor.checks.join(', ')} req/s)`,
+        note: `${note}; the app's middleware answering POST /api/checks with this run's answer and no work (bench/checks-floor-server.ts): the highest checks ÷ health ratio any handler can reach here; mean of ${RATE_ROUNDS} alternating rounds (${floor.rounds}); ${floor.cpu}`,
       },
       ...(rssMb === undefined
         ? []
